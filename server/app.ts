@@ -1,0 +1,71 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { Router } from 'express';
+import { toNodeHandler } from 'better-auth/node';
+import { pinoHttp } from 'pino-http';
+import type { ViteDevServer } from 'vite';
+import type { AppContext } from './context';
+import { securityHeaders } from './security-headers';
+import { CLIENT_IP_HEADER } from './auth/auth';
+import { loadSession } from './middleware/authenticate';
+import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { healthRoutes } from './routes/health';
+import { meRoutes } from './modules/me/me.routes';
+import { companyRoutes } from './modules/company/company.routes';
+import { teamRoutes } from './modules/team/team.routes';
+
+export type AppOptions = {
+  /** Built client (vite build output) to serve; omitted in API-only tests. */
+  clientDir?: string;
+  /** Vite in middleware mode, for `npm run dev`. */
+  vite?: ViteDevServer;
+};
+
+export function createApp(ctx: AppContext, options: AppOptions = {}) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', parseTrustProxy(ctx.config.TRUST_PROXY));
+  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(securityHeaders(ctx.config, { dev: Boolean(options.vite) }));
+
+  // better-auth reads the raw body itself, so it is mounted before express.json().
+  app.all('/api/auth/*splat', (req, _res, next) => {
+    req.headers[CLIENT_IP_HEADER] = req.ip ?? '';
+    next();
+  }, toNodeHandler(ctx.auth));
+
+  const api = Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(healthRoutes(ctx));
+  api.use(loadSession(ctx));
+  api.use(meRoutes(ctx));
+  api.use(companyRoutes(ctx));
+  api.use(teamRoutes(ctx));
+  api.use(notFoundApi);
+  app.use('/api', api);
+
+  if (options.vite) {
+    app.use(options.vite.middlewares);
+  } else if (options.clientDir && fs.existsSync(options.clientDir)) {
+    const indexHtml = path.join(options.clientDir, 'index.html');
+    // Hashed assets never change under the same name, so they may be cached for a year.
+    app.use('/assets', express.static(path.join(options.clientDir, 'assets'), { immutable: true, maxAge: '1y', index: false }));
+    app.use(express.static(options.clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(indexHtml);
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}
+
+function parseTrustProxy(value: string): boolean | number | string {
+  if (value === 'true' || value === 'false') return value === 'true';
+  return /^\d+$/.test(value) ? Number(value) : value;
+}

@@ -1,0 +1,39 @@
+import { betterAuth } from 'better-auth';
+import { drizzleAdapter } from 'better-auth/adapters/drizzle';
+import type { NodePgDatabase } from 'drizzle-orm/node-postgres';
+import * as schema from '../db/schema/index';
+import type { AppConfig } from '../config';
+
+export const CLIENT_IP_HEADER = 'x-lifeplate-client-ip';
+
+export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig) {
+  return betterAuth({
+    appName: 'Lifeplate',
+    baseURL: config.BASE_URL,
+    basePath: '/api/auth',
+    secret: config.BETTER_AUTH_SECRET,
+    trustedOrigins: [config.BASE_URL],
+    database: drizzleAdapter(db, { provider: 'pg', usePlural: true, schema }),
+    emailAndPassword: { enabled: true, minPasswordLength: 10, autoSignIn: true },
+    session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+    rateLimit: {
+      enabled: true,
+      storage: 'database',
+      window: 60,
+      max: 300,
+      customRules: {
+        '/sign-in/email': { window: 60, max: config.SIGN_IN_RATE_LIMIT },
+        '/sign-up/email': { window: 60, max: config.SIGN_IN_RATE_LIMIT },
+      },
+    },
+    advanced: {
+      useSecureCookies: config.BASE_URL.startsWith('https://'),
+      database: { generateId: 'uuid' },
+      // Set by our own middleware from Express's req.ip (which honours TRUST_PROXY); any client-sent value is replaced.
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+    },
+    telemetry: { enabled: false },
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

@@ -1,0 +1,14 @@
+import type pg from 'pg';
+import type { Logger } from 'pino';
+import type { Auth } from './auth/auth';
+import type { AppConfig } from './config';
+import type { Db } from './db/client';
+
+/** Everything a request handler may need, built once at boot and passed down explicitly (no module singletons). */
+export type AppContext = {
+  config: AppConfig;
+  db: Db;
+  pool: pg.Pool;
+  auth: Auth;
+  logger: Logger;
+};

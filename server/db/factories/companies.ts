@@ -1,0 +1,18 @@
+import type { DbOrTx } from '../client';
+import { companies } from '../schema/index';
+import { fakerFor } from './faker';
+import { pickInvented, INVENTED_COMPANY_NAMES } from './invented-names';
+
+export async function insertCompany(db: DbOrTx, overrides: Partial<typeof companies.$inferInsert> = {}) {
+  const f = fakerFor();
+  const [company] = await db
+    .insert(companies)
+    .values({
+      name: `${pickInvented(f, INVENTED_COMPANY_NAMES)} ${f.string.alphanumeric(4).toUpperCase()}`,
+      phone: `555-01${f.number.int({ min: 10, max: 99 })}`,
+      timeZone: 'America/New_York',
+      ...overrides,
+    })
+    .returning();
+  return company;
+}

@@ -1,0 +1,34 @@
+import { pgEnum, pgTable, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { users } from './auth';
+import { createdAt, id, updatedAt } from './columns';
+import { MEMBER_ROLES } from '../../../shared/schemas/roles';
+
+export const memberRole = pgEnum('member_role', MEMBER_ROLES);
+
+export const companies = pgTable('companies', {
+  id: id(),
+  name: text('name').notNull(),
+  phone: text('phone').notNull(),
+  timeZone: text('time_zone').notNull().default('America/New_York'),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const memberships = pgTable(
+  'memberships',
+  {
+    id: id(),
+    companyId: uuid('company_id')
+      .notNull()
+      .references(() => companies.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    role: memberRole('role').notNull(),
+    deactivatedAt: timestamp('deactivated_at', { withTimezone: true }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  // One company per user keeps "which tenant am I acting for" unambiguous.
+  (t) => [uniqueIndex('memberships_user_uq').on(t.userId), index('memberships_company_idx').on(t.companyId)],
+);

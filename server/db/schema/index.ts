@@ -1,0 +1,4 @@
+export * from './auth';
+export * from './companies';
+export * from './records';
+export * from './catalog';

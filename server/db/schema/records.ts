@@ -1,0 +1,323 @@
+import { sql } from 'drizzle-orm';
+import {
+  bigserial,
+  boolean,
+  date,
+  index,
+  integer,
+  jsonb,
+  numeric,
+  pgEnum,
+  pgTable,
+  smallint,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+  type AnyPgColumn,
+} from 'drizzle-orm/pg-core';
+import * as E from '../../../shared/schemas/enums';
+import { users } from './auth';
+import { companies } from './companies';
+import { createdAt, createdBy, id, updatedAt, updatedBy } from './columns';
+
+export const applianceKind = pgEnum('appliance_kind', E.APPLIANCE_KINDS);
+export const fuel = pgEnum('fuel', E.FUELS);
+export const construction = pgEnum('construction', E.CONSTRUCTIONS);
+export const ignitionType = pgEnum('ignition_type', E.IGNITION_TYPES);
+export const ventType = pgEnum('vent_type', E.VENT_TYPES);
+export const applianceStatus = pgEnum('appliance_status', E.APPLIANCE_STATUSES);
+export const customerKind = pgEnum('customer_kind', E.CUSTOMER_KINDS);
+export const visitType = pgEnum('visit_type', E.VISIT_TYPES);
+export const visitStatus = pgEnum('visit_status', E.VISIT_STATUSES);
+export const visitOutcome = pgEnum('visit_outcome', E.VISIT_OUTCOMES);
+export const timelineKind = pgEnum('timeline_kind', E.TIMELINE_KINDS);
+
+const companyId = () =>
+  uuid('company_id')
+    .notNull()
+    .references(() => companies.id, { onDelete: 'cascade' });
+
+export const customers = pgTable(
+  'customers',
+  {
+    id: id(),
+    companyId: companyId(),
+    name: text('name').notNull(),
+    kind: customerKind('kind').notNull().default('homeowner'),
+    phone: text('phone'),
+    email: text('email'),
+    remindersOptOut: boolean('reminders_opt_out').notNull().default(false),
+    notes: text('notes'),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdBy(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [
+    index('customers_company_name_idx').on(t.companyId, t.name, t.id),
+    index('customers_name_trgm_idx').using('gin', sql`${t.name} gin_trgm_ops`),
+    index('customers_phone_idx').on(t.companyId, t.phone),
+  ],
+);
+
+export const homeownerAccounts = pgTable(
+  'homeowner_accounts',
+  {
+    id: id(),
+    companyId: companyId(),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    customerId: uuid('customer_id')
+      .notNull()
+      .references(() => customers.id, { onDelete: 'cascade' }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('homeowner_accounts_user_customer_uq').on(t.userId, t.customerId)],
+);
+
+export const sites = pgTable(
+  'sites',
+  {
+    id: id(),
+    companyId: companyId(),
+    customerId: uuid('customer_id')
+      .notNull()
+      .references(() => customers.id, { onDelete: 'restrict' }),
+    street: text('street').notNull(),
+    town: text('town').notNull(),
+    postalCode: text('postal_code'),
+    accessNotes: text('access_notes'),
+    assignedTechnicianId: uuid('assigned_technician_id').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdBy(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [
+    index('sites_company_customer_idx').on(t.companyId, t.customerId),
+    index('sites_street_trgm_idx').using('gin', sql`${t.street} gin_trgm_ops`),
+    index('sites_company_town_idx').on(t.companyId, t.town),
+  ],
+);
+
+export const appliances = pgTable(
+  'appliances',
+  {
+    id: id(),
+    companyId: companyId(),
+    siteId: uuid('site_id')
+      .notNull()
+      .references(() => sites.id, { onDelete: 'restrict' }),
+    kind: applianceKind('kind').notNull(),
+    fuel: fuel('fuel').notNull(),
+    construction: construction('construction').notNull(),
+    manufacturer: text('manufacturer'),
+    model: text('model'),
+    serial: text('serial'),
+    inputBtuh: integer('input_btuh'),
+    firingRateGph: numeric('firing_rate_gph', { precision: 5, scale: 2, mode: 'number' }),
+    grossOutputBtuh: integer('gross_output_btuh'),
+    mawpPsi: numeric('mawp_psi', { precision: 6, scale: 1, mode: 'number' }),
+    manufacturedMonth: smallint('manufactured_month'),
+    manufacturedYear: smallint('manufactured_year'),
+    installedOn: date('installed_on'),
+    location: text('location'),
+    ignitionType: ignitionType('ignition_type').notNull(),
+    burnerCount: smallint('burner_count'),
+    ventType: ventType('vent_type').notNull(),
+    status: applianceStatus('status').notNull().default('in_service'),
+    replacedById: uuid('replaced_by_id').references((): AnyPgColumn => appliances.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdBy(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [
+    index('appliances_company_site_idx').on(t.companyId, t.siteId),
+    index('appliances_serial_trgm_idx').using('gin', sql`${t.serial} gin_trgm_ops`),
+  ],
+);
+
+export const components = pgTable(
+  'components',
+  {
+    id: id(),
+    companyId: companyId(),
+    applianceId: uuid('appliance_id')
+      .notNull()
+      .references(() => appliances.id, { onDelete: 'cascade' }),
+    typeCode: text('type_code').notNull(),
+    description: text('description'),
+    spec: jsonb('spec').$type<Record<string, string | number>>().notNull().default({}),
+    /** The spec formatted for stock counts, e.g. "24 in"; kept beside spec so grouping is a plain GROUP BY. */
+    specKey: text('spec_key').notNull().default(''),
+    installedOn: date('installed_on'),
+    originalWithAppliance: boolean('original_with_appliance').notNull().default(false),
+    note: text('note'),
+    conditionFailed: boolean('condition_failed').notNull().default(false),
+    conditionNote: text('condition_note'),
+    lastInspectedOn: date('last_inspected_on'),
+    removedOn: date('removed_on'),
+    removalReason: text('removal_reason'),
+    replacedById: uuid('replaced_by_id').references((): AnyPgColumn => components.id, { onDelete: 'set null' }),
+    dueOn: date('due_on'),
+    dueKind: text('due_kind').$type<'inspection' | 'replacement'>(),
+    dueReason: text('due_reason'),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdBy(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [
+    index('components_appliance_idx').on(t.applianceId),
+    index('components_company_due_idx').on(t.companyId, t.dueOn, t.id).where(sql`${t.removedOn} is null`),
+  ],
+);
+
+export type ChecklistItemTemplate = {
+  key: string;
+  section: string;
+  label: string;
+  caution?: string;
+  readings?: string[];
+};
+
+export type ChecklistItemRecord = ChecklistItemTemplate & {
+  mark: E.CheckMark | null;
+  note: string;
+};
+
+export const checklistTemplates = pgTable(
+  'checklist_templates',
+  {
+    id: id(),
+    companyId: companyId(),
+    name: text('name').notNull(),
+    applianceKind: applianceKind('appliance_kind').notNull(),
+    fuel: fuel('fuel'),
+    items: jsonb('items').$type<ChecklistItemTemplate[]>().notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [index('checklist_templates_company_idx').on(t.companyId, t.applianceKind)],
+);
+
+export const visits = pgTable(
+  'visits',
+  {
+    id: id(),
+    companyId: companyId(),
+    applianceId: uuid('appliance_id')
+      .notNull()
+      .references(() => appliances.id, { onDelete: 'cascade' }),
+    type: visitType('type').notNull(),
+    status: visitStatus('status').notNull().default('draft'),
+    visitedOn: date('visited_on').notNull(),
+    technicianIds: uuid('technician_ids').array().notNull().default(sql`'{}'::uuid[]`),
+    arrivedAt: timestamp('arrived_at', { withTimezone: true }),
+    departedAt: timestamp('departed_at', { withTimezone: true }),
+    checklist: jsonb('checklist').$type<ChecklistItemRecord[]>().notNull().default([]),
+    readings: jsonb('readings').$type<Record<string, unknown>>().notNull().default({}),
+    results: jsonb('results').$type<Record<string, unknown>>().notNull().default({}),
+    findings: text('findings').notNull().default(''),
+    recommendations: text('recommendations').notNull().default(''),
+    internalNotes: text('internal_notes').notNull().default(''),
+    outcome: visitOutcome('outcome'),
+    outcomeReason: text('outcome_reason'),
+    outcomeToldWhom: text('outcome_told_whom'),
+    outcomeToldAt: timestamp('outcome_told_at', { withTimezone: true }),
+    signedOffBy: uuid('signed_off_by').references(() => users.id, { onDelete: 'set null' }),
+    signedOffAt: timestamp('signed_off_at', { withTimezone: true }),
+    customerAckName: text('customer_ack_name'),
+    completedAt: timestamp('completed_at', { withTimezone: true }),
+    revision: integer('revision').notNull().default(0),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdBy(),
+    updatedBy: updatedBy(),
+  },
+  (t) => [index('visits_appliance_idx').on(t.applianceId, t.visitedOn), index('visits_company_idx').on(t.companyId, t.status)],
+);
+
+export const visitAmendments = pgTable(
+  'visit_amendments',
+  {
+    id: id(),
+    companyId: companyId(),
+    visitId: uuid('visit_id')
+      .notNull()
+      .references(() => visits.id, { onDelete: 'cascade' }),
+    reason: text('reason').notNull(),
+    changes: jsonb('changes').$type<Record<string, unknown>>().notNull(),
+    createdAt: createdAt(),
+    createdBy: createdBy(),
+  },
+  (t) => [index('visit_amendments_visit_idx').on(t.visitId, t.createdAt)],
+);
+
+export const partSwaps = pgTable(
+  'part_swaps',
+  {
+    id: id(),
+    companyId: companyId(),
+    visitId: uuid('visit_id')
+      .notNull()
+      .references(() => visits.id, { onDelete: 'cascade' }),
+    applianceId: uuid('appliance_id')
+      .notNull()
+      .references(() => appliances.id, { onDelete: 'cascade' }),
+    removedComponentId: uuid('removed_component_id')
+      .notNull()
+      .references(() => components.id, { onDelete: 'cascade' }),
+    newComponentId: uuid('new_component_id')
+      .notNull()
+      .references(() => components.id, { onDelete: 'cascade' }),
+    swappedOn: date('swapped_on').notNull(),
+    reason: text('reason'),
+    createdAt: createdAt(),
+    createdBy: createdBy(),
+  },
+  (t) => [index('part_swaps_visit_idx').on(t.visitId)],
+);
+
+/** Append-only: one row per thing that happened to an appliance, written in the same transaction as the record. */
+export const timelineEvents = pgTable(
+  'timeline_events',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    companyId: companyId(),
+    applianceId: uuid('appliance_id')
+      .notNull()
+      .references(() => appliances.id, { onDelete: 'cascade' }),
+    occurredAt: timestamp('occurred_at', { withTimezone: true }).notNull(),
+    kind: timelineKind('kind').notNull(),
+    refId: uuid('ref_id'),
+    summary: text('summary').notNull(),
+    data: jsonb('data').$type<Record<string, unknown>>().notNull().default({}),
+    homeownerVisible: boolean('homeowner_visible').notNull().default(true),
+    actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index('timeline_appliance_time_idx').on(t.applianceId, t.occurredAt.desc(), t.id.desc()),
+    index('timeline_appliance_kind_time_idx').on(t.applianceId, t.kind, t.occurredAt.desc(), t.id.desc()),
+  ],
+);
+
+export const auditLog = pgTable(
+  'audit_log',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    companyId: companyId(),
+    actorId: uuid('actor_id').references(() => users.id, { onDelete: 'set null' }),
+    action: text('action').notNull(),
+    entity: text('entity').notNull(),
+    entityId: text('entity_id').notNull(),
+    changes: jsonb('changes').$type<Record<string, unknown>>(),
+    at: createdAt(),
+  },
+  (t) => [index('audit_log_entity_idx').on(t.companyId, t.entity, t.entityId, t.at)],
+);

@@ -1,0 +1,39 @@
+import { eq } from 'drizzle-orm';
+import type { Db } from '../client';
+import { companies } from '../schema/index';
+import { insertCompany } from '../factories/companies';
+import { insertHomeowner, insertMember } from '../factories/users';
+import { insertCustomer } from '../factories/records';
+import { DEMO_COMPANY, DEMO_HOMEOWNER, DEMO_MEMBERS, DEMO_PASSWORD, OTHER_COMPANY } from './demo-accounts';
+import { seedDemoRecords } from './demo-records';
+
+/** Seeds the invented demo scenario once; a second run finds the demo company and does nothing. */
+export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
+  const [existing] = await db.select({ id: companies.id }).from(companies).where(eq(companies.name, DEMO_COMPANY.name)).limit(1);
+  if (existing) return { seeded: false };
+
+  await db.transaction(async (tx) => {
+    const demo = await insertCompany(tx, DEMO_COMPANY);
+    const other = await insertCompany(tx, OTHER_COMPANY);
+    const userIds: Record<string, string> = {};
+    for (const m of DEMO_MEMBERS) {
+      const { user } = await insertMember(tx, {
+        companyId: m.company === 'demo' ? demo.id : other.id,
+        role: m.role,
+        email: m.email,
+        name: m.name,
+        password: DEMO_PASSWORD,
+      });
+      userIds[m.email] = user.id;
+    }
+    const homeownerCustomer = await insertCustomer(tx, {
+      companyId: demo.id,
+      name: DEMO_HOMEOWNER.name,
+      email: DEMO_HOMEOWNER.email,
+      phone: '555-0110',
+    });
+    await insertHomeowner(tx, { companyId: demo.id, customerId: homeownerCustomer.id, ...DEMO_HOMEOWNER, password: DEMO_PASSWORD });
+    await seedDemoRecords(tx, { demoCompanyId: demo.id, otherCompanyId: other.id, homeownerCustomerId: homeownerCustomer.id, userIds });
+  });
+  return { seeded: true };
+}

@@ -1,0 +1,32 @@
+import type { AppContext } from '../../context';
+import { notFound } from '../../lib/http-error';
+import { companyRepository } from './company.repository';
+import { todayInTimeZone } from '../../../shared/dates';
+import type { CompanyDto, CompanySettingsInput } from '../../../shared/schemas/company';
+import { recordAudit } from '../audit/audit.repository';
+
+const toDto = (c: { id: string; name: string; phone: string; timeZone: string }): CompanyDto => ({
+  id: c.id,
+  name: c.name,
+  phone: c.phone,
+  timeZone: c.timeZone,
+  today: todayInTimeZone(c.timeZone),
+});
+
+export function companyService(ctx: AppContext) {
+  return {
+    async get(companyId: string) {
+      const company = await companyRepository.findById(ctx.db, companyId);
+      if (!company) throw notFound('Company');
+      return toDto(company);
+    },
+    async update(companyId: string, actorId: string, input: CompanySettingsInput) {
+      return ctx.db.transaction(async (tx) => {
+        const company = await companyRepository.update(tx, companyId, input);
+        if (!company) throw notFound('Company');
+        await recordAudit(tx, { companyId, actorId, action: 'update', entity: 'company', entityId: companyId, changes: input });
+        return toDto(company);
+      });
+    },
+  };
+}

@@ -1,0 +1,16 @@
+import { Router } from 'express';
+import type { AppContext } from '../context';
+import { defineRoute } from '../lib/route';
+
+export function healthRoutes(ctx: AppContext) {
+  const router = Router();
+  defineRoute(router, 'get', '/health', { access: 'public' }, async (_input, _req, res) => {
+    try {
+      await ctx.pool.query('select 1');
+      return { status: 'ok', db: 'ok' };
+    } catch {
+      res.status(503).json({ status: 'degraded', db: 'unreachable' });
+    }
+  });
+  return router;
+}

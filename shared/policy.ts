@@ -1,0 +1,31 @@
+import type { MemberRole, Principal } from './schemas/roles';
+
+/** The role table from the product brief, in one place, used by the server (enforcing) and the client (hiding). */
+export const PERMISSIONS = {
+  'records:read': ['owner', 'manager', 'technician'],
+  'records:write': ['owner', 'manager', 'technician'],
+  'visits:record': ['owner', 'manager', 'technician'],
+  'visits:amend-any': ['owner', 'manager'],
+  'visits:amend-own': ['owner', 'manager', 'technician'],
+  'catalog:manage': ['owner', 'manager'],
+  'share:create': ['owner', 'manager', 'technician'],
+  'share:revoke': ['owner', 'manager'],
+  'reminders:send': ['owner', 'manager'],
+  'team:manage': ['owner', 'manager'],
+  'company:settings': ['owner'],
+} as const satisfies Record<string, readonly MemberRole[]>;
+
+export type Permission = keyof typeof PERMISSIONS;
+
+export function can(principal: Principal | null | undefined, permission: Permission): boolean {
+  if (!principal || principal.kind !== 'member') return false;
+  return (PERMISSIONS[permission] as readonly MemberRole[]).includes(principal.role);
+}
+
+/** Owners manage everyone; managers manage technicians and managers, never owners. */
+export function canManageMemberRole(actor: Principal, targetRole: MemberRole, newRole?: MemberRole): boolean {
+  if (actor.kind !== 'member') return false;
+  if (actor.role === 'owner') return true;
+  if (actor.role !== 'manager') return false;
+  return targetRole !== 'owner' && (newRole === undefined || newRole !== 'owner');
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod';
+import { requiredText } from './common';
+import { MEMBER_ROLES } from './roles';
+
+const timeZones = new Set(Intl.supportedValuesOf('timeZone'));
+
+export const companySettingsInput = z.object({
+  name: requiredText('Company name', 120).optional(),
+  phone: requiredText('Phone', 40).optional(),
+  timeZone: z
+    .string()
+    .refine((tz) => timeZones.has(tz) || tz === 'UTC', 'Pick a time zone from the list, e.g. America/New_York.')
+    .optional(),
+});
+export type CompanySettingsInput = z.infer<typeof companySettingsInput>;
+
+export const memberRoleInput = z.object({ role: z.enum(MEMBER_ROLES, 'Choose owner, manager or technician.') });
+
+export type CompanyDto = { id: string; name: string; phone: string; timeZone: string; today: string };
+export type MemberDto = {
+  id: string;
+  userId: string;
+  name: string;
+  email: string;
+  role: (typeof MEMBER_ROLES)[number];
+  active: boolean;
+};

@@ -1,0 +1,79 @@
+import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { useEffect, useState } from 'react';
+import { LogoMark } from '@/components/ui/logo-mark';
+import { useMe, useSignOut } from '@/lib/auth';
+import { ROLE_LABELS } from '@shared/schemas/roles';
+import { navFor } from './nav';
+
+function useDimMode() {
+  const [dim, setDim] = useState(() => localStorage.getItem('lifeplate:dim') === '1');
+  useEffect(() => {
+    document.documentElement.classList.toggle('dim', dim);
+    localStorage.setItem('lifeplate:dim', dim ? '1' : '0');
+  }, [dim]);
+  return [dim, setDim] as const;
+}
+
+export function AppShell() {
+  const me = useMe();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  const [dim, setDim] = useDimMode();
+  const principal = me.data?.principal;
+  const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';
+
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="no-print sticky top-0 z-10 bg-iron text-plate">
+        <div className="mx-auto flex max-w-5xl items-center gap-3 px-3 py-2 sm:px-6">
+          <NavLink to="/" className="flex min-h-tap items-center gap-2 font-bold" aria-label="Lifeplate home">
+            <LogoMark />
+            <span className="text-lg">Lifeplate</span>
+          </NavLink>
+          <span className="hidden truncate text-sm text-plate/70 sm:inline">{me.data?.company?.name}</span>
+          <div className="ml-auto flex items-center gap-1">
+            <button
+              type="button"
+              onClick={() => setDim(!dim)}
+              aria-pressed={dim}
+              className="min-h-tap min-w-tap rounded-plate px-2 text-sm hover:bg-iron-soft"
+              title="Basement mode: dark, high contrast"
+            >
+              {dim ? '☀ Light' : '◐ Dim'}
+            </button>
+            <button
+              type="button"
+              className="min-h-tap rounded-plate px-3 text-sm font-semibold hover:bg-iron-soft"
+              onClick={async () => {
+                await signOut.mutateAsync();
+                navigate('/sign-in', { replace: true });
+              }}
+            >
+              Sign out
+            </button>
+          </div>
+        </div>
+        <nav aria-label="Main" className="mx-auto flex max-w-5xl gap-1 overflow-x-auto px-2 pb-1 sm:px-5">
+          {navFor(principal).map((item) => (
+            <NavLink
+              key={item.to}
+              to={item.to}
+              end={item.to === '/'}
+              className={({ isActive }) =>
+                `flex min-h-tap items-center whitespace-nowrap rounded-t-plate px-3 font-semibold ${isActive ? 'bg-plate text-iron' : 'text-plate/85 hover:bg-iron-soft'}`
+              }
+            >
+              {item.label}
+            </NavLink>
+          ))}
+          <span className="ml-auto hidden items-center px-2 text-sm text-plate/70 sm:flex">
+            {me.data?.user.name} · {roleLabel}
+          </span>
+        </nav>
+      </header>
+      <main className="flex-1">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

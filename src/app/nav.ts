@@ -1,0 +1,16 @@
+import type { Principal } from '@shared/schemas/roles';
+import { can, type Permission } from '@shared/policy';
+
+type NavItem = { to: string; label: string; permission?: Permission; homeowner?: boolean };
+
+const ITEMS: NavItem[] = [
+  { to: '/', label: 'Home' },
+  { to: '/team', label: 'Team', permission: 'records:read' },
+  { to: '/settings', label: 'Company', permission: 'company:settings' },
+];
+
+export function navFor(principal: Principal | null | undefined): NavItem[] {
+  if (!principal) return [];
+  if (principal.kind === 'homeowner') return [{ to: '/', label: 'My boilers' }];
+  return ITEMS.filter((i) => !i.permission || can(principal, i.permission));
+}

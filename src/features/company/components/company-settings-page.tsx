@@ -1,0 +1,53 @@
+import { useEffect, useState, type FormEvent } from 'react';
+import { Page, Spinner } from '@/components/ui/page';
+import { Card } from '@/components/ui/card';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { useCompany } from '../api/get-company';
+import { useUpdateCompany } from '../api/update-company';
+
+const TIME_ZONES = Intl.supportedValuesOf('timeZone');
+
+export function CompanySettingsPage() {
+  const company = useCompany();
+  const update = useUpdateCompany();
+  const [form, setForm] = useState({ name: '', phone: '', timeZone: '' });
+  useEffect(() => {
+    if (company.data) setForm({ name: company.data.name, phone: company.data.phone, timeZone: company.data.timeZone });
+  }, [company.data]);
+  const details = update.error instanceof ApiError ? update.error.details : undefined;
+
+  async function submit(e: FormEvent) {
+    e.preventDefault();
+    await update.mutateAsync(form).catch(() => {});
+  }
+
+  if (company.isPending) return <Spinner />;
+  return (
+    <Page title="Company settings" subtitle={`Today is ${company.data?.today} in ${company.data?.timeZone}.`}>
+      <Card>
+        <form onSubmit={submit} noValidate className="flex max-w-md flex-col gap-4">
+          {update.isSuccess && <Notice title="Saved">Your changes are saved.</Notice>}
+          <TextField label="Company name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={details?.name} />
+          <TextField label="Phone shown to customers" value={form.phone} onChange={(e) => setForm({ ...form, phone: e.target.value })} error={details?.phone} />
+          <SelectField
+            label="Time zone"
+            hint='Decides what "due today" means.'
+            value={form.timeZone}
+            onChange={(e) => setForm({ ...form, timeZone: e.target.value })}
+            error={details?.timeZone}
+          >
+            {TIME_ZONES.map((tz) => (
+              <option key={tz}>{tz}</option>
+            ))}
+          </SelectField>
+          <Button type="submit" disabled={update.isPending}>
+            {update.isPending ? 'Saving…' : 'Save'}
+          </Button>
+        </form>
+      </Card>
+    </Page>
+  );
+}

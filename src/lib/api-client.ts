@@ -1,0 +1,42 @@
+export type FieldErrors = Record<string, string[]>;
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: FieldErrors,
+  ) {
+    super(message);
+  }
+  /** A network failure (no signal in a basement), as opposed to the server saying no. */
+  get offline() {
+    return this.status === 0;
+  }
+}
+
+type Options = Omit<RequestInit, 'body'> & { body?: unknown; query?: Record<string, string | number | boolean | undefined | null> };
+
+export async function api<T>(path: string, { body, query, headers, ...init }: Options = {}): Promise<T> {
+  const qs = query
+    ? new URLSearchParams(Object.entries(query).filter(([, v]) => v !== undefined && v !== null && v !== '').map(([k, v]) => [k, String(v)])).toString()
+    : '';
+  let res: Response;
+  try {
+    res = await fetch(`/api${path}${qs ? `?${qs}` : ''}`, {
+      credentials: 'same-origin',
+      ...init,
+      headers: { ...(body !== undefined && !(body instanceof FormData) ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'offline', 'No connection. Your work is kept on this device.');
+  }
+  if (res.status === 204) return undefined as T;
+  const data = await res.json().catch(() => null);
+  if (!res.ok) {
+    const err = data?.error ?? data;
+    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `Request failed (${res.status}).`, err?.details);
+  }
+  return data as T;
+}

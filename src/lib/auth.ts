@@ -1,0 +1,36 @@
+/** The signed-in person and sign-in/out, shared by every feature (like bulletproof-react's lib/auth). */
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api, ApiError } from '@/lib/api-client';
+import type { MeDto } from '@shared/schemas/me';
+
+export async function getMe(): Promise<MeDto | null> {
+  try {
+    return await api<MeDto>('/me');
+  } catch (err) {
+    if (err instanceof ApiError && err.status === 401) return null;
+    throw err;
+  }
+}
+
+export const meQueryOptions = () => queryOptions({ queryKey: ['me'], queryFn: getMe, staleTime: 60_000 });
+
+export const useMe = () => useQuery(meQueryOptions());
+
+export type SignInInput = { email: string; password: string };
+
+// better-auth's HTTP endpoints, called directly so its client library stays out of the bundle.
+export const signIn = (input: SignInInput) => api<unknown>('/auth/sign-in/email', { method: 'POST', body: input });
+export const signOut = () => api<unknown>('/auth/sign-out', { method: 'POST', body: {} });
+
+export function useSignIn() {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: signIn, onSuccess: () => qc.invalidateQueries({ queryKey: ['me'] }) });
+}
+
+export function useSignOut() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: signOut,
+    onSuccess: () => qc.clear(),
+  });
+}
