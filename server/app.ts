@@ -51,13 +51,12 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   if (options.vite) {
     app.use(options.vite.middlewares);
   } else if (options.clientDir && fs.existsSync(options.clientDir)) {
-    const indexHtml = path.join(options.clientDir, 'index.html');
     // Hashed assets never change under the same name, so they may be cached for a year.
     app.use('/assets', express.static(path.join(options.clientDir, 'assets'), { immutable: true, maxAge: '1y', index: false }));
     app.use(express.static(options.clientDir, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {
       res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(indexHtml);
+      res.sendFile('index.html', { root: options.clientDir });
     });
   }
 

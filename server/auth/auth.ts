@@ -33,6 +33,7 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig)
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     },
     telemetry: { enabled: false },
+    logger: { disabled: config.LOG_LEVEL === 'silent' },
   });
 }
 

@@ -19,6 +19,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (err?.type === 'entity.too.large') {
     status = 413;
     body = { code: 'too_large', message: 'The request body is too large.' };
+  } else if (Number.isInteger(err?.status) && err.status >= 400 && err.status < 500) {
+    status = err.status;
+    body = { code: 'http_error', message: err.expose ? err.message : 'The request was not accepted.' };
   }
   if (status >= 500) req.log?.error({ err }, 'request failed');
   res.status(status).json({ error: body });

@@ -1,15 +1,11 @@
 /** The signed-in person and sign-in/out, shared by every feature (like bulletproof-react's lib/auth). */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api, ApiError } from '@/lib/api-client';
+import { api } from '@/lib/api-client';
 import type { MeDto } from '@shared/schemas/me';
 
 export async function getMe(): Promise<MeDto | null> {
-  try {
-    return await api<MeDto>('/me');
-  } catch (err) {
-    if (err instanceof ApiError && err.status === 401) return null;
-    throw err;
-  }
+  const me = await api<MeDto | { user: null }>('/me');
+  return me.user ? (me as MeDto) : null;
 }
 
 export const meQueryOptions = () => queryOptions({ queryKey: ['me'], queryFn: getMe, staleTime: 60_000 });

@@ -6,8 +6,10 @@ import type { MeDto } from '../../../shared/schemas/me';
 
 export function meRoutes(ctx: AppContext) {
   const router = Router();
-  defineRoute(router, 'get', '/me', { access: 'signed-in' }, async (_i, _req, res): Promise<MeDto> => {
-    const session = res.locals.session!;
+  // Public so that a signed-out browser asks without an error: it learns it is signed out from `user: null`.
+  defineRoute(router, 'get', '/me', { access: 'public' }, async (_i, _req, res): Promise<MeDto | { user: null }> => {
+    const session = res.locals.session;
+    if (!session) return { user: null };
     const principal = res.locals.principal ?? null;
     const company = principal ? await companyRepository.findById(ctx.db, principal.companyId) : null;
     return {

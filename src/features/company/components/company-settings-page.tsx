@@ -1,4 +1,5 @@
-import { useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
+import type { CompanyDto } from '@shared/schemas/company';
 import { Page, Spinner } from '@/components/ui/page';
 import { Card } from '@/components/ui/card';
 import { Button } from '@/components/ui/button';
@@ -12,11 +13,13 @@ const TIME_ZONES = Intl.supportedValuesOf('timeZone');
 
 export function CompanySettingsPage() {
   const company = useCompany();
+  if (company.isPending || !company.data) return <Spinner />;
+  return <CompanySettingsForm company={company.data} />;
+}
+
+function CompanySettingsForm({ company }: { company: CompanyDto }) {
   const update = useUpdateCompany();
-  const [form, setForm] = useState({ name: '', phone: '', timeZone: '' });
-  useEffect(() => {
-    if (company.data) setForm({ name: company.data.name, phone: company.data.phone, timeZone: company.data.timeZone });
-  }, [company.data]);
+  const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone });
   const details = update.error instanceof ApiError ? update.error.details : undefined;
 
   async function submit(e: FormEvent) {
@@ -24,9 +27,8 @@ export function CompanySettingsPage() {
     await update.mutateAsync(form).catch(() => {});
   }
 
-  if (company.isPending) return <Spinner />;
   return (
-    <Page title="Company settings" subtitle={`Today is ${company.data?.today} in ${company.data?.timeZone}.`}>
+    <Page title="Company settings" subtitle={`Today is ${company.today} in ${company.timeZone}.`}>
       <Card>
         <form onSubmit={submit} noValidate className="flex max-w-md flex-col gap-4">
           {update.isSuccess && <Notice title="Saved">Your changes are saved.</Notice>}

@@ -1,0 +1,152 @@
+import type { TradeFlag } from './trade-flag';
+import { inWcToPascal } from './units';
+
+export const VENT_TYPES = ['draft_hood', 'barometric_damper', 'power_vent', 'direct_vent'] as const;
+export type VentType = (typeof VENT_TYPES)[number];
+
+const ANSI_Z21 = 'ANSI Z21 vented-appliance standards, 400 ppm air-free CO (secondary; that Z21.13 boilers use 400 ppm is from memory)';
+const BPI_BANDS = 'from memory: BPI-1200 flue-CO action levels (as-measured CO)';
+const BPI_STANDARDS = 'BPI Technical Standards for the Building Analyst (secondary)';
+
+/** Air-free CO limit for certifying vented heating appliances. A certification limit, not a field action level. */
+export const AIR_FREE_CO_CERTIFICATION_LIMIT_PPM = 400;
+/** Upper ends of the BPI flue-CO bands, as-measured ppm: acceptable, service recommended, service required. */
+export const BPI_FLUE_CO_BANDS_PPM = { acceptable: 25, serviceRecommended: 100, serviceRequired: 400 } as const;
+/** BPI draft test: at least −2.5 to −5 Pa at steady state; the least strict end is used. */
+export const BPI_MIN_DRAFT_PA = -2.5;
+export const BPI_SPILLAGE_LIMIT_SECONDS = 60;
+export const BPI_AMBIENT_CO_ABORT_PPM = 35;
+
+export type CombustionFlagInput = {
+  coPpm: number;
+  coAirFreePpm: number;
+  draftInWc?: number;
+  ambientCoPpm?: number;
+  spillageSeconds?: number;
+  ventType?: VentType;
+};
+
+const NATURAL_DRAFT: readonly VentType[] = ['draft_hood', 'barometric_damper'];
+
+export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
+  const flags: TradeFlag[] = [];
+  const { coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType } = input;
+
+  if (ambientCoPpm !== undefined && ambientCoPpm > BPI_AMBIENT_CO_ABORT_PPM) {
+    flags.push({
+      code: 'ambient_co_stop_work',
+      severity: 'stop',
+      message: `Ambient CO ${ambientCoPpm} ppm is above ${BPI_AMBIENT_CO_ABORT_PPM} ppm: stop the work and get people to fresh air.`,
+      value: ambientCoPpm,
+      threshold: BPI_AMBIENT_CO_ABORT_PPM,
+      unit: 'ppm',
+      source: BPI_STANDARDS,
+    });
+  }
+
+  const spillageFailed =
+    ventType === 'draft_hood' && spillageSeconds !== undefined && spillageSeconds > BPI_SPILLAGE_LIMIT_SECONDS;
+  if (spillageFailed) {
+    flags.push({
+      code: 'spillage_over_limit',
+      severity: 'stop',
+      message: `Draft-hood appliance spilled for ${spillageSeconds} s, more than ${BPI_SPILLAGE_LIMIT_SECONDS} s after start-up.`,
+      value: spillageSeconds,
+      threshold: BPI_SPILLAGE_LIMIT_SECONDS,
+      unit: 's',
+      source: BPI_STANDARDS,
+    });
+  }
+
+  flags.push(...flueCoFlags(coPpm, spillageFailed));
+
+  if (coAirFreePpm > AIR_FREE_CO_CERTIFICATION_LIMIT_PPM) {
+    flags.push({
+      code: 'air_free_co_above_certification_limit',
+      severity: 'warning',
+      message:
+        `Air-free CO ${Math.round(coAirFreePpm)} ppm is above the ${AIR_FREE_CO_CERTIFICATION_LIMIT_PPM} ppm limit used to certify ` +
+        'vented appliances. This is a certification limit, not a field action level.',
+      value: coAirFreePpm,
+      threshold: AIR_FREE_CO_CERTIFICATION_LIMIT_PPM,
+      unit: 'ppm air-free',
+      source: ANSI_Z21,
+    });
+  }
+
+  if (draftInWc !== undefined) flags.push(...draftFlags(draftInWc, ventType));
+
+  if (ventType === undefined && (draftInWc !== undefined || spillageSeconds !== undefined)) {
+    flags.push({
+      code: 'vent_type_not_given',
+      severity: 'info',
+      message: 'Vent type not given, so draft and spillage were not judged.',
+      value: null,
+      threshold: null,
+      unit: null,
+      source: BPI_STANDARDS,
+    });
+  }
+  return flags;
+}
+
+/** BPI bands are applied to CO as measured, not air-free. */
+function flueCoFlags(coPpm: number, spillageFailed: boolean): TradeFlag[] {
+  const bands = BPI_FLUE_CO_BANDS_PPM;
+  const flag = (code: string, severity: TradeFlag['severity'], message: string, threshold: number): TradeFlag[] => [
+    { code, severity, message, value: coPpm, threshold, unit: 'ppm as measured', source: BPI_BANDS },
+  ];
+  if (coPpm > bands.serviceRequired) {
+    return flag('flue_co_stop', 'stop', `Flue CO ${coPpm} ppm is over ${bands.serviceRequired} ppm: stop.`, bands.serviceRequired);
+  }
+  if (coPpm > bands.serviceRecommended && spillageFailed) {
+    return flag(
+      'flue_co_stop',
+      'stop',
+      `Flue CO ${coPpm} ppm is over ${bands.serviceRecommended} ppm with spillage: stop.`,
+      bands.serviceRecommended,
+    );
+  }
+  if (coPpm > bands.serviceRecommended) {
+    return flag('flue_co_service_required', 'warning', `Flue CO ${coPpm} ppm: service required.`, bands.serviceRecommended);
+  }
+  if (coPpm > bands.acceptable) {
+    return flag('flue_co_service_recommended', 'info', `Flue CO ${coPpm} ppm: service recommended.`, bands.acceptable);
+  }
+  return [];
+}
+
+/** Power and direct vents are judged by the manufacturer's instructions, so only natural-draft vents get a flag. */
+function draftFlags(draftInWc: number, ventType: VentType | undefined): TradeFlag[] {
+  if (ventType === undefined || !NATURAL_DRAFT.includes(ventType)) return [];
+  const draftPa = inWcToPascal(draftInWc);
+  if (draftPa > 0) {
+    return [
+      {
+        code: 'draft_positive',
+        severity: 'stop',
+        message: `Positive pressure (${draftInWc} in. w.c.) in a natural-draft vent: flue gas can enter the building.`,
+        value: draftPa,
+        threshold: 0,
+        unit: 'Pa',
+        source: 'common practice',
+      },
+    ];
+  }
+  if (draftPa > BPI_MIN_DRAFT_PA) {
+    return [
+      {
+        code: 'draft_below_minimum',
+        severity: 'warning',
+        message:
+          `Draft ${draftPa.toFixed(1)} Pa (${draftInWc} in. w.c.) is weaker than ${BPI_MIN_DRAFT_PA} Pa. BPI requires at least ` +
+          '−2.5 to −5 Pa at steady state (5–10 minutes of firing); the least strict end is applied here.',
+        value: draftPa,
+        threshold: BPI_MIN_DRAFT_PA,
+        unit: 'Pa',
+        source: BPI_STANDARDS,
+      },
+    ];
+  }
+  return [];
+}

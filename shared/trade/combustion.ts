@@ -1,0 +1,115 @@
+import {
+  AIR_TEMP_RANGE_F,
+  combustionEfficiencyPct,
+  excessAirPctFromO2,
+  MAX_FLUE_TEMP_F,
+} from './combustion-efficiency';
+import { combustionSafetyFlags, VENT_TYPES, type VentType } from './combustion-flags';
+import { co2MaxPct, FUEL_MODELS, METHOD_19_SOURCE, requireFuel, type CombustionFuel } from './fuels';
+import { SIEGERT_BASIS, siegertFlueLossPct, siegertSource } from './siegert';
+import type { TradeFlag } from './trade-flag';
+import { requireNumber, requireOneOf, TradeInputError } from './trade-input-error';
+
+export { TradeInputError } from './trade-input-error';
+
+/** O2 of air as used by Method 19 and the trade formulas for CO2 and air-free CO. */
+const METHOD_19_AIR_O2_PCT = 20.9;
+
+export type CombustionInput = {
+  fuel: CombustionFuel;
+  /** O2 in dry flue gas, %. */
+  o2Pct: number;
+  /** CO in flue gas as measured, ppm. */
+  coPpm: number;
+  flueTempF: number;
+  airTempF: number;
+  /** Draft, in. w.c.; negative is suction. */
+  draftInWc?: number;
+  ambientCoPpm?: number;
+  /** Seconds the appliance spilled flue gas after start-up. */
+  spillageSeconds?: number;
+  ventType?: VentType;
+  condensing?: boolean;
+};
+
+export type CombustionAnalysis = {
+  co2Pct: number;
+  co2MaxPct: number;
+  excessAirPct: number;
+  coAirFreePpm: number;
+  /** % of HHV; null for condensing appliances, where this method does not apply. */
+  efficiencyPct: number | null;
+  efficiencyBasis: string;
+  siegertLossPct: number;
+  siegertBasis: string;
+  flags: TradeFlag[];
+  sources: { co2: string; coAirFree: string; excessAirAndEfficiency: string; siegert: string };
+};
+
+/** CO2 (% dry) from measured O2: CO2max·(20.9 − O2)/20.9. */
+export function co2PctFromO2(fuel: CombustionFuel, o2Pct: number): number {
+  const o2 = requireNumber('o2Pct', o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
+  return (co2MaxPct(fuel) * (METHOD_19_AIR_O2_PCT - o2)) / METHOD_19_AIR_O2_PCT;
+}
+
+/** CO corrected to zero O2 (air-free): CO·20.9/(20.9 − O2). */
+export function airFreeCoPpm(coPpm: number, o2Pct: number): number {
+  const co = requireNumber('coPpm', coPpm, { min: 0 });
+  const o2 = requireNumber('o2Pct', o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
+  // Factor first: it is exactly 1 at 0 % O2 and never below 1, so rounding can't put the result under the reading.
+  return co * (METHOD_19_AIR_O2_PCT / (METHOD_19_AIR_O2_PCT - o2));
+}
+
+export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
+  const fuel = requireFuel('fuel', input.fuel);
+  const o2Pct = requireNumber('o2Pct', input.o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
+  const coPpm = requireNumber('coPpm', input.coPpm, { min: 0 });
+  const airTempF = requireNumber('airTempF', input.airTempF, AIR_TEMP_RANGE_F);
+  const flueTempF = requireNumber('flueTempF', input.flueTempF, { max: MAX_FLUE_TEMP_F });
+  if (flueTempF < airTempF) {
+    throw new TradeInputError('flueTempF', `flue temperature ${flueTempF} °F is below the combustion-air temperature ${airTempF} °F`);
+  }
+  const optional = <T>(value: T | undefined, check: (v: unknown) => T) => (value === undefined ? undefined : check(value));
+  const draftInWc = optional(input.draftInWc, (v) => requireNumber('draftInWc', v));
+  const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireNumber('ambientCoPpm', v, { min: 0 }));
+  const spillageSeconds = optional(input.spillageSeconds, (v) => requireNumber('spillageSeconds', v, { min: 0 }));
+  const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
+  if (input.condensing !== undefined && typeof input.condensing !== 'boolean') {
+    throw new TradeInputError('condensing', `must be true or false, got ${String(input.condensing)}`);
+  }
+  const condensing = input.condensing === true;
+
+  const excessAirPct = excessAirPctFromO2(fuel, o2Pct);
+  const coAirFreePpm = airFreeCoPpm(coPpm, o2Pct);
+  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType });
+  if (condensing) {
+    flags.push({
+      code: 'efficiency_not_applicable',
+      severity: 'info',
+      message: 'Condensing appliance: flue-loss efficiency does not apply, because part of the latent heat is recovered.',
+      value: null,
+      threshold: null,
+      unit: null,
+      source: 'heat-loss method (HHV basis) assumes the flue water leaves as vapour',
+    });
+  }
+
+  return {
+    co2Pct: co2PctFromO2(fuel, o2Pct),
+    co2MaxPct: co2MaxPct(fuel),
+    excessAirPct,
+    coAirFreePpm,
+    efficiencyPct: condensing ? null : combustionEfficiencyPct({ fuel, excessAirPct, flueMinusAirF: flueTempF - airTempF, airTempF }),
+    efficiencyBasis: `HHV basis, heat-loss method, ${FUEL_MODELS[fuel].description}`,
+    siegertLossPct: siegertFlueLossPct({ fuel, o2Pct, flueTempF, airTempF }),
+    siegertBasis: SIEGERT_BASIS,
+    flags,
+    sources: {
+      co2: `${METHOD_19_SOURCE}; CO2 = CO2max·(20.9 − O2)/20.9`,
+      coAirFree: '40 CFR Part 60, Appendix A, Method 19 diluent correction: CO·20.9/(20.9 − O2) (secondary copy)',
+      excessAirAndEfficiency:
+        'fuel stoichiometry and heat-loss method; checked for natural gas against US DOE Steam Tip Sheet #4 (2006), secondary copy',
+      siegert: siegertSource(fuel),
+    },
+  };
+}

@@ -1,0 +1,223 @@
+import { COMPONENT_TYPE_CODES, requireComponentType, type ComponentType } from './component-types';
+import { addMonths, dayNumberToIsoDate, isoDateToDayNumber } from './iso-date';
+import { SERVICE_LIFE_APPLIANCE_KINDS, type ServiceLifeApplianceKind } from './service-life';
+import { requireNumber, requireOneOf, TradeInputError } from './trade-input-error';
+
+export const REPLACEMENT_POLICIES = ['on_condition', 'fixed_age', 'annual'] as const;
+export type ReplacementPolicy = (typeof REPLACEMENT_POLICIES)[number];
+export const DUE_RULE_BASES = ['published', 'common_practice', 'manufacturer', 'company_policy'] as const;
+export type DueRuleBasis = (typeof DUE_RULE_BASES)[number];
+
+export type DueRule = {
+  componentType: ComponentType;
+  applianceKind?: ServiceLifeApplianceKind;
+  /** Service inspection interval; null when the part is not inspected on a schedule. */
+  inspectionIntervalMonths: number | null;
+  /** Only for 'fixed_age'; 'annual' means replaced every 12 months, 'on_condition' has no age limit. */
+  replacementAgeYears: number | null;
+  replacementPolicy: ReplacementPolicy;
+  basis: DueRuleBasis;
+  source: string;
+  /** Routine test by the owner or operator between visits; shown on checklists, not used for due dates. */
+  ownerTest?: { intervalDays: number; task: string; source: string };
+};
+
+export type DueStatus = 'ok' | 'due_soon' | 'overdue' | 'replace_now';
+
+export type ComponentDue = {
+  nextDue: { kind: 'inspection' | 'replacement'; dueOn: string } | null;
+  replacementDueOn: string | null;
+  inspectionDueOn: string | null;
+  status: DueStatus;
+  reason: string;
+};
+
+export type ComponentDueInput = {
+  rule: DueRule;
+  /** When this part was fitted; null when it is original with the appliance (or unknown). */
+  installedOn: string | null;
+  applianceInstalledOn: string | null;
+  lastInspectedOn: string | null;
+  /** The latest inspection found the part failed or unfit: it is replaced now, whatever its age. */
+  conditionFailed: boolean;
+  today: string;
+  /** "Due soon" covers due dates from today through this many days ahead. */
+  horizonDays: number;
+};
+
+/** When a component next needs inspecting or replacing, and how urgent that is on `today`. */
+export function computeComponentDue(input: ComponentDueInput): ComponentDue {
+  const rule = validateRule(input.rule);
+  const today = isoDateToDayNumber('today', input.today);
+  const horizonDays = requireNumber('horizonDays', input.horizonDays, { min: 0 });
+  const dateOrNull = (field: string, value: string | null) => {
+    if (value === null) return null;
+    const day = isoDateToDayNumber(field, value);
+    if (day > today) throw new TradeInputError(field, `${value} is after today ${input.today}`);
+    return value;
+  };
+  const ownInstall = dateOrNull('installedOn', input.installedOn);
+  const applianceInstall = dateOrNull('applianceInstalledOn', input.applianceInstalledOn);
+  const lastInspected = dateOrNull('lastInspectedOn', input.lastInspectedOn);
+  if (typeof input.conditionFailed !== 'boolean') throw new TradeInputError('conditionFailed', 'must be true or false');
+
+  // A part with no install date of its own is taken to be original with the appliance.
+  const installed = ownInstall ?? applianceInstall;
+  const installedFrom = ownInstall ? `installed ${ownInstall}` : applianceInstall ? `original with the appliance, installed ${applianceInstall}` : null;
+
+  let replacementDueOn: string | null = null;
+  let replacementWhy = '';
+  if (rule.replacementPolicy !== 'on_condition' && installed) {
+    const months = rule.replacementPolicy === 'annual' ? 12 : Math.round(rule.replacementAgeYears! * 12);
+    replacementDueOn = addMonths(installed, months);
+    replacementWhy =
+      rule.replacementPolicy === 'annual'
+        ? `replaced at every annual service (${installedFrom})`
+        : `replacement age ${rule.replacementAgeYears} years (${installedFrom})`;
+  }
+
+  let inspectionDueOn: string | null = null;
+  let inspectionWhy = '';
+  if (rule.inspectionIntervalMonths !== null) {
+    // The clock restarts at the later of the last inspection and the fitting of the present part.
+    const base = [lastInspected, installed].filter((d): d is string => d !== null).sort().at(-1) ?? null;
+    inspectionDueOn = base ? addMonths(base, rule.inspectionIntervalMonths) : dayNumberToIsoDate(today);
+    inspectionWhy = base
+      ? `every ${rule.inspectionIntervalMonths} months since ${base === lastInspected ? `last inspection ${base}` : installedFrom}`
+      : 'no inspection or install date on record';
+  }
+
+  if (input.conditionFailed) {
+    const dueOn = dayNumberToIsoDate(today);
+    return {
+      nextDue: { kind: 'replacement', dueOn },
+      replacementDueOn: dueOn,
+      inspectionDueOn,
+      status: 'replace_now',
+      reason: 'Failed on condition at inspection: replace now. Findings override age.',
+    };
+  }
+
+  const candidates = [
+    replacementDueOn && { kind: 'replacement' as const, dueOn: replacementDueOn, why: replacementWhy },
+    inspectionDueOn && { kind: 'inspection' as const, dueOn: inspectionDueOn, why: inspectionWhy },
+  ].filter((c) => !!c);
+  // Earliest first; on a tie the replacement wins, since fitting a new part includes looking at it.
+  candidates.sort((a, b) => a.dueOn.localeCompare(b.dueOn) || (a.kind === 'replacement' ? -1 : 1));
+  const next = candidates[0];
+
+  if (!next) {
+    const unknownAge = rule.replacementPolicy !== 'on_condition' && !installed;
+    return {
+      nextDue: null,
+      replacementDueOn,
+      inspectionDueOn,
+      status: 'ok',
+      reason: unknownAge
+        ? 'Install date unknown, so the age-based replacement date cannot be worked out. Record the install date.'
+        : 'Replaced on condition; no scheduled inspection.',
+    };
+  }
+
+  const daysLeft = isoDateToDayNumber('dueOn', next.dueOn) - today;
+  const status: DueStatus = daysLeft < 0 ? 'overdue' : daysLeft <= horizonDays ? 'due_soon' : 'ok';
+  const when =
+    daysLeft < 0 ? `was due ${next.dueOn} (${-daysLeft} days ago)` : daysLeft === 0 ? `is due today (${next.dueOn})` : `is due ${next.dueOn}, in ${daysLeft} days`;
+  const what = next.kind === 'replacement' ? 'Replacement' : 'Inspection';
+  return {
+    nextDue: { kind: next.kind, dueOn: next.dueOn },
+    replacementDueOn,
+    inspectionDueOn,
+    status,
+    reason: `${what} ${when}: ${next.why}.`,
+  };
+}
+
+function validateRule(rule: DueRule): DueRule {
+  if (!rule || typeof rule !== 'object') throw new TradeInputError('rule', 'is missing');
+  requireComponentType('rule.componentType', rule.componentType);
+  if (rule.applianceKind !== undefined) requireOneOf('rule.applianceKind', rule.applianceKind, SERVICE_LIFE_APPLIANCE_KINDS);
+  const policy = requireOneOf('rule.replacementPolicy', rule.replacementPolicy, REPLACEMENT_POLICIES);
+  requireOneOf('rule.basis', rule.basis, DUE_RULE_BASES);
+  if (typeof rule.source !== 'string' || rule.source.trim() === '') throw new TradeInputError('rule.source', 'every rule names its source');
+  if (rule.inspectionIntervalMonths !== null) {
+    const months = requireNumber('rule.inspectionIntervalMonths', rule.inspectionIntervalMonths, { min: 1 });
+    if (!Number.isInteger(months)) throw new TradeInputError('rule.inspectionIntervalMonths', 'must be a whole number of months');
+  }
+  if (policy === 'fixed_age') {
+    const years = requireNumber('rule.replacementAgeYears', rule.replacementAgeYears, { minExclusive: 0 });
+    if (!Number.isInteger(years * 12)) throw new TradeInputError('rule.replacementAgeYears', 'must be a whole number of months');
+  } else if (rule.replacementAgeYears !== null) {
+    throw new TradeInputError('rule.replacementAgeYears', `must be empty for the ${policy} policy`);
+  }
+  return rule;
+}
+
+// ---- Default catalog ---------------------------------------------------------------------------------------------
+
+const ON_CONDITION = 'common practice: inspected at every annual service visit; replaced on condition';
+const ASHRAE = 'ASHRAE Handbook, HVAC Applications, "Owning and Operating Costs" chapter, service-life table (1978 survey), secondary copy';
+const SECTION_VI = 'ASME BPVC Section VI, Recommended Rules for the Care and Operation of Heating Boilers';
+
+const onCondition = (componentType: ComponentType): DueRule => ({
+  componentType,
+  inspectionIntervalMonths: 12,
+  replacementAgeYears: null,
+  replacementPolicy: 'on_condition',
+  basis: 'common_practice',
+  source: ON_CONDITION,
+});
+
+const replacedEveryService = (componentType: ComponentType): DueRule => ({
+  componentType,
+  inspectionIntervalMonths: 12,
+  replacementAgeYears: null,
+  replacementPolicy: 'annual',
+  basis: 'common_practice',
+  source: 'common practice: replaced at every annual service',
+});
+
+const medianAge = (componentType: ComponentType, years: number, row: string): DueRule => ({
+  componentType,
+  inspectionIntervalMonths: 12,
+  replacementAgeYears: years,
+  replacementPolicy: 'fixed_age',
+  basis: 'published',
+  source: `${ASHRAE}: "${row}" median ${years} years, used as a planning age (a median, not a prediction); inspected annually (common practice)`,
+});
+
+const safetyValveTest = (componentType: ComponentType): DueRule => ({
+  componentType,
+  inspectionIntervalMonths: 12,
+  replacementAgeYears: null,
+  replacementPolicy: 'on_condition',
+  basis: 'published',
+  source: `from memory: ${SECTION_VI}: pressure test yearly; replaced on condition`,
+  ownerTest: { intervalDays: 91, task: 'try-lever (manual) test', source: `from memory: ${SECTION_VI}: quarterly` },
+});
+
+const defaults: Record<ComponentType, DueRule> = {
+  ...(Object.fromEntries(COMPONENT_TYPE_CODES.map((t) => [t, onCondition(t)])) as Record<ComponentType, DueRule>),
+  burners: medianAge('burners', 21, 'burners'),
+  circulator: medianAge('circulator', 10, 'pumps, pipe-mounted'),
+  nozzle: replacedEveryService('nozzle'),
+  oil_filter: replacedEveryService('oil_filter'),
+  low_water_cutoff_float: {
+    ...onCondition('low_water_cutoff_float'),
+    source: `${ON_CONDITION}; the owner's blowdown test follows ${SECTION_VI}`,
+    ownerTest: {
+      intervalDays: 7,
+      task: 'blow down the float chamber with the burner firing and confirm the burner stops',
+      source: `from memory: ${SECTION_VI}: weekly during the heating season`,
+    },
+  },
+  low_water_cutoff_probe: {
+    ...onCondition('low_water_cutoff_probe'),
+    source: `${ON_CONDITION}; testing is covered by ${SECTION_VI}, method and interval per the control manufacturer's instructions`,
+  },
+  safety_valve: safetyValveTest('safety_valve'),
+  relief_valve: safetyValveTest('relief_valve'),
+};
+
+/** Default due rules, one per component type. Companies override these with their own policy. */
+export const DEFAULT_DUE_RULES: Readonly<Record<ComponentType, DueRule>> = defaults;

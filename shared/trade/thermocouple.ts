@@ -1,0 +1,55 @@
+import { requireNumber } from './trade-input-error';
+
+export const THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV = { min: 25, max: 30 } as const;
+export const THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV = 18;
+
+const TYPICAL_SOURCE = 'Basic HVAC, BCcampus open textbook, chapter 19 (read): open circuit "usually around 25 – 30 DC millivolts"';
+const REPLACE_SOURCE = 'from memory: replace below about 18 mV open circuit';
+const CLOSED_SOURCE = "closed-circuit minimums vary by gas valve: the valve manufacturer's instructions govern";
+
+/** A thermocouple makes tens of millivolts; readings far above that are a thermopile or a meter-range mistake. */
+const PLAUSIBLE_MAX_MV = 100;
+
+export type ThermocoupleAssessment = {
+  status: 'replace' | 'below_typical' | 'typical' | 'above_typical' | 'see_manufacturer';
+  reason: string;
+  source: string;
+};
+
+export function assessThermocoupleMillivolts(input: { openCircuitMv?: number; closedCircuitMv?: number }): ThermocoupleAssessment {
+  const bounds = { min: 0, max: PLAUSIBLE_MAX_MV };
+  const open = input.openCircuitMv === undefined ? undefined : requireNumber('openCircuitMv', input.openCircuitMv, bounds);
+  const closed = input.closedCircuitMv === undefined ? undefined : requireNumber('closedCircuitMv', input.closedCircuitMv, bounds);
+  const closedNote = closed === undefined ? '' : ` Closed circuit ${closed} mV: ${CLOSED_SOURCE}.`;
+  const { min, max } = THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV;
+
+  if (open === undefined) {
+    return {
+      status: 'see_manufacturer',
+      reason:
+        closed === undefined
+          ? 'No reading given.'
+          : `Closed circuit ${closed} mV: compare with the gas valve manufacturer's minimum; no general limit applies.`,
+      source: CLOSED_SOURCE,
+    };
+  }
+  if (open < THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV) {
+    return {
+      status: 'replace',
+      reason: `Open circuit ${open} mV is below about ${THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV} mV: replace the thermocouple.${closedNote}`,
+      source: `${REPLACE_SOURCE}; ${TYPICAL_SOURCE}`,
+    };
+  }
+  if (open < min) {
+    return {
+      status: 'below_typical',
+      reason: `Open circuit ${open} mV is below the typical ${min}–${max} mV but above the replacement point.${closedNote}`,
+      source: `${TYPICAL_SOURCE}; ${REPLACE_SOURCE}`,
+    };
+  }
+  return {
+    status: open > max ? 'above_typical' : 'typical',
+    reason: `Open circuit ${open} mV (typical ${min}–${max} mV).${closedNote}`,
+    source: TYPICAL_SOURCE,
+  };
+}

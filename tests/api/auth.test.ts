@@ -1,0 +1,64 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { testApp } from '../support/context';
+import { createTenant, signIn, type Tenant } from '../support/tenant';
+import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
+
+const { app, ctx } = testApp();
+let t: Tenant;
+beforeAll(async () => {
+  t = await createTenant(ctx.db);
+});
+afterAll(() => ctx.pool.end());
+
+describe('sign-in and sign-out', () => {
+  it('shows who is signed in, with their role and company', async () => {
+    const agent = await signIn(app, t.technician.user.email);
+    const me = await agent.get('/api/me');
+    expect(me.status).toBe(200);
+    expect(me.body.principal).toEqual({ kind: 'member', userId: t.technician.user.id, companyId: t.company.id, role: 'technician' });
+    expect(me.body.company.id).toBe(t.company.id);
+  });
+
+  it('knows a homeowner by their customer records, not as a member', async () => {
+    const agent = await signIn(app, t.homeowner.user.email);
+    const me = await agent.get('/api/me');
+    expect(me.body.principal).toEqual({ kind: 'homeowner', userId: t.homeowner.user.id, companyId: t.company.id, customerIds: [t.customer.id] });
+  });
+
+  it('rejects a wrong password and keeps the person signed out', async () => {
+    const agent = request.agent(app);
+    const res = await agent.post('/api/auth/sign-in/email').send({ email: t.owner.user.email, password: 'not-the-password' });
+    expect(res.status).toBe(401);
+    expect((await agent.get('/api/me')).body).toEqual({ user: null });
+  });
+
+  it('signs out', async () => {
+    const agent = await signIn(app, t.owner.user.email);
+    expect((await agent.post('/api/auth/sign-out').send({})).status).toBe(200);
+    expect((await agent.get('/api/me')).body).toEqual({ user: null });
+    expect((await agent.get('/api/company')).status).toBe(401);
+  });
+});
+
+describe('sign-in rate limit', () => {
+  it('answers 429 once an address passes the limit, counting in the database', async () => {
+    const limited = testApp({ SIGN_IN_RATE_LIMIT: '3', TRUST_PROXY: 'true' });
+    try {
+      // A client address of its own, so other test files' sign-ins do not count against it.
+      const ip = `203.0.113.${Math.floor(Math.random() * 200) + 1}`;
+      const statuses: number[] = [];
+      for (let i = 0; i < 5; i++) {
+        const res = await request(limited.app)
+          .post('/api/auth/sign-in/email')
+          .set('X-Forwarded-For', ip)
+          .send({ email: t.owner.user.email, password: i < 4 ? 'wrong-password' : DEFAULT_TEST_PASSWORD });
+        statuses.push(res.status);
+      }
+      expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
+      expect(statuses.slice(3)).toEqual([429, 429]);
+    } finally {
+      await limited.ctx.pool.end();
+    }
+  });
+});

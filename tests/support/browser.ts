@@ -1,0 +1,58 @@
+import fs from 'node:fs';
+import http from 'node:http';
+import path from 'node:path';
+import { execFileSync } from 'node:child_process';
+import { chromium, type Browser, type BrowserContextOptions } from 'playwright-core';
+import { inject } from 'vitest';
+import { buildClientIfStale } from '../../scripts/lib/client-build';
+import { PROJECT_ROOT } from '../../scripts/lib/paths';
+import { createApp } from '../../server/app';
+import { testContext } from './context';
+import { freePort } from './global-setup';
+
+export const CHROMIUM = '/usr/bin/chromium';
+const CHROMIUM_FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** Debian's Chromium, installed with apt-get when missing and we are root; never a downloaded browser. */
+export function ensureChromium() {
+  if (fs.existsSync(CHROMIUM)) return;
+  if (process.getuid?.() !== 0) throw new Error(`Chromium is missing. Install it with: sudo apt-get install -y chromium`);
+  execFileSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+}
+
+export async function launchBrowser(extraArgs: string[] = []): Promise<Browser> {
+  ensureChromium();
+  return chromium.launch({ executablePath: CHROMIUM, args: [...CHROMIUM_FLAGS, ...extraArgs] });
+}
+
+export const PHONE: BrowserContextOptions = { viewport: { width: 360, height: 740 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+
+/** The real app (built client + API) on a free loopback port, against the test database. */
+export async function startTestServer() {
+  const clientDir = process.env.LIFEPLATE_TEST_CLIENT_DIR ?? path.join(PROJECT_ROOT, '.data', 'test-client');
+  await buildClientIfStale(clientDir, { quiet: true });
+  const port = await freePort();
+  const ctx = testContext({ BASE_URL: `http://127.0.0.1:${port}`, PORT: String(port) });
+  const server = http.createServer(createApp(ctx, { clientDir }));
+  await new Promise<void>((resolve) => server.listen(port, '127.0.0.1', resolve));
+  return {
+    ctx,
+    baseUrl: `http://127.0.0.1:${port}`,
+    async close() {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await ctx.pool.end();
+    },
+  };
+}
+
+export const screenshotDir = () => path.join(inject('runDir'), 'screenshots');
