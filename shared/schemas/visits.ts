@@ -1,0 +1,159 @@
+/**
+ * Service visits. Routes (under /api, tenant-filtered):
+ *
+ *   POST /visits                        VisitDto  visits:record  (starts a draft with its own copy of the checklist)
+ *   GET  /visits/:id                    VisitDto  records:read
+ *   PUT  /visits/:id/draft              VisitDto  visits:record  (autosave; 409 once completed)
+ *   POST /visits/:id/swaps              VisitDto  visits:record  (part swap: old component removed today, new one installed)
+ *   POST /visits/:id/complete           VisitDto  visits:record  (400 with details.outcome when an outcome is required)
+ *   POST /visits/:id/amendments         VisitDto  visits:amend-any, or visits:amend-own for the visit's own technician
+ *
+ * Readings are stored in one canonical unit each (°F, in. w.c., psi, mV, ppm, %); the client converts at the edge.
+ * The server recomputes the results from shared/trade and stores its own result.
+ */
+import { z } from 'zod';
+import * as E from './enums';
+import { isoDate, optionalText } from './common';
+
+const n = (label: string, min: number, max: number) =>
+  z.number(`${label} must be a number.`).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`);
+
+export const combustionReadings = z.object({
+  o2Pct: n('O2', 0, 20.8),
+  coPpm: n('CO', 0, 100_000),
+  flueTempF: n('Flue temperature', -40, 1500),
+  airTempF: n('Combustion-air temperature', -40, 200),
+  draftInWc: n('Draft', -2, 2).nullish(),
+  ambientCoPpm: n('Ambient CO', 0, 10_000).nullish(),
+  spillageSeconds: n('Spillage time', 0, 3600).nullish(),
+  steadyFiringMinutes: n('Minutes of steady firing', 0, 240).nullish(),
+});
+
+export const readingsInput = z
+  .object({
+    combustion: combustionReadings.nullish(),
+    gasInput: z
+      .object({
+        dialCubicFeet: n('Meter dial', 0.01, 100),
+        secondsPerRevolution: n('Seconds per revolution', 0.1, 36_000),
+        heatingValueBtuPerCubicFoot: n('Heating value', 100, 5000),
+      })
+      .nullish(),
+    thermocouple: z.object({ openCircuitMv: n('Open-circuit mV', 0, 100).nullish(), closedCircuitMv: n('Closed-circuit mV', 0, 100).nullish() }).nullish(),
+    gaugeGlassLevel: z.string().trim().max(20).nullish(),
+    lowWaterCutoff: z
+      .object({
+        type: z.enum(['float', 'probe']),
+        trippedAtLevel: z.string().trim().max(20).nullish(),
+        burnerStopped: z.boolean('Say whether the burner stopped.'),
+      })
+      .nullish(),
+    steamOperatingPsi: n('Operating pressure', 0, 300).nullish(),
+    pressureControlCutInPsi: n('Cut-in', 0, 300).nullish(),
+    pressureControlCutOutPsi: n('Cut-out', 0, 300).nullish(),
+    fillPressurePsi: n('Fill pressure', 0, 300).nullish(),
+    expansionTankPrechargePsi: n('Pre-charge', 0, 300).nullish(),
+    gasInletInWc: n('Inlet pressure', 0, 50).nullish(),
+    gasManifoldInWc: n('Manifold pressure', 0, 50).nullish(),
+    oil: z
+      .object({
+        smokeSpot: z.number().int().min(0).max(9).nullish(),
+        pumpPressurePsi: n('Pump pressure', 0, 500).nullish(),
+        overFireDraftInWc: n('Over-fire draft', -2, 2).nullish(),
+        breechDraftInWc: n('Breech draft', -2, 2).nullish(),
+      })
+      .nullish(),
+    makeupWater: z.object({ meterGallons: n('Feeder meter', 0, 1_000_000).nullish(), addedByHandGallons: n('Water added', 0, 1000).nullish() }).nullish(),
+  })
+  .strict();
+export type ReadingsInput = z.infer<typeof readingsInput>;
+
+export const checklistEntryInput = z.object({
+  key: z.string().max(60),
+  mark: z.enum(E.CHECK_MARKS).nullable(),
+  note: z.string().max(2000).default(''),
+});
+
+export const visitStartInput = z.object({
+  applianceId: z.uuid('Pick an appliance.'),
+  type: z.enum(E.VISIT_TYPES, 'Choose the visit type.'),
+  visitedOn: isoDate.optional(),
+  arrivedAt: z.iso.datetime({ offset: true }).optional(),
+});
+
+export const outcomeInput = z.object({
+  outcome: z.enum(E.VISIT_OUTCOMES).nullish(),
+  outcomeReason: optionalText(2000),
+  outcomeToldWhom: optionalText(200),
+  outcomeToldAt: z.iso.datetime({ offset: true }).nullish(),
+});
+
+export const visitDraftInput = z
+  .object({
+    /** The revision the client last saw; a stale save is refused with 409 so nothing is silently overwritten. */
+    revision: z.number().int().min(0),
+    checklist: z.array(checklistEntryInput).max(200).optional(),
+    readings: readingsInput.optional(),
+    findings: z.string().max(8000).optional(),
+    recommendations: z.string().max(8000).optional(),
+    internalNotes: z.string().max(8000).optional(),
+    technicianIds: z.array(z.uuid()).max(10).optional(),
+    departedAt: z.iso.datetime({ offset: true }).nullish(),
+    customerAckName: optionalText(160),
+  })
+  .extend(outcomeInput.shape);
+export type VisitDraftInput = z.input<typeof visitDraftInput>;
+
+export const visitCompleteInput = visitDraftInput;
+
+export const swapInput = z.object({
+  componentId: z.uuid('Pick the part that was replaced.'),
+  reason: optionalText(500),
+  newDescription: optionalText(200),
+  newSpec: z.record(z.string(), z.union([z.string().max(60), z.number()])).optional(),
+  swappedOn: isoDate.optional(),
+});
+
+export const amendmentInput = z.object({
+  reason: z.string().trim().min(3, 'Say why the visit is being corrected.').max(2000),
+  findings: z.string().max(8000).optional(),
+  recommendations: z.string().max(8000).optional(),
+  checklist: z.array(checklistEntryInput).max(200).optional(),
+  readings: readingsInput.optional(),
+  outcome: outcomeInput.optional(),
+  /** Corrections to part swaps recorded on this visit; the components' dates follow. */
+  swaps: z.array(z.object({ swapId: z.uuid(), swappedOn: isoDate, reason: optionalText(500) })).max(20).optional(),
+});
+
+export type ChecklistItemDto = { key: string; section: string; label: string; caution?: string; readings?: string[]; mark: E.CheckMark | null; note: string };
+
+export type VisitDto = {
+  id: string;
+  applianceId: string;
+  type: E.VisitType;
+  status: E.VisitStatus;
+  visitedOn: string;
+  technicians: { id: string; name: string }[];
+  arrivedAt: string | null;
+  departedAt: string | null;
+  checklist: ChecklistItemDto[];
+  readings: ReadingsInput;
+  /** Computed by the server from shared/trade; never trusted from the client. */
+  results: Record<string, unknown>;
+  /** True when a failed low-water cutoff test or a stop flag means an outcome must be chosen before completing. */
+  outcomeRequired: boolean;
+  findings: string;
+  recommendations: string;
+  internalNotes: string;
+  outcome: E.VisitOutcome | null;
+  outcomeReason: string | null;
+  outcomeToldWhom: string | null;
+  outcomeToldAt: string | null;
+  signedOffBy: { id: string; name: string } | null;
+  signedOffAt: string | null;
+  customerAckName: string | null;
+  completedAt: string | null;
+  revision: number;
+  swaps: { id: string; removedComponentId: string; newComponentId: string; typeLabel: string; swappedOn: string; reason: string | null; newDescription: string | null }[];
+  amendments: { id: string; reason: string; changes: Record<string, unknown>; createdAt: string; createdByName: string | null }[];
+};
