@@ -4,7 +4,9 @@ import { can, type Permission } from '@shared/policy';
 type NavItem = { to: string; label: string; permission?: Permission; homeowner?: boolean };
 
 const ITEMS: NavItem[] = [
-  { to: '/', label: 'Home' },
+  { to: '/', label: 'Find' },
+  { to: '/customers', label: 'Customers', permission: 'records:read' },
+  { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
   { to: '/team', label: 'Team', permission: 'records:read' },
   { to: '/settings', label: 'Company', permission: 'company:settings' },
 ];

@@ -1,9 +1,7 @@
-import { Link } from 'react-router-dom';
 import { useMe } from '@/lib/auth';
 import { Page } from '@/components/ui/page';
 import { Card } from '@/components/ui/card';
-import { can } from '@shared/policy';
-import { ROLE_LABELS } from '@shared/schemas/roles';
+import { FindPage } from '@/features/find/components/find-page';
 import { NoRolePage } from './no-role';
 
 /** Each role lands on its own home: the technician's search, the office's overview, the homeowner's appliances. */
@@ -22,25 +20,6 @@ export function HomePage() {
       </Page>
     );
   }
-  const role = ROLE_LABELS[principal.role];
-  return (
-    <Page title={`Hello, ${me.data?.user.name}`} subtitle={`${role} · ${me.data?.company?.name}`}>
-      <div className="grid gap-3 sm:grid-cols-2">
-        <Card title="Team">
-          <p className="mb-2">Who works for {me.data?.company?.name}, and their roles.</p>
-          <Link className="font-semibold text-brass-dark underline" to="/team">
-            Open the team list
-          </Link>
-        </Card>
-        {can(principal, 'company:settings') && (
-          <Card title="Company settings">
-            <p className="mb-2">Name, phone and the time zone that decides what "due today" means.</p>
-            <Link className="font-semibold text-brass-dark underline" to="/settings">
-              Open company settings
-            </Link>
-          </Card>
-        )}
-      </div>
-    </Page>
-  );
+  // Every member starts from finding an appliance: the technician at the door, the office on the phone.
+  return <FindPage />;
 }
