@@ -1,9 +1,28 @@
-import { createBrowserRouter } from 'react-router-dom';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import type { Permission } from '@shared/policy';
 import { AppShell } from './app-shell';
 import { RequirePermission, RequireSignIn } from './guards';
 import { NotFoundPage } from './pages/not-found';
 import { HomePage } from './pages/home';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
+
+/** A page in its own chunk, shown only to roles with the permission (the server enforces the same). */
+function guardedPage(path: string, permission: Permission, load: () => Promise<ComponentType>): RouteObject {
+  return {
+    path,
+    lazy: async () => {
+      const Page = await load();
+      return {
+        element: (
+          <RequirePermission permission={permission}>
+            <Page />
+          </RequirePermission>
+        ),
+      };
+    },
+  };
+}
 
 export function createAppRouter() {
   return createBrowserRouter([
@@ -16,69 +35,15 @@ export function createAppRouter() {
       ),
       children: [
         { index: true, element: <HomePage /> },
-        {
-          path: 'team',
-          lazy: async () => {
-            const { TeamPage } = await import('@/features/team/components/team-page');
-            return { element: <RequirePermission permission="records:read"><TeamPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'settings',
-          lazy: async () => {
-            const { CompanySettingsPage } = await import('@/features/company/components/company-settings-page');
-            return { element: <RequirePermission permission="company:settings"><CompanySettingsPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'appliances/new',
-          lazy: async () => {
-            const { NewAppliancePage } = await import('@/features/customers/components/new-appliance-page');
-            return { element: <RequirePermission permission="records:write"><NewAppliancePage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'appliances/:id',
-          lazy: async () => {
-            const { ApplianceRecordPage } = await import('@/features/appliance-record/components/appliance-record-page');
-            return { element: <RequirePermission permission="records:read"><ApplianceRecordPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'visits/:id',
-          lazy: async () => {
-            const { VisitPage } = await import('@/features/visits/components/visit-page');
-            return { element: <RequirePermission permission="records:read"><VisitPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'customers',
-          lazy: async () => {
-            const { CustomersPage } = await import('@/features/customers/components/customers-page');
-            return { element: <RequirePermission permission="records:read"><CustomersPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'customers/new',
-          lazy: async () => {
-            const { NewCustomerPage } = await import('@/features/customers/components/new-customer-page');
-            return { element: <RequirePermission permission="records:write"><NewCustomerPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'customers/:id',
-          lazy: async () => {
-            const { CustomerDetailPage } = await import('@/features/customers/components/customer-detail-page');
-            return { element: <RequirePermission permission="records:read"><CustomerDetailPage /></RequirePermission> };
-          },
-        },
-        {
-          path: 'catalog',
-          lazy: async () => {
-            const { CatalogPage } = await import('@/features/catalog/components/catalog-page');
-            return { element: <RequirePermission permission="catalog:manage"><CatalogPage /></RequirePermission> };
-          },
-        },
+        guardedPage('team', 'records:read', async () => (await import('@/features/team/components/team-page')).TeamPage),
+        guardedPage('settings', 'company:settings', async () => (await import('@/features/company/components/company-settings-page')).CompanySettingsPage),
+        guardedPage('appliances/new', 'records:write', async () => (await import('@/features/customers/components/new-appliance-page')).NewAppliancePage),
+        guardedPage('appliances/:id', 'records:read', async () => (await import('@/features/appliance-record/components/appliance-record-page')).ApplianceRecordPage),
+        guardedPage('visits/:id', 'records:read', async () => (await import('@/features/visits/components/visit-page')).VisitPage),
+        guardedPage('customers', 'records:read', async () => (await import('@/features/customers/components/customers-page')).CustomersPage),
+        guardedPage('customers/new', 'records:write', async () => (await import('@/features/customers/components/new-customer-page')).NewCustomerPage),
+        guardedPage('customers/:id', 'records:read', async () => (await import('@/features/customers/components/customer-detail-page')).CustomerDetailPage),
+        guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         { path: '*', element: <NotFoundPage /> },
       ],
     },
