@@ -1,0 +1,26 @@
+import nodemailer from 'nodemailer';
+import type { AppConfig } from '../config';
+
+export type Mail = { to: string; subject: string; text: string; html: string; headers?: Record<string, string> };
+
+/** Mail over real SMTP; in development and tests the host is the local fake, which offers no TLS. */
+export function createMailer(config: Pick<AppConfig, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_USER' | 'SMTP_PASS' | 'SMTP_SECURE' | 'MAIL_FROM'>) {
+  const loopback = ['127.0.0.1', 'localhost', '::1'].includes(config.SMTP_HOST);
+  const transport = nodemailer.createTransport({
+    host: config.SMTP_HOST,
+    port: config.SMTP_PORT,
+    secure: config.SMTP_SECURE,
+    // The loopback fake's certificate has expired, so no STARTTLS there; real servers negotiate TLS as usual.
+    ignoreTLS: loopback,
+    auth: config.SMTP_USER ? { user: config.SMTP_USER, pass: config.SMTP_PASS ?? '' } : undefined,
+  });
+  return {
+    async send(mail: Mail) {
+      const info = await transport.sendMail({ from: config.MAIL_FROM, ...mail });
+      return { messageId: info.messageId as string, accepted: info.accepted.map(String) };
+    },
+    close: () => transport.close(),
+  };
+}
+
+export type Mailer = ReturnType<typeof createMailer>;
