@@ -11,6 +11,9 @@ export type Access = { permission: Permission } | 'homeowner' | 'signed-in' | 'p
 type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
+/** Every route defined so far (paths relative to /api), so a test can prove that none is open by accident. */
+export const routeTable = new Map<string, { method: Method; path: string; access: Access }>();
+
 export type RouteHandler<S extends Schemas> = (input: Valid<S>, req: Request, res: Response) => Promise<unknown> | unknown;
 
 function guardFor(access: Access): RequestHandler {
@@ -27,6 +30,7 @@ export function defineRoute<S extends Schemas>(
   options: { access: Access; schemas?: S; status?: number },
   handler: RouteHandler<S>,
 ) {
+  routeTable.set(`${method} ${path}`, { method, path, access: options.access });
   router[method](path, guardFor(options.access), validate(options.schemas ?? {}), async (req, res, next) => {
     try {
       const result = await handler(res.locals.valid as Valid<S>, req, res);
