@@ -13,6 +13,15 @@ import { healthRoutes } from './routes/health';
 import { meRoutes } from './modules/me/me.routes';
 import { companyRoutes } from './modules/company/company.routes';
 import { teamRoutes } from './modules/team/team.routes';
+import { searchRoutes } from './modules/search/search.routes';
+import { customerRoutes } from './modules/customers/customers.routes';
+import { siteRoutes } from './modules/sites/sites.routes';
+import { applianceRoutes } from './modules/appliances/appliances.routes';
+import { catalogRoutes } from './modules/catalog/catalog.routes';
+import { checklistRoutes } from './modules/checklists/checklists.routes';
+import { visitsRoutes } from './modules/visits/visits.routes';
+import { dueRoutes } from './modules/due/due.routes';
+import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
 
 export type AppOptions = {
   /** Built client (vite build output) to serve; omitted in API-only tests. */
@@ -45,6 +54,15 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(meRoutes(ctx));
   api.use(companyRoutes(ctx));
   api.use(teamRoutes(ctx));
+  api.use(searchRoutes(ctx));
+  api.use(customerRoutes(ctx));
+  api.use(siteRoutes(ctx));
+  api.use(applianceRoutes(ctx));
+  api.use(catalogRoutes(ctx));
+  api.use(checklistRoutes(ctx));
+  api.use(visitsRoutes(ctx));
+  api.use(dueRoutes(ctx));
+  api.use(makeupWaterRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -50,7 +50,8 @@ export const customerInput = z.object({
   remindersOptOut: z.boolean().default(false),
   notes: optionalText(4000),
 });
-export const customerPatch = customerInput.partial();
+// Without the defaults, so a partial update never resets a field it did not name.
+export const customerPatch = customerInput.extend({ kind: z.enum(E.CUSTOMER_KINDS), remindersOptOut: z.boolean() }).partial();
 export type CustomerInput = z.input<typeof customerInput>;
 
 export const siteInput = z.object({
@@ -231,6 +232,7 @@ export type SearchHit = {
 };
 
 export type CatalogEntryDto = { code: string; group: string; label: string; specFields: unknown[]; active: boolean };
+export const catalogCodeParam = z.object({ code: z.string().regex(/^[a-z0-9_]{1,60}$/, 'Not a valid part type code.') });
 export const catalogPatch = z.object({ label: requiredText('Label', 80).optional(), active: z.boolean().optional() });
 
 export const checklistItemTemplate = z.object({

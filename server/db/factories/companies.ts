@@ -1,5 +1,8 @@
 import type { DbOrTx } from '../client';
 import { companies } from '../schema/index';
+import { seedCompanyCatalog } from '../../modules/catalog/seed-catalog';
+import { seedCompanyChecklists } from '../../modules/checklists/seed-checklists';
+import { seedCompanyDueRules } from '../../modules/due/due-rules.seed';
 import { fakerFor } from './faker';
 import { pickInvented, INVENTED_COMPANY_NAMES } from './invented-names';
 
@@ -14,5 +17,9 @@ export async function insertCompany(db: DbOrTx, overrides: Partial<typeof compan
       ...overrides,
     })
     .returning();
+  // Every company, in tests and the demo alike, starts with the part catalog, the default checklists and due rules.
+  await seedCompanyCatalog(db, company.id);
+  await seedCompanyChecklists(db, company.id);
+  await seedCompanyDueRules(db, company.id);
   return company;
 }

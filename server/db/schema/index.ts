@@ -2,3 +2,4 @@ export * from './auth';
 export * from './companies';
 export * from './records';
 export * from './catalog';
+export * from './water';

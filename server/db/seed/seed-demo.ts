@@ -6,6 +6,8 @@ import { insertHomeowner, insertMember } from '../factories/users';
 import { insertCustomer } from '../factories/records';
 import { DEMO_COMPANY, DEMO_HOMEOWNER, DEMO_MEMBERS, DEMO_PASSWORD, OTHER_COMPANY } from './demo-accounts';
 import { seedDemoRecords } from './demo-records';
+import { applyDemoCompanyPolicies } from './demo-company-policies';
+import { recomputeDueForCompany } from '../../modules/due/due.repository';
 
 /** Seeds the invented demo scenario once; a second run finds the demo company and does nothing. */
 export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
@@ -34,6 +36,8 @@ export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
     });
     await insertHomeowner(tx, { companyId: demo.id, customerId: homeownerCustomer.id, ...DEMO_HOMEOWNER, password: DEMO_PASSWORD });
     await seedDemoRecords(tx, { demoCompanyId: demo.id, otherCompanyId: other.id, homeownerCustomerId: homeownerCustomer.id, userIds });
+    await applyDemoCompanyPolicies(tx, demo.id);
+    await recomputeDueForCompany(tx, demo.id);
   });
   return { seeded: true };
 }

@@ -1,0 +1,29 @@
+import type { ComponentDto } from '../../../shared/schemas/records';
+import { describeStoredDue } from '../due/due-status';
+import { typeLabelFor } from '../due/type-label';
+import type { ComponentRow } from './appliances.repository';
+
+/** "Due soon" covers the next 30 days, the window the due list uses. */
+export const DUE_HORIZON_DAYS = 30;
+
+export function toComponentDto(c: ComponentRow, catalogLabel: string | null, today: string): ComponentDto {
+  const described = c.removedOn || !c.dueOn || !c.dueKind ? null : describeStoredDue(c, today, DUE_HORIZON_DAYS);
+  return {
+    id: c.id,
+    typeCode: c.typeCode,
+    typeLabel: typeLabelFor(c.typeCode, catalogLabel),
+    description: c.description,
+    spec: c.spec,
+    specKey: c.specKey,
+    installedOn: c.installedOn,
+    originalWithAppliance: c.originalWithAppliance,
+    note: c.note,
+    conditionFailed: c.conditionFailed,
+    conditionNote: c.conditionNote,
+    lastInspectedOn: c.lastInspectedOn,
+    removedOn: c.removedOn,
+    removalReason: c.removalReason,
+    replacedById: c.replacedById,
+    due: described && c.dueOn && c.dueKind ? { kind: c.dueKind, dueOn: c.dueOn, status: described.status, reason: described.reason } : null,
+  };
+}

@@ -1,0 +1,131 @@
+import { and, asc, eq, gt, isNull, lte, ne, or, sql } from 'drizzle-orm';
+import type { DbOrTx } from '../../db/client';
+import { appliances, componentCatalog, components, customers, dueRules, sites, users } from '../../db/schema/index';
+import type { ApplianceKind } from '../../../shared/schemas/enums';
+import { recomputeDueStatement } from './due-recompute.sql';
+
+/** Rewrites the due date of every present component of one appliance, in one statement. */
+export async function recomputeDueForAppliance(db: DbOrTx, companyId: string, applianceId: string, options: { today?: string } = {}): Promise<void> {
+  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId} and c.appliance_id = ${applianceId}`, options.today ?? null));
+}
+
+/** Rewrites the due date of every present component of the company, in one statement (after a rule change). */
+export async function recomputeDueForCompany(db: DbOrTx, companyId: string, options: { today?: string } = {}): Promise<void> {
+  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId}`, options.today ?? null));
+}
+
+export type DueRuleRow = typeof dueRules.$inferSelect;
+export type DueRuleChange = Pick<DueRuleRow, 'inspectionIntervalMonths' | 'replacementAgeYears' | 'replacementPolicy' | 'basis' | 'source'>;
+
+export const dueRepository = {
+  listRules(db: DbOrTx, companyId: string) {
+    return db
+      .select({ rule: dueRules, catalogLabel: componentCatalog.label })
+      .from(dueRules)
+      .leftJoin(componentCatalog, and(eq(componentCatalog.companyId, dueRules.companyId), eq(componentCatalog.code, dueRules.componentType)))
+      .where(eq(dueRules.companyId, companyId))
+      .orderBy(asc(dueRules.componentType), sql`${dueRules.applianceKind} nulls first`);
+  },
+  async findRule(db: DbOrTx, companyId: string, id: string) {
+    const [row] = await db
+      .select({ rule: dueRules, catalogLabel: componentCatalog.label })
+      .from(dueRules)
+      .leftJoin(componentCatalog, and(eq(componentCatalog.companyId, dueRules.companyId), eq(componentCatalog.code, dueRules.componentType)))
+      .where(and(eq(dueRules.companyId, companyId), eq(dueRules.id, id)))
+      .limit(1);
+    return row ?? null;
+  },
+  async updateRule(db: DbOrTx, companyId: string, id: string, change: DueRuleChange, actorId: string) {
+    const [row] = await db
+      .update(dueRules)
+      .set({ ...change, updatedBy: actorId })
+      .where(and(eq(dueRules.companyId, companyId), eq(dueRules.id, id)))
+      .returning();
+    return row ?? null;
+  },
+
+  /**
+   * Components due through `through`, in (due_on, id) order with a keyset cursor. The company, removed_on and
+   * due_on conditions and the ordering follow components_company_due_idx.
+   */
+  listDue(
+    db: DbOrTx,
+    q: {
+      companyId: string;
+      through: string;
+      type?: string;
+      applianceKind?: ApplianceKind;
+      technicianId?: string;
+      town?: string;
+      after?: { dueOn: string; id: string } | null;
+      limit: number;
+    },
+  ) {
+    return db
+      .select({
+        component: {
+          id: components.id,
+          typeCode: components.typeCode,
+          description: components.description,
+          specKey: components.specKey,
+          dueOn: components.dueOn,
+          dueKind: components.dueKind,
+          dueReason: components.dueReason,
+          conditionFailed: components.conditionFailed,
+        },
+        catalogLabel: componentCatalog.label,
+        appliance: {
+          id: appliances.id,
+          kind: appliances.kind,
+          fuel: appliances.fuel,
+          manufacturer: appliances.manufacturer,
+          model: appliances.model,
+          location: appliances.location,
+        },
+        site: { id: sites.id, street: sites.street, town: sites.town, assignedTechnicianId: sites.assignedTechnicianId },
+        technicianName: users.name,
+        customer: { id: customers.id, name: customers.name },
+      })
+      .from(components)
+      .innerJoin(appliances, and(eq(appliances.id, components.applianceId), eq(appliances.companyId, components.companyId)))
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
+      .innerJoin(customers, eq(customers.id, sites.customerId))
+      .leftJoin(users, eq(users.id, sites.assignedTechnicianId))
+      .leftJoin(componentCatalog, and(eq(componentCatalog.companyId, components.companyId), eq(componentCatalog.code, components.typeCode)))
+      .where(
+        and(
+          eq(components.companyId, q.companyId),
+          isNull(components.removedOn),
+          lte(components.dueOn, q.through),
+          ne(appliances.status, 'removed'),
+          q.after
+            ? or(gt(components.dueOn, q.after.dueOn), and(eq(components.dueOn, q.after.dueOn), gt(components.id, q.after.id)))
+            : undefined,
+          q.type ? eq(components.typeCode, q.type) : undefined,
+          q.applianceKind ? eq(appliances.kind, q.applianceKind) : undefined,
+          q.technicianId ? eq(sites.assignedTechnicianId, q.technicianId) : undefined,
+          q.town ? sql`lower(${sites.town}) = lower(${q.town})` : undefined,
+        ),
+      )
+      .orderBy(asc(components.dueOn), asc(components.id))
+      .limit(q.limit);
+  },
+
+  /** Counts of what falls due through `through`, grouped by part type, spec and kind of work: one GROUP BY. */
+  stock(db: DbOrTx, companyId: string, through: string) {
+    return db
+      .select({
+        typeCode: components.typeCode,
+        specKey: components.specKey,
+        dueKind: components.dueKind,
+        catalogLabel: componentCatalog.label,
+        count: sql<number>`count(*)::int`,
+      })
+      .from(components)
+      .innerJoin(appliances, and(eq(appliances.id, components.applianceId), eq(appliances.companyId, components.companyId)))
+      .leftJoin(componentCatalog, and(eq(componentCatalog.companyId, components.companyId), eq(componentCatalog.code, components.typeCode)))
+      .where(and(eq(components.companyId, companyId), isNull(components.removedOn), lte(components.dueOn, through), ne(appliances.status, 'removed')))
+      .groupBy(components.typeCode, components.specKey, components.dueKind, componentCatalog.label)
+      .orderBy(asc(components.typeCode), asc(components.specKey));
+  },
+};
