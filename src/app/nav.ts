@@ -5,6 +5,7 @@ type NavItem = { to: string; label: string; permission?: Permission; homeowner?:
 
 const ITEMS: NavItem[] = [
   { to: '/', label: 'Find' },
+  { to: '/due', label: 'Due list', permission: 'catalog:manage' },
   { to: '/customers', label: 'Customers', permission: 'records:read' },
   { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
   { to: '/team', label: 'Team', permission: 'records:read' },

@@ -43,6 +43,7 @@ export function createAppRouter() {
         guardedPage('customers', 'records:read', async () => (await import('@/features/customers/components/customers-page')).CustomersPage),
         guardedPage('customers/new', 'records:write', async () => (await import('@/features/customers/components/new-customer-page')).NewCustomerPage),
         guardedPage('customers/:id', 'records:read', async () => (await import('@/features/customers/components/customer-detail-page')).CustomerDetailPage),
+        guardedPage('due', 'records:read', async () => (await import('@/features/due/components/due-list-page')).DueListPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         { path: '*', element: <NotFoundPage /> },
       ],
