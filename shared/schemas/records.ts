@@ -238,7 +238,7 @@ export const catalogPatch = z.object({ label: requiredText('Label', 80).optional
 export const checklistItemTemplate = z.object({
   key: z.string().trim().min(1).max(60).regex(/^[a-z0-9_]+$/, 'Use lower-case letters, digits and underscores.'),
   section: requiredText('Section', 60),
-  label: requiredText('Item', 200),
+  label: requiredText('Item', 400),
   caution: optionalText(500).transform((v) => v ?? undefined),
   readings: z.array(z.string().max(60)).max(20).optional(),
 });

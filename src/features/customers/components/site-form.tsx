@@ -1,0 +1,116 @@
+import { useState, type FormEvent } from 'react';
+import { siteInput, type SiteDto } from '@shared/schemas/records';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import type { FieldErrors } from '@/lib/api-client';
+import type { SiteBody } from '../api/create-site';
+import { useTechnicians } from '../api/get-technicians';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
+import { useFocusFirstError } from './use-focus-first-error';
+
+type Draft = { street: string; town: string; postalCode: string; accessNotes: string; assignedTechnicianId: string };
+const FIELDS = ['customerId', 'street', 'town', 'postalCode', 'accessNotes', 'assignedTechnicianId'];
+
+/** Add or edit a site (a service address). The draft survives any error. */
+export function SiteForm({
+  customerId,
+  initial,
+  submitLabel,
+  onSubmit,
+  onCancel,
+}: {
+  customerId: string;
+  initial?: SiteDto;
+  submitLabel: string;
+  onSubmit: (body: SiteBody) => Promise<unknown>;
+  onCancel?: () => void;
+}) {
+  const technicians = useTechnicians();
+  const [draft, setDraft] = useState<Draft>({
+    street: initial?.street ?? '',
+    town: initial?.town ?? '',
+    postalCode: initial?.postalCode ?? '',
+    accessNotes: initial?.accessNotes ?? '',
+    assignedTechnicianId: initial?.assignedTechnicianId ?? '',
+  });
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [failure, setFailure] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+  const formRef = useFocusFirstError<HTMLFormElement>(errors);
+  const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+
+  async function submit(e: FormEvent) {
+    e.preventDefault();
+    setFailure(null);
+    const parsed = siteInput.safeParse({ ...draft, customerId, assignedTechnicianId: draft.assignedTechnicianId || null });
+    if (!parsed.success) {
+      setErrors(zodFieldErrors(parsed.error));
+      return;
+    }
+    setErrors({});
+    setSaving(true);
+    try {
+      await onSubmit(parsed.data);
+    } catch (err) {
+      const { fields, message } = describeFailure(err);
+      setErrors(fields);
+      setFailure(message);
+    } finally {
+      setSaving(false);
+    }
+  }
+
+  const other = unclaimedErrors(errors, (k) => FIELDS.includes(k));
+  // A technician who has left still shows on an old site until someone picks another.
+  const assignedGone = draft.assignedTechnicianId && !technicians.data?.some((t) => t.userId === draft.assignedTechnicianId);
+  return (
+    <form ref={formRef} onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label={submitLabel}>
+      {(failure || other.length > 0) && (
+        <Notice kind="danger" title="Site not saved">
+          {failure && <p>{failure}</p>}
+          {other.map((m) => (
+            <p key={m}>{m}</p>
+          ))}
+        </Notice>
+      )}
+      <TextField label="Street address" autoComplete="off" value={draft.street} onChange={(e) => set('street', e.target.value)} error={errors.street} />
+      <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
+        <TextField label="Town" autoComplete="off" value={draft.town} onChange={(e) => set('town', e.target.value)} error={errors.town} />
+        <TextField label="Postal code" autoComplete="off" value={draft.postalCode} onChange={(e) => set('postalCode', e.target.value)} error={errors.postalCode} />
+      </div>
+      <TextAreaField
+        label="Access notes"
+        hint='What the technician needs at the door, e.g. "side door, dog in yard, key with neighbour".'
+        value={draft.accessNotes}
+        onChange={(e) => set('accessNotes', e.target.value)}
+        error={errors.accessNotes}
+      />
+      <SelectField
+        label="Assigned technician"
+        value={draft.assignedTechnicianId}
+        onChange={(e) => set('assignedTechnicianId', e.target.value)}
+        error={errors.assignedTechnicianId}
+        hint={technicians.isError ? 'Could not load the technicians; the site can be saved without one.' : undefined}
+      >
+        <option value="">Nobody in particular</option>
+        {assignedGone && <option value={draft.assignedTechnicianId}>{initial?.assignedTechnicianName ?? 'Former technician'}</option>}
+        {technicians.data?.map((t) => (
+          <option key={t.userId} value={t.userId}>
+            {t.name}
+          </option>
+        ))}
+      </SelectField>
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" disabled={saving}>
+          {saving ? 'Saving…' : submitLabel}
+        </Button>
+        {onCancel && (
+          <Button variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
+      </div>
+    </form>
+  );
+}
