@@ -6,8 +6,8 @@ import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
 import { useSaveChecklistTemplate } from '../api/save-checklist-template';
 import { newItemDraft, toTemplateBody, toTemplateDraft, type ItemDraft, type TemplateDraft } from './checklist-draft';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
-import { useFocusFirstError } from './use-focus-first-error';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 export function ChecklistTemplateEditor({ template, onClose }: { template: ChecklistTemplateDto; onClose: () => void }) {
   const save = useSaveChecklistTemplate();

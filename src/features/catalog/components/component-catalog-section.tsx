@@ -8,7 +8,7 @@ import { Spinner } from '@/components/ui/page';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { useComponentTypes } from '../api/list-component-types';
 import { useUpdateComponentType } from '../api/update-component-type';
-import { describeFailure, zodFieldErrors } from './form-errors';
+import { describeFailure, zodFieldErrors } from '@/lib/form-errors';
 
 const GROUPS: Record<string, string> = { gas: 'Gas burner and controls', oil: 'Oil burner', steam: 'Steam', hot_water: 'Hot water', common: 'Common' };
 

@@ -11,8 +11,8 @@ import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import type { FieldErrors } from '@/lib/api-client';
 import { useDueRules } from '../api/list-due-rules';
 import { useUpdateDueRule } from '../api/update-due-rule';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
-import { useFocusFirstError } from './use-focus-first-error';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 const BASIS: Record<DueRuleBasis, { label: string; status: Status }> = {
   published: { label: 'Published source', status: 'ok' },

@@ -4,7 +4,7 @@ import type { CatalogEntryDto } from '@shared/schemas/records';
 import type { FieldErrors } from '@/lib/api-client';
 import type { ApplianceBody } from '../api/create-appliance';
 import { formSpecFields } from './catalog-spec-fields';
-import { blankToNull, zodFieldErrors } from './form-errors';
+import { blankToNull, zodFieldErrors } from '@/lib/form-errors';
 
 /** Everything as typed (strings), so a bad value is kept on screen next to its message. */
 export type ApplianceDraft = {

@@ -5,7 +5,7 @@ import type { FieldErrors } from '@/lib/api-client';
 import type { ComponentDraft } from './appliance-draft';
 import { formSpecFields, groupedEntries, unitText } from './catalog-spec-fields';
 import { CheckboxField } from './checkbox-field';
-import { unclaimedErrors } from './form-errors';
+import { unclaimedErrors } from '@/lib/form-errors';
 
 const ROW_FIELDS = ['typeCode', 'installedOn', 'originalWithAppliance', 'note'];
 

@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
 import { newComponentDraft, type ComponentDraft } from './appliance-draft';
 import { ComponentRow } from './component-row';
-import { errorsUnder } from './form-errors';
+import { errorsUnder } from '@/lib/form-errors';
 
 export function ComponentsSection({
   rows,

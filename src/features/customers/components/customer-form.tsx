@@ -7,8 +7,8 @@ import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
 import type { CustomerBody } from '../api/create-customer';
 import { CheckboxField } from './checkbox-field';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
-import { useFocusFirstError } from './use-focus-first-error';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 type Draft = { name: string; kind: CustomerKind; phone: string; email: string; remindersOptOut: boolean; notes: string };
 const FIELDS = ['name', 'kind', 'phone', 'email', 'remindersOptOut', 'notes'];

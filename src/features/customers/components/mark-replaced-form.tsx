@@ -6,8 +6,8 @@ import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
 import { useReplaceAppliance } from '../api/replace-appliance';
 import { applianceLabel } from './appliance-labels';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
-import { useFocusFirstError } from './use-focus-first-error';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 const todayIso = () => {
   const d = new Date();

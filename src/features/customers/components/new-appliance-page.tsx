@@ -11,9 +11,9 @@ import { useCreateAppliance } from '../api/create-appliance';
 import { buildApplianceBody, emptyApplianceDraft, isOil, newComponentDraft, type ApplianceDraft, type ComponentDraft } from './appliance-draft';
 import { APPLIANCE_FIELD_KEYS, ApplianceFieldsSection } from './appliance-fields-section';
 import { ComponentsSection } from './components-section';
-import { describeFailure, unclaimedErrors } from './form-errors';
+import { describeFailure, unclaimedErrors } from '@/lib/form-errors';
 import { starterComponents } from './starter-components';
-import { useFocusFirstError } from './use-focus-first-error';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 /** One form for the appliance and its parts; posted in one request so the record is never half made. */
 export function NewAppliancePage() {

@@ -6,8 +6,8 @@ import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
 import type { SiteBody } from '../api/create-site';
 import { useTechnicians } from '../api/get-technicians';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from './form-errors';
-import { useFocusFirstError } from './use-focus-first-error';
+import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
+import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
 type Draft = { street: string; town: string; postalCode: string; accessNotes: string; assignedTechnicianId: string };
 const FIELDS = ['customerId', 'street', 'town', 'postalCode', 'accessNotes', 'assignedTechnicianId'];
