@@ -1,6 +1,64 @@
-import { Page } from '@/components/ui/page';
+import { useEffect } from 'react';
+import { useParams } from 'react-router-dom';
+import { Page, Spinner } from '@/components/ui/page';
+import { Notice } from '@/components/ui/notice';
+import { useMe } from '@/lib/auth';
+import { ApiError } from '@/lib/api-client';
+import { can } from '@shared/policy';
+import { LABELS } from '@shared/schemas/enums';
+import { useApplianceRecord } from '../api/get-appliance-record';
+import { applianceTitle, formatDate } from '../lib/labels';
+import { CombustionTrend } from './combustion-trend';
+import { ComponentsList } from './components-list';
+import { DueList } from './due-list';
+import { EndOfLife } from './end-of-life';
+import { RecordHeader } from './record-header';
+import { StartVisit } from './start-visit';
+import { Timeline } from './timeline';
 
-// Placeholder until the life-record screens land.
 export function ApplianceRecordPage() {
-  return <Page title="ApplianceRecordPage">Not built yet.</Page>;
+  const { id = '' } = useParams();
+  const record = useApplianceRecord(id);
+  const me = useMe();
+  // Arriving from a long visit form: start at the top, where the unsafe notice and the summary are.
+  useEffect(() => {
+    window.scrollTo(0, 0);
+  }, [id]);
+
+  if (record.isPending) return <Spinner label="Loading the life record…" />;
+  if (record.isError) {
+    return (
+      <Page title="Life record">
+        {record.error instanceof ApiError && record.error.status === 404 ? (
+          <Notice kind="danger" title="Not found">
+            There is no appliance at this address in your company&apos;s records.
+          </Notice>
+        ) : (
+          <Notice kind="danger" title="Not loaded">
+            {record.error.message}
+          </Notice>
+        )}
+      </Page>
+    );
+  }
+  const r = record.data;
+  const a = r.appliance;
+  return (
+    <Page title={applianceTitle(a)} subtitle={`${r.customer.name} · ${r.site.street}, ${r.site.town}`}>
+      {r.unsafe && (
+        <Notice kind="danger" title={`Shut down as unsafe on ${formatDate(r.unsafe.visitedOn)}`}>
+          {r.unsafe.reason ?? 'No reason recorded.'} Do not relight until the fault is corrected; follow the manufacturer&apos;s instructions, local codes
+          and licensed practice.
+        </Notice>
+      )}
+      {a.status !== 'in_service' && <Notice title={LABELS.applianceStatus[a.status]}>This appliance is marked {LABELS.applianceStatus[a.status].toLowerCase()}.</Notice>}
+      {can(me.data?.principal, 'visits:record') && a.status !== 'removed' && <StartVisit applianceId={a.id} openDraftVisitId={r.openDraftVisitId} />}
+      <RecordHeader record={r} />
+      <DueList due={r.due} />
+      <EndOfLife endOfLife={r.endOfLife} ageYears={r.ageYears} />
+      <ComponentsList components={r.components} />
+      <CombustionTrend applianceId={a.id} />
+      <Timeline applianceId={a.id} />
+    </Page>
+  );
 }

@@ -1,0 +1,39 @@
+import { LABELS } from '@shared/schemas/enums';
+import type { ApplianceRecordDto } from '@shared/schemas/records';
+import { btuh, formatDate, makeModel } from '../lib/labels';
+import { Fact, Section } from './section';
+
+export function RecordHeader({ record }: { record: ApplianceRecordDto }) {
+  const { appliance: a, site, lastVisit } = record;
+  const rating = btuh(a.inputBtuh) ?? (a.firingRateGph != null ? `${a.firingRateGph} gph` : 'Not recorded');
+  return (
+    <Section title="What it is">
+      <dl className="grid grid-cols-2 gap-x-3 gap-y-2">
+        <Fact label="Construction">{LABELS.construction[a.construction]}</Fact>
+        <Fact label="Age">{record.ageYears == null ? 'Unknown' : `${record.ageYears} ${record.ageYears === 1 ? 'year' : 'years'}`}</Fact>
+        <div className="col-span-2">
+          <Fact label="Make and model">{makeModel(a)}</Fact>
+        </div>
+        <Fact label="Serial">
+          <span className="tabular break-all">{a.serial ?? 'Not recorded'}</span>
+        </Fact>
+        <Fact label="Input rating">{rating}</Fact>
+        <Fact label="Location">{a.location ?? 'Not recorded'}</Fact>
+        <Fact label="Last visit">
+          {lastVisit ? `${formatDate(lastVisit.visitedOn)} · ${LABELS.visitType[lastVisit.type]}` : 'No visit recorded'}
+        </Fact>
+        <div className="col-span-2">
+          <Fact label="Site">
+            {site.street}, {site.town}
+            {site.postalCode ? ` ${site.postalCode}` : ''}
+          </Fact>
+        </div>
+        {site.accessNotes && (
+          <div className="col-span-2">
+            <Fact label="Access">{site.accessNotes}</Fact>
+          </div>
+        )}
+      </dl>
+    </Section>
+  );
+}

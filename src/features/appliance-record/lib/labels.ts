@@ -1,0 +1,29 @@
+import { LABELS } from '@shared/schemas/enums';
+import type { ApplianceDto } from '@shared/schemas/records';
+import type { Status } from '@/components/ui/status-badge';
+
+export const DUE_STATUS: Record<string, { status: Status; word: string }> = {
+  ok: { status: 'ok', word: 'OK' },
+  due_soon: { status: 'soon', word: 'Due soon' },
+  overdue: { status: 'due', word: 'Overdue' },
+  replace_now: { status: 'unsafe', word: 'Replace now' },
+};
+
+export const dueStatus = (s: string) => DUE_STATUS[s] ?? { status: 'info' as const, word: s.replace(/_/g, ' ') };
+
+export function applianceTitle(a: ApplianceDto) {
+  return `${LABELS.applianceKind[a.kind]} · ${LABELS.fuel[a.fuel]}`;
+}
+
+export function makeModel(a: ApplianceDto) {
+  return [a.manufacturer, a.model].filter(Boolean).join(' ') || 'Make and model not recorded';
+}
+
+const dateFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
+/** A calendar date (yyyy-mm-dd) shown as written, never shifted by the phone's time zone. */
+export const formatDate = (iso: string | null | undefined) => (iso ? dateFormat.format(new Date(`${iso.slice(0, 10)}T00:00:00Z`)) : '—');
+
+export const formatDateTime = (iso: string) =>
+  new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' }).format(new Date(iso));
+
+export const btuh = (n: number | null) => (n == null ? null : `${n.toLocaleString('en-US')} Btu/h`);

@@ -1,0 +1,140 @@
+import { Link } from 'react-router-dom';
+import { Notice } from '@/components/ui/notice';
+import { Page } from '@/components/ui/page';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { useMe } from '@/lib/auth';
+import { can } from '@shared/policy';
+import { LABELS } from '@shared/schemas/enums';
+import type { VisitDto } from '@shared/schemas/visits';
+import { AmendForm } from './amend-form';
+import { Panel } from './inputs';
+import { ServerResults } from './server-results';
+
+const dayFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const stampFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+
+const MARK_LOOK = { done: 'ok', not_applicable: 'info', needs_attention: 'due' } as const;
+
+/** The latest corrected value of a top-level field, or the original when no amendment changed it. */
+function latest(visit: VisitDto, field: 'findings' | 'recommendations'): string {
+  return visit.amendments.reduce<string>((v, a) => (typeof a.changes[field] === 'string' ? (a.changes[field] as string) : v), visit[field]);
+}
+
+export function CompletedVisit({ visit }: { visit: VisitDto }) {
+  const me = useMe();
+  const principal = me.data?.principal;
+  const mayAmend =
+    can(principal, 'visits:amend-any') || (can(principal, 'visits:amend-own') && visit.technicians.some((t) => t.id === principal?.userId));
+  const sections = [...new Set(visit.checklist.map((i) => i.section))];
+
+  return (
+    <Page
+      title={`${LABELS.visitType[visit.type]} · ${dayFormat.format(new Date(`${visit.visitedOn}T00:00:00Z`))}`}
+      subtitle={
+        <Link to={`/appliances/${visit.applianceId}`} className="underline">
+          Back to the life record
+        </Link>
+      }
+    >
+      <p className="flex flex-wrap items-center gap-2">
+        <StatusBadge status="ok">Completed</StatusBadge>
+        {visit.technicians.map((t) => t.name).join(', ')}
+      </p>
+      {visit.outcome === 'shut_down_unsafe' ? (
+        <Notice kind="danger" title="Shut down as unsafe">
+          {visit.outcomeReason} {visit.outcomeToldWhom && `Told: ${visit.outcomeToldWhom}.`}
+        </Notice>
+      ) : visit.outcome === 'left_operating' ? (
+        <StatusBadge status="ok">Left operating</StatusBadge>
+      ) : null}
+
+      <Panel title="As recorded on the day">
+        <Field label="Findings" value={visit.findings} />
+        <Field label="Recommendations" value={visit.recommendations} />
+        {visit.customerAckName && <Field label="Acknowledged by the customer" value={visit.customerAckName} />}
+        {visit.swaps.length > 0 && (
+          <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${s.swappedOn})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
+        )}
+        <ServerResults results={visit.results} title="Results" />
+        {sections.map((section) => (
+          <div key={section}>
+            <h3 className="font-bold">{section}</h3>
+            <ul className="text-sm">
+              {visit.checklist
+                .filter((i) => i.section === section)
+                .map((i) => (
+                  <li key={i.key} className="flex flex-wrap items-center justify-between gap-2 border-b border-plate-line py-1">
+                    <span>
+                      {i.label}
+                      {i.note && <span className="block text-iron-muted">{i.note}</span>}
+                    </span>
+                    {i.mark ? <StatusBadge status={MARK_LOOK[i.mark]}>{LABELS.checkMark[i.mark]}</StatusBadge> : <span className="text-iron-muted">Not marked</span>}
+                  </li>
+                ))}
+            </ul>
+          </div>
+        ))}
+      </Panel>
+
+      {visit.amendments.length > 0 && (
+        <Panel title="Amendments">
+          <ol className="flex flex-col gap-3">
+            {visit.amendments.map((a) => (
+              <li key={a.id} className="rounded-plate border-l-4 border-brass bg-plate p-2" data-amendment={a.id}>
+                <p className="font-semibold">{a.reason}</p>
+                <p className="text-sm text-iron-muted">
+                  {stampFormat.format(new Date(a.createdAt))} {a.createdByName ? `· ${a.createdByName}` : ''}
+                </p>
+                <ChangeList changes={a.changes} />
+              </li>
+            ))}
+          </ol>
+        </Panel>
+      )}
+      {mayAmend && <AmendForm visit={visit} current={{ findings: latest(visit, 'findings'), recommendations: latest(visit, 'recommendations') }} />}
+    </Page>
+  );
+}
+
+function Field({ label, value }: { label: string; value: string }) {
+  return (
+    <div>
+      <p className="text-sm font-semibold">{label}</p>
+      <p className="whitespace-pre-wrap">{value || '—'}</p>
+    </div>
+  );
+}
+
+const CHANGE_LABEL: Record<string, string> = {
+  findings: 'Findings',
+  recommendations: 'Recommendations',
+  checklist: 'Checklist',
+  readings: 'Readings',
+  outcome: 'Outcome',
+  swaps: 'Part-swap dates',
+};
+
+function ChangeList({ changes }: { changes: Record<string, unknown> }) {
+  return (
+    <dl className="mt-1 text-sm">
+      {Object.entries(changes)
+        .filter(([k]) => k !== 'results')
+        .map(([k, v]) => (
+          <div key={k}>
+            <dt className="font-semibold">{CHANGE_LABEL[k] ?? k}, corrected to:</dt>
+            <dd className="whitespace-pre-wrap">{typeof v === 'string' ? v || '—' : describe(k, v)}</dd>
+          </div>
+        ))}
+    </dl>
+  );
+}
+
+function describe(key: string, v: unknown): string {
+  if (key === 'swaps' && Array.isArray(v)) return v.map((s: { swappedOn?: string; previousSwappedOn?: string }) => `${s.previousSwappedOn ?? '?'} → ${s.swappedOn ?? '?'}`).join('; ');
+  if (key === 'outcome' && v && typeof v === 'object') {
+    const o = v as { outcome?: keyof typeof LABELS.visitOutcome; outcomeReason?: string };
+    return [o.outcome ? LABELS.visitOutcome[o.outcome] : null, o.outcomeReason].filter(Boolean).join(': ');
+  }
+  if (key === 'checklist' && Array.isArray(v)) return `${v.length} item(s) re-marked`;
+  return 'changed';
+}

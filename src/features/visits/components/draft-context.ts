@@ -1,0 +1,39 @@
+import { createContext, useContext } from 'react';
+import type { ApplianceDto } from '@shared/schemas/records';
+import type { DraftFields, FieldErrors, LocalReadings, ReadingKey } from '../draft/draft-fields';
+import type { LiveResults } from '../lib/live-results';
+import type { UnitPrefs } from '../lib/unit-prefs';
+
+export type DraftEditor = {
+  visitId: string;
+  fields: DraftFields;
+  edit: (change: (f: DraftFields) => DraftFields) => void;
+  /** Local range errors merged with the server's last refusal, keyed "readings.combustion.o2Pct" etc. */
+  errors: FieldErrors;
+  appliance: ApplianceDto | undefined;
+  prefs: UnitPrefs;
+  live: LiveResults;
+};
+
+export const DraftContext = createContext<DraftEditor | null>(null);
+
+export function useDraft(): DraftEditor {
+  const ctx = useContext(DraftContext);
+  if (!ctx) throw new Error('useDraft outside a visit draft');
+  return ctx;
+}
+
+/** Sets fields inside one reading block (combustion, gasInput…), or a plain reading when `patch` is not an object. */
+export function useReading<K extends ReadingKey>(key: K) {
+  const { fields, edit, errors } = useDraft();
+  const value = fields.readings[key] as LocalReadings[K];
+  const set = (patch: Partial<NonNullable<LocalReadings[K]>> | LocalReadings[K]) =>
+    edit((f) => {
+      const prev = f.readings[key];
+      const next =
+        patch !== null && typeof patch === 'object' ? { ...(prev && typeof prev === 'object' ? prev : {}), ...patch } : patch;
+      return { ...f, readings: { ...f.readings, [key]: next } };
+    });
+  const errorFor = (field?: string) => errors[field ? `readings.${key}.${field}` : `readings.${key}`];
+  return { value, set, errorFor };
+}

@@ -1,0 +1,85 @@
+import { Notice } from '@/components/ui/notice';
+import { FlagList } from './flag-list';
+import { WarmUpTimer } from './warm-up-timer';
+import { NumberField } from '../inputs';
+import { useDraft, useReading } from '../draft-context';
+import { plain, pressure, temperature } from '../../lib/unit-prefs';
+
+const fmt = (n: number, digits = 1) => n.toFixed(digits);
+
+export function CombustionReadings() {
+  const { visitId, prefs } = useDraft();
+  const { value: c, set, errorFor } = useReading('combustion');
+  const temp = temperature(prefs);
+  const press = pressure(prefs);
+  return (
+    <div className="flex flex-col gap-3">
+      <Notice kind="caution" title="Carbon monoxide can kill">
+        If CO is high or the appliance spills, stop and make the appliance safe. Follow the manufacturer&apos;s instructions, local codes and licensed
+        practice.
+      </Notice>
+      <WarmUpTimer visitId={visitId} onStop={(minutes) => set({ steadyFiringMinutes: minutes })} />
+      <div className="grid grid-cols-2 gap-2">
+        <NumberField label="O2" converter={plain('%', 1)} value={c?.o2Pct} onChange={(v) => set({ o2Pct: v })} error={errorFor('o2Pct')} />
+        <NumberField label="CO" converter={plain('ppm', 0)} value={c?.coPpm} onChange={(v) => set({ coPpm: v })} error={errorFor('coPpm')} />
+        <NumberField key={`flue-${temp.unit}`} label="Flue temp" converter={temp} value={c?.flueTempF} onChange={(v) => set({ flueTempF: v })} error={errorFor('flueTempF')} />
+        <NumberField key={`air-${temp.unit}`} label="Air temp" converter={temp} value={c?.airTempF} onChange={(v) => set({ airTempF: v })} error={errorFor('airTempF')} />
+        <NumberField
+          key={`draft-${press.unit}`}
+          label="Draft"
+          converter={press}
+          allowNegative
+          value={c?.draftInWc}
+          onChange={(v) => set({ draftInWc: v })}
+          error={errorFor('draftInWc')}
+        />
+        <NumberField label="Ambient CO" converter={plain('ppm', 0)} value={c?.ambientCoPpm} onChange={(v) => set({ ambientCoPpm: v })} error={errorFor('ambientCoPpm')} />
+        <NumberField label="Spillage" converter={plain('s', 0)} value={c?.spillageSeconds} onChange={(v) => set({ spillageSeconds: v })} error={errorFor('spillageSeconds')} />
+        <NumberField
+          label="Steady firing"
+          converter={plain('min', 1)}
+          value={c?.steadyFiringMinutes}
+          onChange={(v) => set({ steadyFiringMinutes: v })}
+          error={errorFor('steadyFiringMinutes')}
+        />
+      </div>
+      <CombustionLive />
+    </div>
+  );
+}
+
+function CombustionLive() {
+  const { live, appliance } = useDraft();
+  const r = live.combustion;
+  if (!r) return <p className="text-sm text-iron-muted">Fill in O2, CO, flue and air temperature to see the results.</p>;
+  if (!r.ok) return <p role="alert" className="text-sm font-semibold text-due">⚠ {r.message}</p>;
+  const a = r.value;
+  return (
+    <div className="flex flex-col gap-2 rounded-plate border-2 border-iron bg-plate p-3" aria-label="Live combustion results" role="region">
+      <p className="text-xs font-semibold uppercase tracking-wide text-iron-muted">Live on this phone</p>
+      <dl className="tabular grid grid-cols-2 gap-2">
+        <Result label="CO2" value={`${fmt(a.co2Pct)} %`} />
+        <Result label="Excess air" value={`${fmt(a.excessAirPct, 0)} %`} />
+        <Result label="CO air-free" value={`${fmt(a.coAirFreePpm, 0)} ppm`} note="Method 19 form: CO × 20.9/(20.9 − O2)" />
+        <Result
+          label="Efficiency (HHV)"
+          value={a.efficiencyPct == null ? 'not applicable' : `${fmt(a.efficiencyPct)} %`}
+          note={a.efficiencyPct == null && appliance?.construction === 'condensing' ? 'condensing appliance' : undefined}
+        />
+      </dl>
+      <FlagList flags={a.flags} />
+    </div>
+  );
+}
+
+function Result({ label, value, note }: { label: string; value: string; note?: string }) {
+  return (
+    <div className="flex flex-col">
+      <dt className="text-sm">{label}</dt>
+      <dd className="text-xl font-bold" data-live={label}>
+        {value}
+      </dd>
+      {note && <dd className="text-xs text-iron-muted">{note}</dd>}
+    </div>
+  );
+}

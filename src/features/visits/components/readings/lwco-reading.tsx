@@ -1,0 +1,50 @@
+import { Notice } from '@/components/ui/notice';
+import { ChoiceButtons, TextInput } from '../inputs';
+import { useReading } from '../draft-context';
+
+export function LowWaterCutoffReading() {
+  const { value: w, set, errorFor } = useReading('lowWaterCutoff');
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-col gap-1">
+        <span className="text-sm font-semibold">Cutoff type</span>
+        <ChoiceButtons
+          label="Cutoff type"
+          choices={[
+            { value: 'float', label: 'Float' },
+            { value: 'probe', label: 'Probe' },
+          ]}
+          value={w?.type}
+          onChange={(v) => set({ type: v })}
+        />
+      </div>
+      <TextInput
+        label="Level in the glass when it tripped"
+        placeholder="e.g. 1/4"
+        maxLength={20}
+        value={w?.trippedAtLevel ?? ''}
+        onChange={(v) => set({ trippedAtLevel: v })}
+        error={errorFor('trippedAtLevel')}
+      />
+      <div className="flex flex-col gap-1">
+        <span className="text-sm font-semibold">Did the burner stop?</span>
+        <ChoiceButtons
+          label="Did the burner stop?"
+          choices={[
+            { value: true, label: 'Yes, it stopped', icon: '✓', tone: 'ok' },
+            { value: false, label: 'No, it kept firing', icon: '✗', tone: 'due' },
+          ]}
+          value={w?.burnerStopped}
+          onChange={(v) => set({ burnerStopped: v })}
+        />
+        {errorFor('burnerStopped')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
+      </div>
+      {w?.burnerStopped === false && (
+        <Notice kind="danger" title="Low-water cutoff failed">
+          The burner kept firing at low water. Shut the boiler down and tell the customer before you leave; choose “Shut down as unsafe” below unless it
+          is repaired and passes the test.
+        </Notice>
+      )}
+    </div>
+  );
+}

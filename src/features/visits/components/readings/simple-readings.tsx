@@ -1,0 +1,58 @@
+import { NumberField } from '../inputs';
+import { useDraft, useReading } from '../draft-context';
+import { plain, pressure } from '../../lib/unit-prefs';
+import type { ReadingKey } from '../../draft/draft-fields';
+
+const PSI: Partial<Record<ReadingKey, string>> = {
+  steamOperatingPsi: 'Operating pressure',
+  pressureControlCutInPsi: 'Pressure control cut-in',
+  pressureControlCutOutPsi: 'Pressure control cut-out',
+  fillPressurePsi: 'Fill pressure',
+  expansionTankPrechargePsi: 'Expansion tank pre-charge',
+};
+const IN_WC: Partial<Record<ReadingKey, string>> = { gasInletInWc: 'Gas inlet pressure', gasManifoldInWc: 'Manifold pressure' };
+
+export const isScalarReading = (key: string) => key in PSI || key in IN_WC;
+
+type ScalarKey = 'steamOperatingPsi' | 'pressureControlCutInPsi' | 'pressureControlCutOutPsi' | 'fillPressurePsi' | 'expansionTankPrechargePsi' | 'gasInletInWc' | 'gasManifoldInWc';
+
+export function ScalarReading({ readingKey }: { readingKey: ScalarKey }) {
+  const { prefs } = useDraft();
+  const { value, set, errorFor } = useReading(readingKey);
+  const inWc = readingKey in IN_WC;
+  const converter = inWc ? pressure(prefs) : plain('psi', 1);
+  return (
+    <NumberField
+      key={converter.unit}
+      label={(inWc ? IN_WC : PSI)[readingKey] ?? readingKey}
+      converter={converter}
+      value={value as number | null | undefined}
+      onChange={(v) => set(v)}
+      error={errorFor()}
+    />
+  );
+}
+
+export function OilReadings() {
+  const { prefs } = useDraft();
+  const { value: o, set, errorFor } = useReading('oil');
+  const press = pressure(prefs);
+  return (
+    <div className="grid grid-cols-2 gap-2">
+      <NumberField label="Smoke spot" converter={plain('0–9', 0)} value={o?.smokeSpot} onChange={(v) => set({ smokeSpot: v })} error={errorFor('smokeSpot')} />
+      <NumberField label="Pump pressure" converter={plain('psi', 0)} value={o?.pumpPressurePsi} onChange={(v) => set({ pumpPressurePsi: v })} error={errorFor('pumpPressurePsi')} />
+      <NumberField key={`of-${press.unit}`} label="Over-fire draft" allowNegative converter={press} value={o?.overFireDraftInWc} onChange={(v) => set({ overFireDraftInWc: v })} error={errorFor('overFireDraftInWc')} />
+      <NumberField key={`br-${press.unit}`} label="Breech draft" allowNegative converter={press} value={o?.breechDraftInWc} onChange={(v) => set({ breechDraftInWc: v })} error={errorFor('breechDraftInWc')} />
+    </div>
+  );
+}
+
+export function MakeupWaterReadings() {
+  const { value: m, set, errorFor } = useReading('makeupWater');
+  return (
+    <div className="grid grid-cols-2 gap-2">
+      <NumberField label="Feeder meter" converter={plain('gal', 1)} value={m?.meterGallons} onChange={(v) => set({ meterGallons: v })} error={errorFor('meterGallons')} />
+      <NumberField label="Added by hand" converter={plain('gal', 1)} value={m?.addedByHandGallons} onChange={(v) => set({ addedByHandGallons: v })} error={errorFor('addedByHandGallons')} />
+    </div>
+  );
+}

@@ -1,0 +1,248 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { launchBrowser, PHONE, startTestServer } from '../support/browser';
+import { createTenant, type Tenant } from '../support/tenant';
+import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
+import { insertAppliance, insertSite } from '../../server/db/factories/records';
+import { components, visits } from '../../server/db/schema/index';
+import { todayInTimeZone } from '../../shared/dates';
+
+let server: Awaited<ReturnType<typeof startTestServer>>;
+let browser: Browser;
+let t: Tenant;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  browser = await launchBrowser();
+  t = await createTenant(server.ctx.db);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+/** A steam boiler at an invented street, with the parts a steam tune-up touches. */
+async function steamBoiler(street: string) {
+  const site = await insertSite(server.ctx.db, { companyId: t.company.id, customerId: t.customer.id, street, town: 'Wrenfield' });
+  return insertAppliance(server.ctx.db, {
+    companyId: t.company.id,
+    siteId: site.id,
+    kind: 'steam_boiler',
+    fuel: 'natural_gas',
+    construction: 'cast_iron',
+    installedOn: '2004-10-12',
+    components: [
+      { typeCode: 'thermocouple', spec: { lengthIn: 24 }, installedOn: '2019-11-02' },
+      { typeCode: 'low_water_cutoff_float' },
+      { typeCode: 'gauge_glass', spec: { lengthIn: 12, diameterIn: 0.625 } },
+    ],
+  });
+}
+
+async function signInOnPhone(): Promise<{ context: BrowserContext; page: Page; errors: string[] }> {
+  const context = await browser.newContext(PHONE);
+  const page = await context.newPage();
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
+  page.on('console', (m) => {
+    // Chromium logs every refused or cut-off request as a failed resource; the app's own handling is asserted instead.
+    if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(`console: ${m.text()}`);
+  });
+  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(t.technician.user.email);
+  await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+  return { context, page, errors };
+}
+
+const saveStatus = (page: Page) => page.locator('[data-save-status]');
+
+async function startVisitFromRecord(page: Page) {
+  await page.getByRole('button', { name: 'Start visit' }).click();
+  await page.waitForURL(/\/visits\/[0-9a-f-]{36}$/);
+  return page.url().split('/').pop()!;
+}
+
+describe('a technician on a phone', () => {
+  it('finds a steam boiler by street, works the checklist, swaps the thermocouple and completes the visit', async () => {
+    const boiler = await steamBoiler('88 Cinderwick Row');
+    const today = todayInTimeZone(t.company.timeZone);
+    const { context, page, errors } = await signInOnPhone();
+
+    await page.getByRole('searchbox').fill('Cinderwick');
+    const hit = page.getByRole('link', { name: /88 Cinderwick Row/ });
+    await hit.waitFor();
+    expect(await hit.textContent()).toContain(t.customer.name);
+    expect(await hit.textContent()).toContain(boiler.serial!);
+    await hit.click();
+    await page.waitForURL(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.getByRole('region', { name: 'What it is' }).getByText(boiler.serial!).waitFor();
+
+    const visitId = await startVisitFromRecord(page);
+
+    // Mark every checklist item done.
+    const items = page.locator('li[data-item]');
+    await items.first().waitFor();
+    const count = await items.count();
+    expect(count).toBeGreaterThan(5);
+    for (let i = 0; i < count; i++) await items.nth(i).getByRole('button', { name: 'Done', exact: true }).click();
+    await page.getByText(`${count} of ${count} marked`).waitFor();
+
+    // Low-water cutoff test: float type, tripped at 1/4 of the glass, burner stopped.
+    const lwco = page.locator('li[data-item="lwco_test"]');
+    await lwco.getByRole('button', { name: 'Float' }).click();
+    await lwco.getByRole('textbox', { name: 'Level in the glass when it tripped' }).fill('1/4');
+    await lwco.getByRole('button', { name: /Yes, it stopped/ }).click();
+
+    // Gauge glass level, judged live.
+    const level = page.locator('li[data-item="water_level"]');
+    await level.getByRole('textbox', { name: 'Water level in the gauge glass' }).fill('5/8');
+    await level.getByText('Level visible').waitFor();
+    await level.getByText('63 % of the glass').waitFor();
+
+    // Combustion typed in °C (a per-phone choice), stored in °F; live results match what the server keeps.
+    await page.getByRole('button', { name: '°C' }).click();
+    const combustion = page.locator('li[data-item="combustion_test"]');
+    await combustion.getByRole('textbox', { name: /^O2/ }).fill('7.5');
+    await combustion.getByRole('textbox', { name: /^CO/ }).fill('40');
+    await combustion.getByRole('textbox', { name: /^Flue temp/ }).fill('220');
+    await combustion.getByRole('textbox', { name: /^Air temp/ }).fill('20');
+    const live = combustion.getByRole('region', { name: 'Live combustion results' });
+    await live.getByText('CO air-free').waitFor();
+    const liveEfficiency = await live.locator('[data-live="Efficiency (HHV)"]').textContent();
+    expect(liveEfficiency).toMatch(/^\d+\.\d %$/);
+
+    // Part swap in two taps: the thermocouple, then "Replaced today".
+    await page.getByRole('button', { name: /^thermocouple/ }).click();
+    const sheet = page.getByRole('dialog');
+    await sheet.getByRole('button', { name: 'would not hold the pilot' }).click();
+    await sheet.getByRole('button', { name: 'Replaced today' }).click();
+    await page.getByText('✓ thermocouple replaced · would not hold the pilot').waitFor();
+
+    await page.getByRole('textbox', { name: 'Findings' }).fill('Cutoff tripped and stopped the burner. Pilot dropped out; thermocouple replaced.');
+    await page.getByRole('button', { name: 'Left operating' }).click();
+    await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
+    // The server's own results come back with the save.
+    const kept = page.getByRole('region', { name: 'Kept with the visit' });
+    await kept.getByText('Stopped the burner (passed)').waitFor();
+    expect(await kept.locator('[data-result="Efficiency (HHV)"]').textContent()).toBe(liveEfficiency);
+
+    await page.getByRole('button', { name: 'Complete visit' }).click();
+    await page.waitForURL(`${server.baseUrl}/appliances/${boiler.id}`);
+
+    const history = page.getByRole('list', { name: 'History, newest first' });
+    await history.locator('li[data-kind="visit"]').first().waitFor();
+    await history.locator('li[data-kind="part_swap"]').first().waitFor();
+    const thermocouple = page.locator('li[data-component="thermocouple"]');
+    expect(await thermocouple.count()).toBe(1);
+    const [y, m, d] = today.split('-').map(Number);
+    const todayShown = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
+    expect(await thermocouple.textContent()).toContain(`Installed ${todayShown}`);
+
+    const stored = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    expect(stored[0].status).toBe('completed');
+    expect(stored[0].outcome).toBe('left_operating');
+    expect(stored[0].readings).toMatchObject({ gaugeGlassLevel: '5/8', lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', burnerStopped: true } });
+    expect(stored[0].checklist.every((c) => c.mark === 'done')).toBe(true);
+    expect(stored[0].readings).toMatchObject({ combustion: { o2Pct: 7.5, coPpm: 40, flueTempF: 428, airTempF: 68 } });
+    const parts = await server.ctx.db
+      .select()
+      .from(components)
+      .where(and(eq(components.applianceId, boiler.id), eq(components.typeCode, 'thermocouple')));
+    const current = parts.filter((p) => p.removedOn === null);
+    const removed = parts.filter((p) => p.removedOn !== null);
+    expect(current.map((p) => p.installedOn)).toEqual([today]);
+    expect(removed.map((p) => [p.removedOn, p.removalReason])).toEqual([[today, 'would not hold the pilot']]);
+
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('keeps a draft typed without signal on the phone and sends it once, the latest text, when signal returns', async () => {
+    const boiler = await steamBoiler('5 Larkspur Cut');
+    const { context, page, errors } = await signInOnPhone();
+    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    const visitId = await startVisitFromRecord(page);
+
+    const findings = page.getByRole('textbox', { name: 'Findings' });
+    await findings.fill('Pilot lit.');
+    await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
+    const [{ revision: savedRevision }] = await server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
+
+    await context.setOffline(true);
+    const latest = 'Pilot lit. Flue pipe rusted at the elbow; customer told.';
+    await findings.fill('Pilot lit. Flue pipe rusted');
+    await findings.fill(latest);
+    await page.getByText('Saved on this phone — will send when signal returns').waitFor();
+    const local = await page.evaluate((id) => JSON.parse(localStorage.getItem(`lifeplate:visit-draft:${id}`) ?? 'null'), visitId);
+    expect(local.fields.findings).toBe(latest);
+    expect(local.dirty).toBe(true);
+
+    // Signal for the page but not for saves: the draft must come back from this phone after a reload.
+    await page.route('**/api/visits/*/draft', (route) => route.abort());
+    await context.setOffline(false);
+    await page.reload();
+    await expect.poll(() => page.getByRole('textbox', { name: 'Findings' }).inputValue(), { timeout: 10_000 }).toBe(latest);
+    await page.getByText('Saved on this phone — will send when signal returns').waitFor();
+
+    const puts: { findings?: string; revision?: number }[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'PUT' && r.url().endsWith(`/api/visits/${visitId}/draft`)) puts.push(r.postDataJSON());
+    });
+    await page.unroute('**/api/visits/*/draft');
+    // Signal returns: the browser says so.
+    await page.evaluate(() => window.dispatchEvent(new Event('online')));
+    await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 30_000 }).toBe('saved');
+    // A second "online" with nothing new to send must not send the same state again.
+    await page.evaluate(() => window.dispatchEvent(new Event('online')));
+    await page.waitForTimeout(1500);
+
+    expect(puts).toHaveLength(1);
+    expect(puts[0].findings).toBe(latest);
+    const [row] = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    expect(row.findings).toBe(latest);
+    expect(row.revision).toBe(savedRevision + 1);
+    const after = await page.evaluate((id) => JSON.parse(localStorage.getItem(`lifeplate:visit-draft:${id}`) ?? 'null'), visitId);
+    expect(after.dirty).toBe(false);
+
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('on a revision conflict refetches, keeps what this phone changed on top of the other change, and saves once more', async () => {
+    const boiler = await steamBoiler('31 Tallow Yard');
+    const { context, page, errors } = await signInOnPhone();
+    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    const visitId = await startVisitFromRecord(page);
+    const findings = page.getByRole('textbox', { name: 'Findings' });
+    await findings.fill('Burners cleaned.');
+    await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
+
+    // Another device saves the same draft first.
+    const [{ revision }] = await server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
+    const other = await page.evaluate(
+      async ({ id, rev }) =>
+        (await fetch(`/api/visits/${id}/draft`, { method: 'PUT', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ revision: rev, recommendations: 'Replace the vent connector.' }) })).status,
+      { id: visitId, rev: revision },
+    );
+    expect(other).toBe(200);
+
+    const statuses: number[] = [];
+    page.on('response', (r) => {
+      if (r.request().method() === 'PUT' && r.url().endsWith(`/api/visits/${visitId}/draft`)) statuses.push(r.status());
+    });
+    await findings.fill('Burners cleaned. Pilot adjusted.');
+    await expect.poll(() => statuses, { timeout: 10_000 }).toEqual([409, 200]);
+    await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
+    expect(await page.getByRole('textbox', { name: 'Recommendations' }).inputValue()).toBe('Replace the vent connector.');
+
+    const [row] = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    expect(row.findings).toBe('Burners cleaned. Pilot adjusted.');
+    expect(row.recommendations).toBe('Replace the vent connector.');
+    expect(row.revision).toBe(revision + 2);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+});
