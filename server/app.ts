@@ -22,6 +22,8 @@ import { checklistRoutes } from './modules/checklists/checklists.routes';
 import { visitsRoutes } from './modules/visits/visits.routes';
 import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
+import { tagsRoutes } from './modules/tags/tags.routes';
+import { photosRoutes } from './modules/photos/photos.routes';
 
 export type AppOptions = {
   /** Built client (vite build output) to serve; omitted in API-only tests. */
@@ -63,6 +65,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(visitsRoutes(ctx));
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
+  api.use(tagsRoutes(ctx));
+  api.use(photosRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -3,6 +3,7 @@ import type { Logger } from 'pino';
 import type { Auth } from './auth/auth';
 import type { AppConfig } from './config';
 import type { Db } from './db/client';
+import type { ObjectStorage } from './lib/object-storage';
 
 /** Everything a request handler may need, built once at boot and passed down explicitly (no module singletons). */
 export type AppContext = {
@@ -11,4 +12,6 @@ export type AppContext = {
   pool: pg.Pool;
   auth: Auth;
   logger: Logger;
+  /** Photo bytes (S3 API; the local fake in development and tests). */
+  storage: ObjectStorage;
 };

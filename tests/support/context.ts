@@ -13,6 +13,8 @@ export function testConfig(overrides: Record<string, string> = {}): AppConfig {
     BASE_URL: 'http://127.0.0.1:3999',
     LOG_LEVEL: 'silent',
     SIGN_IN_RATE_LIMIT: '100000',
+    S3_ENDPOINT: inject('s3Endpoint'),
+    S3_BUCKET: inject('s3Bucket'),
     ...overrides,
   });
 }

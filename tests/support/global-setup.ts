@@ -6,6 +6,9 @@ import { execFileSync } from 'node:child_process';
 import type { TestProject } from 'vitest/node';
 import { clusterUrl, ensureCluster, ensureDatabase, findPgBin, startCluster, stopCluster, type Cluster } from '../../scripts/lib/postgres';
 import { runMigrations } from '../../server/db/migrate';
+import { startFakeS3 } from '../../fakes/s3';
+
+const TEST_BUCKET = 'lifeplate-test';
 
 export async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -22,6 +25,8 @@ declare module 'vitest' {
   export interface ProvidedContext {
     databaseUrl: string;
     runDir: string;
+    s3Endpoint: string;
+    s3Bucket: string;
   }
 }
 
@@ -36,7 +41,13 @@ export default async function setup(project: TestProject) {
   process.env.LIFEPLATE_PG_FSYNC = 'off';
   ensureCluster(cluster);
   startCluster(cluster);
-  const teardown = () => {
+  let s3: Awaited<ReturnType<typeof startFakeS3>> | undefined;
+  const teardown = async () => {
+    try {
+      await s3?.close();
+    } catch {
+      // best effort
+    }
     stopCluster(cluster);
     try {
       execFileSync('rm', ['-rf', runDir]);
@@ -50,8 +61,11 @@ export default async function setup(project: TestProject) {
     await runMigrations(databaseUrl);
     project.provide('databaseUrl', databaseUrl);
     project.provide('runDir', runDir);
+    s3 = await startFakeS3({ port: await freePort(), directory: path.join(runDir, 's3'), bucket: TEST_BUCKET });
+    project.provide('s3Endpoint', s3.endpoint);
+    project.provide('s3Bucket', TEST_BUCKET);
   } catch (err) {
-    teardown();
+    await teardown();
     throw err;
   }
   return teardown;

@@ -3,3 +3,5 @@ export * from './companies';
 export * from './records';
 export * from './catalog';
 export * from './water';
+export * from './tags';
+export * from './photos';

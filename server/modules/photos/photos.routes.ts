@@ -1,0 +1,48 @@
+import { Router } from 'express';
+import multer from 'multer';
+import type { AppContext } from '../../context';
+import { defineRoute } from '../../lib/route';
+import { currentMember, requirePermission } from '../../middleware/authenticate';
+import { uuidParam } from '../../../shared/schemas/common';
+import { MAX_PHOTO_BYTES, MAX_PHOTO_FILES, photoListQuery, photoPatch, photoUploadFields } from '../../../shared/schemas/photos';
+import { photosService, type PhotoVariant } from './photos.service';
+
+export function photosRoutes(ctx: AppContext) {
+  const router = Router();
+  const service = photosService(ctx);
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: MAX_PHOTO_BYTES, files: MAX_PHOTO_FILES, fields: 20, fieldSize: 8 * 1024, parts: MAX_PHOTO_FILES + 20 },
+  });
+
+  // The multipart body is read only after the caller's role is checked, so a stranger cannot make us buffer 250 MB.
+  router.post('/photos', requirePermission('visits:record'), upload.array('files', MAX_PHOTO_FILES));
+  defineRoute(router, 'post', '/photos', { access: { permission: 'visits:record' }, schemas: { body: photoUploadFields } }, async ({ body }, req, res) => {
+    const files = Array.isArray(req.files) ? req.files : [];
+    const { result, created } = await service.upload(currentMember(res), body, files);
+    res.status(created ? 201 : 200).json(result);
+  });
+  defineRoute(router, 'get', '/photos', { access: { permission: 'records:read' }, schemas: { query: photoListQuery } }, ({ query }, _req, res) =>
+    service.list(currentMember(res), query.applianceId),
+  );
+  for (const variant of ['display', 'thumb'] as const satisfies PhotoVariant[]) {
+    defineRoute(router, 'get', `/photos/:id/${variant}`, { access: 'signed-in', schemas: { params: uuidParam } }, async ({ params }, req, res) => {
+      const image = await service.image(res.locals.principal, params.id, variant);
+      // Served from our own origin with a private cache: the bytes of one photo never change under its id.
+      res.setHeader('Cache-Control', 'private, max-age=86400');
+      res.setHeader('ETag', image.etag);
+      if (matchesEtag(req.headers['if-none-match'], image.etag)) return void res.status(304).end();
+      const object = await image.load();
+      res.setHeader('Content-Type', object.contentType ?? 'image/jpeg');
+      res.setHeader('Content-Length', String(object.body.length));
+      res.end(object.body);
+    });
+  }
+  defineRoute(router, 'patch', '/photos/:id', { access: { permission: 'records:write' }, schemas: { params: uuidParam, body: photoPatch } }, ({ params, body }, _req, res) =>
+    service.update(currentMember(res), params.id, body),
+  );
+  return router;
+}
+
+const matchesEtag = (header: string | undefined, etag: string) =>
+  Boolean(header) && header!.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag || tag.trim() === '*');
