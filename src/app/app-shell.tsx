@@ -24,26 +24,26 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen flex-col">
-      <header className="no-print sticky top-0 z-10 bg-iron text-plate">
+      <header className="no-print sticky top-0 z-10 bg-header text-header-text">
         <div className="mx-auto flex max-w-5xl items-center gap-3 px-3 py-2 sm:px-6">
           <NavLink to="/" className="flex min-h-tap items-center gap-2 font-bold" aria-label="Lifeplate home">
             <LogoMark />
             <span className="text-lg">Lifeplate</span>
           </NavLink>
-          <span className="hidden truncate text-sm text-plate/70 sm:inline">{me.data?.company?.name}</span>
+          <span className="hidden truncate text-sm text-header-text/70 sm:inline">{me.data?.company?.name}</span>
           <div className="ml-auto flex items-center gap-1">
             <button
               type="button"
               onClick={() => setDim(!dim)}
               aria-pressed={dim}
-              className="min-h-tap min-w-tap rounded-plate px-2 text-sm hover:bg-iron-soft"
+              className="min-h-tap min-w-tap rounded-plate px-2 text-sm hover:bg-header-soft"
               title="Basement mode: dark, high contrast"
             >
               {dim ? '☀ Light' : '◐ Dim'}
             </button>
             <button
               type="button"
-              className="min-h-tap rounded-plate px-3 text-sm font-semibold hover:bg-iron-soft"
+              className="min-h-tap rounded-plate px-3 text-sm font-semibold hover:bg-header-soft"
               onClick={async () => {
                 await signOut.mutateAsync();
                 navigate('/sign-in', { replace: true });
@@ -60,13 +60,13 @@ export function AppShell() {
               to={item.to}
               end={item.to === '/'}
               className={({ isActive }) =>
-                `flex min-h-tap items-center whitespace-nowrap rounded-t-plate px-3 font-semibold ${isActive ? 'bg-plate text-iron' : 'text-plate/85 hover:bg-iron-soft'}`
+                `flex min-h-tap items-center whitespace-nowrap rounded-t-plate px-3 font-semibold ${isActive ? 'bg-plate text-iron' : 'text-header-text/85 hover:bg-header-soft'}`
               }
             >
               {item.label}
             </NavLink>
           ))}
-          <span className="ml-auto hidden items-center px-2 text-sm text-plate/70 sm:flex">
+          <span className="ml-auto hidden items-center px-2 text-sm text-header-text/70 sm:flex">
             {me.data?.user.name} · {roleLabel}
           </span>
         </nav>

@@ -5,9 +5,11 @@ type NavItem = { to: string; label: string; permission?: Permission; homeowner?:
 
 const ITEMS: NavItem[] = [
   { to: '/', label: 'Find' },
+  { to: '/scan', label: 'Scan tag', permission: 'records:read' },
   { to: '/due', label: 'Due list', permission: 'catalog:manage' },
   { to: '/customers', label: 'Customers', permission: 'records:read' },
   { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
+  { to: '/tags', label: 'Tags', permission: 'catalog:manage' },
   { to: '/team', label: 'Team', permission: 'records:read' },
   { to: '/settings', label: 'Company', permission: 'company:settings' },
 ];

@@ -27,6 +27,14 @@ function guardedPage(path: string, permission: Permission, load: () => Promise<C
 export function createAppRouter() {
   return createBrowserRouter([
     { path: '/sign-in', element: <SignInPage /> },
+    // Opened by anyone who scans a tag, signed in or not: the page itself decides what each person sees.
+    {
+      path: '/t/:code',
+      lazy: async () => {
+        const { TagLandingPage } = await import('@/features/tags/components/tag-landing-page');
+        return { element: <TagLandingPage /> };
+      },
+    },
     {
       element: (
         <RequireSignIn>
@@ -38,12 +46,27 @@ export function createAppRouter() {
         guardedPage('team', 'records:read', async () => (await import('@/features/team/components/team-page')).TeamPage),
         guardedPage('settings', 'company:settings', async () => (await import('@/features/company/components/company-settings-page')).CompanySettingsPage),
         guardedPage('appliances/new', 'records:write', async () => (await import('@/features/customers/components/new-appliance-page')).NewAppliancePage),
-        guardedPage('appliances/:id', 'records:read', async () => (await import('@/features/appliance-record/components/appliance-record-page')).ApplianceRecordPage),
+        guardedPage('appliances/:id', 'records:read', async () => {
+          const [{ ApplianceRecordPage }, { AppliancePhotos }, { ApplianceTag }] = await Promise.all([
+            import('@/features/appliance-record/components/appliance-record-page'),
+            import('@/features/photos/components/appliance-photos'),
+            import('@/features/tags/components/appliance-tag'),
+          ]);
+          return function ApplianceRecordWithSections() {
+            return (
+              <ApplianceRecordPage
+                slots={{ photos: (id) => <AppliancePhotos applianceId={id} />, tag: (id) => <ApplianceTag applianceId={id} /> }}
+              />
+            );
+          };
+        }),
         guardedPage('visits/:id', 'records:read', async () => (await import('@/features/visits/components/visit-page')).VisitPage),
         guardedPage('customers', 'records:read', async () => (await import('@/features/customers/components/customers-page')).CustomersPage),
         guardedPage('customers/new', 'records:write', async () => (await import('@/features/customers/components/new-customer-page')).NewCustomerPage),
         guardedPage('customers/:id', 'records:read', async () => (await import('@/features/customers/components/customer-detail-page')).CustomerDetailPage),
         guardedPage('due', 'records:read', async () => (await import('@/features/due/components/due-list-page')).DueListPage),
+        guardedPage('scan', 'records:read', async () => (await import('@/features/tags/components/scan-page')).ScanPage),
+        guardedPage('tags', 'catalog:manage', async () => (await import('@/features/tags/components/tag-batches-page')).TagBatchesPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         { path: '*', element: <NotFoundPage /> },
       ],

@@ -21,7 +21,7 @@ function FieldShell({ id, label, error, hint, children }: FieldProps & { id: str
 }
 
 const control =
-  'min-h-tap w-full rounded-plate border-2 border-plate-line bg-white px-3 text-base text-iron aria-[invalid=true]:border-due';
+  'min-h-tap w-full rounded-plate border-2 border-plate-line bg-surface px-3 text-base text-iron aria-[invalid=true]:border-due';
 
 export function TextField({ label, error, hint, ...props }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
   const id = useId();

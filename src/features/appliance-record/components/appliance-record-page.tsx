@@ -12,11 +12,16 @@ import { CombustionTrend } from './combustion-trend';
 import { ComponentsList } from './components-list';
 import { DueList } from './due-list';
 import { EndOfLife } from './end-of-life';
+import { MakeupWaterSection } from './makeup-water-section';
+import type { ReactNode } from 'react';
 import { RecordHeader } from './record-header';
 import { StartVisit } from './start-visit';
 import { Timeline } from './timeline';
 
-export function ApplianceRecordPage() {
+/** Sections owned by other features (tags, photos) are handed in by the app's router, so features stay independent. */
+export type RecordSlots = { photos?: (applianceId: string) => ReactNode; tag?: (applianceId: string) => ReactNode };
+
+export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
   const { id = '' } = useParams();
   const record = useApplianceRecord(id);
   const me = useMe();
@@ -57,7 +62,12 @@ export function ApplianceRecordPage() {
       <DueList due={r.due} />
       <EndOfLife endOfLife={r.endOfLife} ageYears={r.ageYears} />
       <ComponentsList components={r.components} />
+      {slots.tag?.(a.id)}
+      {slots.photos?.(a.id)}
       <CombustionTrend applianceId={a.id} />
+      {a.kind === 'steam_boiler' && (
+        <MakeupWaterSection applianceId={a.id} timeZone={me.data?.company?.timeZone ?? 'UTC'} canRecord={can(me.data?.principal, 'visits:record') && a.status !== 'removed'} />
+      )}
       <Timeline applianceId={a.id} />
     </Page>
   );

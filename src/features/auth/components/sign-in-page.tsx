@@ -51,7 +51,7 @@ export function SignInPage() {
           <p className="text-iron-muted">The life record of every boiler you look after.</p>
         </div>
       </div>
-      <form onSubmit={submit} noValidate className="flex flex-col gap-4 rounded-plate border border-plate-line bg-white p-5">
+      <form onSubmit={submit} noValidate className="flex flex-col gap-4 rounded-plate border border-plate-line bg-surface p-5">
         <h1 className="text-xl font-semibold">Sign in</h1>
         {errors.form && <Notice kind="danger" title="Not signed in">{errors.form}</Notice>}
         <TextField label="E-mail" type="email" autoComplete="username" value={email} onChange={(e) => setEmail(e.target.value)} error={errors.email} />

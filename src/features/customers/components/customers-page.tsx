@@ -138,7 +138,7 @@ function SortHeader({ label, value, sort, onSort }: { label: string; value: Cust
 
 function CustomerTable({ items, sort, onSort, busy }: { items: CustomerListItem[]; sort: CustomerSort; onSort: (s: CustomerSort) => void; busy: boolean }) {
   return (
-    <div className="hidden overflow-x-auto rounded-plate border border-plate-line bg-white md:block">
+    <div className="hidden overflow-x-auto rounded-plate border border-plate-line bg-surface md:block">
       <table className={`w-full text-left ${busy ? 'opacity-60' : ''}`} aria-busy={busy}>
         <caption className="sr-only">Customers</caption>
         <thead className="border-b-2 border-plate-line bg-plate-deep text-sm">
@@ -176,7 +176,7 @@ function CustomerCards({ items }: { items: CustomerListItem[] }) {
   return (
     <ul className="flex flex-col gap-2 md:hidden" aria-label="Customers">
       {items.map((c) => (
-        <li key={c.id} className="rounded-plate border border-plate-line bg-white p-3">
+        <li key={c.id} className="rounded-plate border border-plate-line bg-surface p-3">
           <Link to={`/customers/${c.id}`} className="flex min-h-tap items-center text-lg font-semibold underline underline-offset-2">
             {c.name}
           </Link>

@@ -40,7 +40,7 @@ export function TeamPage() {
                       <label className="sr-only" htmlFor={`role-${m.id}`}>Role for {m.name}</label>
                       <select
                         id={`role-${m.id}`}
-                        className="min-h-tap rounded-plate border-2 border-plate-line bg-white px-2"
+                        className="min-h-tap rounded-plate border-2 border-plate-line bg-surface px-2"
                         value={m.role}
                         onChange={(e) => changeRole.mutate({ id: m.id, role: e.target.value as MemberRole })}
                       >
