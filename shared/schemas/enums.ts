@@ -15,6 +15,7 @@ export const TIMELINE_KINDS = [
   'amendment',
   'part_swap',
   'reading',
+  'makeup_water',
   'photo',
   'note',
   'reminder',

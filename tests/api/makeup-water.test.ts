@@ -44,7 +44,7 @@ describe('makeup-water log', () => {
     const events = await ctx.db
       .select()
       .from(timelineEvents)
-      .where(and(eq(timelineEvents.applianceId, boilerId), eq(timelineEvents.kind, 'reading')));
+      .where(and(eq(timelineEvents.applianceId, boilerId), eq(timelineEvents.kind, 'makeup_water')));
     expect(events).toHaveLength(5);
     expect(events.map((e) => e.summary)).toContain('Makeup-water meter read 120 gal');
   });

@@ -55,7 +55,7 @@ describe('demo seed', () => {
       .from(timelineEvents)
       .where(eq(timelineEvents.companyId, demo.id))
       .groupBy(timelineEvents.kind);
-    expect(kinds.map((k) => k.kind).sort()).toEqual(['install', 'part_swap', 'reading', 'status', 'visit']);
+    expect(kinds.map((k) => k.kind).sort()).toEqual(['install', 'makeup_water', 'part_swap', 'reading', 'status', 'visit']);
     const future = await ctx.db.select({ n: count() }).from(timelineEvents).where(and(eq(timelineEvents.companyId, demo.id), sql`${timelineEvents.occurredAt} > now()`));
     expect(future[0].n).toBe(0);
     const removed = demoAppliances.filter((a) => a.status === 'removed');

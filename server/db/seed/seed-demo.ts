@@ -8,6 +8,8 @@ import { DEMO_COMPANY, DEMO_HOMEOWNER, DEMO_MEMBERS, DEMO_PASSWORD, OTHER_COMPAN
 import { seedDemoRecords } from './demo-records';
 import { applyDemoCompanyPolicies } from './demo-company-policies';
 import { recomputeDueForCompany } from '../../modules/due/due.repository';
+import { seedDemoMakeupWater } from './demo-makeup-water';
+import { todayInTimeZone } from '../../../shared/dates';
 
 /** Seeds the invented demo scenario once; a second run finds the demo company and does nothing. */
 export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
@@ -36,6 +38,7 @@ export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
     });
     await insertHomeowner(tx, { companyId: demo.id, customerId: homeownerCustomer.id, ...DEMO_HOMEOWNER, password: DEMO_PASSWORD });
     await seedDemoRecords(tx, { demoCompanyId: demo.id, otherCompanyId: other.id, homeownerCustomerId: homeownerCustomer.id, userIds });
+    await seedDemoMakeupWater(tx, { companyId: demo.id, homeownerCustomerId: homeownerCustomer.id, today: todayInTimeZone(DEMO_COMPANY.timeZone) });
     await applyDemoCompanyPolicies(tx, demo.id);
     await recomputeDueForCompany(tx, demo.id);
   });

@@ -43,7 +43,7 @@ export function makeupWaterService(ctx: AppContext) {
           companyId: actor.companyId,
           applianceId,
           occurredAt: new Date(`${input.recordedOn}T12:00:00Z`),
-          kind: 'reading',
+          kind: 'makeup_water',
           summary,
           refId: row.id,
           data: { makeupWater: { kind: input.kind, gallons: input.gallons ?? null } },

@@ -59,6 +59,14 @@ export const tagsRepository = {
       .limit(1);
     return row ?? null;
   },
+  /** The appliance's tags, the attached one first, then retired ones newest first. */
+  tagsOf(db: DbOrTx, companyId: string, applianceId: string) {
+    return db
+      .select()
+      .from(tags)
+      .where(and(eq(tags.companyId, companyId), eq(tags.applianceId, applianceId)))
+      .orderBy(sql`${tags.status} = 'assigned' desc`, desc(tags.assignedAt), desc(tags.id));
+  },
   async update(db: DbOrTx, id: string, values: Partial<typeof tags.$inferInsert>) {
     const [row] = await db.update(tags).set(values).where(eq(tags.id, id)).returning();
     return row;

@@ -26,6 +26,9 @@ export function tagsRoutes(ctx: AppContext) {
   defineRoute(router, 'post', '/tags/assign', { access: { permission: 'records:write' }, schemas: { body: tagAssignInput } }, ({ body }, _req, res) =>
     service.assign(currentMember(res), body),
   );
+  defineRoute(router, 'get', '/appliances/:id/tags', { access: { permission: 'records:read' }, schemas: { params: uuidParam } }, ({ params }, _req, res) =>
+    service.listForAppliance(currentMember(res), params.id),
+  );
   defineRoute(router, 'get', '/tags/:code/resolve', { access: 'signed-in', schemas: { params: tagCodeParam } }, ({ params }, _req, res) =>
     service.resolve(res.locals.principal, params.code),
   );

@@ -102,6 +102,11 @@ export function tagsService(ctx: AppContext, generate: () => string = generateTa
       });
     },
 
+    async listForAppliance(actor: Member, applianceId: string): Promise<TagDto[]> {
+      if (!(await repo.findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
+      return (await repo.tagsOf(ctx.db, actor.companyId, applianceId)).map(tagDto);
+    },
+
     /** Members of the owning company see the tag's state; a homeowner sees only their own appliance; anyone else 404. */
     async resolve(principal: Principal | null | undefined, code: string): Promise<TagResolutionDto> {
       const tag = await repo.findByCode(ctx.db, code);

@@ -17,6 +17,7 @@ const KINDS: { kind: TimelineKind; label: string; icon: string }[] = [
   { kind: 'status', label: 'Status', icon: '●' },
   { kind: 'note', label: 'Notes', icon: '✉' },
   { kind: 'photo', label: 'Photos', icon: '▣' },
+  { kind: 'makeup_water', label: 'Makeup water', icon: '≈' },
   { kind: 'reminder', label: 'Reminders', icon: '◷' },
 ];
 const ICON = Object.fromEntries(KINDS.map((k) => [k.kind, k.icon])) as Record<TimelineKind, string>;

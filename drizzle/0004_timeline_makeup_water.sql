@@ -1,0 +1,1 @@
+ALTER TYPE "public"."timeline_kind" ADD VALUE 'makeup_water' BEFORE 'photo';
