@@ -6,7 +6,7 @@ const day = (iso: string, plus: number) => new Date(Date.parse(`${iso}T00:00:00Z
 
 /**
  * Invented feeder-meter logs for two steam boilers over the past heating season: one steady (a few gallons a month),
- * one whose use climbs week by week, as a leak would show. They make the makeup-water flags visible in the demo.
+ * one whose use jumps in the last month, as a new leak would show. They make the makeup-water flags visible in the demo.
  */
 export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; homeownerCustomerId: string; today: string }) {
   const steam = await tx
@@ -26,7 +26,8 @@ export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; ho
   if (leaking) {
     let meter = 1280;
     for (let w = 0; w * 7 <= 150; w++) {
-      meter += w === 0 ? 0 : 2 + Math.floor(w / 4) * 2;
+      // Steady at first, then a sharp rise over the last month, as a new leak would show.
+      meter += w === 0 ? 0 : w < 18 ? 2 + Math.floor(w / 6) : 12;
       rows.push({ companyId: input.companyId, applianceId: leaking.id, recordedOn: day(start, w * 7), kind: 'meter_reading', gallons: meter, note: null });
     }
   }
