@@ -1,18 +1,26 @@
 import type { Config } from 'tailwindcss';
 
-/** Lifeplate's design tokens. Colour is never the only signal: every status also carries a word and an icon. */
+/**
+ * Lifeplate's design tokens. Each colour reads a CSS variable (set for the dark "basement" theme in src/index.css)
+ * and falls back to its light value here. Colour is never the only signal: every status also carries a word and an icon.
+ */
+const token = (name: string, light: string) => `var(--lp-${name}, ${light})`;
+
 export default {
   content: ['./index.html', './src/**/*.{ts,tsx}'],
   theme: {
     extend: {
       colors: {
-        iron: { DEFAULT: '#23272B', soft: '#3A4046', muted: '#5B636B' },
-        plate: { DEFAULT: '#F6F3EE', deep: '#ECE6DC', line: '#D9D1C3' },
-        brass: { DEFAULT: '#A9844F', dark: '#7E6139', light: '#E9DcC4' },
-        ok: { DEFAULT: '#2E7D6B', soft: '#DCEFE9' },
-        soon: { DEFAULT: '#B7791F', soft: '#F7EBD6' },
-        due: { DEFAULT: '#B23A2E', soft: '#F6DEDA' },
-        unsafe: { DEFAULT: '#C8102E', soft: '#FFFFFF' },
+        iron: { DEFAULT: token('iron', '#23272B'), soft: token('iron-soft', '#3A4046'), muted: token('iron-muted', '#5B636B') },
+        plate: { DEFAULT: token('plate', '#F6F3EE'), deep: token('plate-deep', '#ECE6DC'), line: token('plate-line', '#D9D1C3') },
+        surface: token('surface', '#FFFFFF'),
+        brass: { DEFAULT: '#A9844F', dark: token('brass-dark', '#7E6139'), light: token('brass-light', '#E9DCC4') },
+        ok: { DEFAULT: token('ok', '#2E7D6B'), soft: token('ok-soft', '#DCEFE9') },
+        soon: { DEFAULT: token('soon', '#B7791F'), soft: token('soon-soft', '#F7EBD6') },
+        due: { DEFAULT: token('due', '#B23A2E'), soft: token('due-soft', '#F6DEDA') },
+        unsafe: { DEFAULT: token('unsafe', '#C8102E'), soft: token('unsafe-soft', '#FFFFFF') },
+        // The header stays dark in both themes.
+        header: { DEFAULT: '#23272B', text: '#F6F3EE', soft: '#3A4046' },
       },
       fontFamily: {
         sans: ['"Source Sans 3"', 'ui-sans-serif', 'system-ui', 'sans-serif'],
