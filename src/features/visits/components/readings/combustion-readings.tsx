@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { Notice } from '@/components/ui/notice';
 import { FlagList } from './flag-list';
 import { WarmUpTimer } from './warm-up-timer';
@@ -68,6 +69,27 @@ function CombustionLive() {
         />
       </dl>
       <FlagList flags={a.flags} />
+      <SiegertLoss lossPct={a.siegertLossPct} basis={a.siegertBasis} />
+    </div>
+  );
+}
+
+/**
+ * The Siegert flue-gas loss is on the net (lower heating value) basis, so 100 minus it is not the HHV efficiency above.
+ * It stays folded away unless asked for, and always carries its basis.
+ */
+function SiegertLoss({ lossPct, basis }: { lossPct: number; basis: string }) {
+  const [open, setOpen] = useState(false);
+  return (
+    <div className="text-sm">
+      <button type="button" className="min-h-tap font-semibold underline" aria-expanded={open} onClick={() => setOpen(!open)}>
+        {open ? 'Hide' : 'Show'} flue-gas loss (Siegert, net basis)
+      </button>
+      {open && (
+        <p className="tabular">
+          Flue-gas loss <strong>{fmt(lossPct)} %</strong>, net basis. Not comparable with the HHV efficiency above. <span className="text-xs text-iron-muted">({basis})</span>
+        </p>
+      )}
     </div>
   );
 }
