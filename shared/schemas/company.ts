@@ -11,12 +11,19 @@ export const companySettingsInput = z.object({
     .string()
     .refine((tz) => timeZones.has(tz) || tz === 'UTC', 'Pick a time zone from the list, e.g. America/New_York.')
     .optional(),
+  underFiringTolerancePct: z
+    .number('Give a percentage.')
+    .int('Use a whole percentage.')
+    .min(1, 'At least 1 %.')
+    .max(50, 'At most 50 %.')
+    .nullable()
+    .optional(),
 });
 export type CompanySettingsInput = z.infer<typeof companySettingsInput>;
 
 export const memberRoleInput = z.object({ role: z.enum(MEMBER_ROLES, 'Choose owner, manager or technician.') });
 
-export type CompanyDto = { id: string; name: string; phone: string; timeZone: string; today: string };
+export type CompanyDto = { id: string; name: string; phone: string; timeZone: string; today: string; underFiringTolerancePct: number | null };
 export type MemberDto = {
   id: string;
   userId: string;

@@ -1,4 +1,4 @@
-import { pgEnum, pgTable, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { pgEnum, pgTable, smallint, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { createdAt, id, updatedAt } from './columns';
 import { MEMBER_ROLES } from '../../../shared/schemas/roles';
@@ -10,6 +10,8 @@ export const companies = pgTable('companies', {
   name: text('name').notNull(),
   phone: text('phone').notNull(),
   timeZone: text('time_zone').notNull().default('America/New_York'),
+  /** How far below the nameplate input a clocked gas input may be before it is flagged; null: not judged. */
+  underFiringTolerancePct: smallint('under_firing_tolerance_pct'),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });

@@ -5,12 +5,13 @@ import { todayInTimeZone } from '../../../shared/dates';
 import type { CompanyDto, CompanySettingsInput } from '../../../shared/schemas/company';
 import { recordAudit } from '../audit/audit.repository';
 
-const toDto = (c: { id: string; name: string; phone: string; timeZone: string }): CompanyDto => ({
+const toDto = (c: { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null }): CompanyDto => ({
   id: c.id,
   name: c.name,
   phone: c.phone,
   timeZone: c.timeZone,
   today: todayInTimeZone(c.timeZone),
+  underFiringTolerancePct: c.underFiringTolerancePct,
 });
 
 export function companyService(ctx: AppContext) {

@@ -15,7 +15,9 @@ export function meRoutes(ctx: AppContext) {
     return {
       user: { id: session.userId, name: session.name, email: session.email },
       principal,
-      company: company ? { id: company.id, name: company.name, phone: company.phone, timeZone: company.timeZone } : null,
+      company: company
+        ? { id: company.id, name: company.name, phone: company.phone, timeZone: company.timeZone, underFiringTolerancePct: company.underFiringTolerancePct }
+        : null,
     };
   });
   return router;

@@ -5,6 +5,8 @@ import {
   assessGaugeGlassLevel,
   assessThermocoupleMillivolts,
   clockGasInput,
+  compareInputToRating,
+  type RatingComparison,
   parseGaugeGlassLevel,
   TradeInputError,
   type CombustionAnalysis,
@@ -16,7 +18,7 @@ import { validationFailed } from '../../lib/http-error';
 
 export type VisitResults = {
   combustion?: CombustionAnalysis;
-  gasInput?: { cubicFeetPerHour: number; inputBtuPerHour: number };
+  gasInput?: { cubicFeetPerHour: number; inputBtuPerHour: number; rating?: RatingComparison };
   thermocouple?: ThermocoupleAssessment;
   gaugeGlass?: GaugeGlassAssessment;
   lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean };
@@ -24,7 +26,7 @@ export type VisitResults = {
   flags: TradeFlag[];
 };
 
-type ApplianceFacts = { fuel: Fuel; ventType: VentType; construction: Construction };
+type ApplianceFacts = { fuel: Fuel; ventType: VentType; construction: Construction; inputBtuh?: number | null; underFiringTolerancePct?: number | null };
 
 const LOW_WATER_CUTOFF_FAILED: TradeFlag = {
   code: 'low_water_cutoff_failed',
@@ -76,7 +78,21 @@ export function computeVisitResults(readings: ReadingsInput, appliance: Applianc
     );
     results.flags.push(...results.combustion.flags);
   }
-  if (gasInput) results.gasInput = run('gasInput', gasInput, () => clockGasInput(gasInput));
+  if (gasInput) {
+    const clocked = run('gasInput', gasInput, () => clockGasInput(gasInput));
+    results.gasInput = clocked;
+    if (appliance.inputBtuh) {
+      const rating = compareInputToRating({
+        measuredBtuPerHour: clocked.inputBtuPerHour,
+        ratedBtuPerHour: appliance.inputBtuh,
+        // No company tolerance: only over-firing is judged.
+        underFiringTolerancePct: appliance.underFiringTolerancePct ?? 100,
+      });
+      results.gasInput = { ...clocked, rating };
+      const flag = ratingFlag(rating, appliance.inputBtuh, appliance.underFiringTolerancePct ?? null);
+      if (flag) results.flags.push(flag);
+    }
+  }
   if (thermocouple && (isNumber(thermocouple.openCircuitMv) || isNumber(thermocouple.closedCircuitMv))) {
     results.thermocouple = run('thermocouple', thermocouple, () =>
       assessThermocoupleMillivolts({ openCircuitMv: orUndefined(thermocouple.openCircuitMv), closedCircuitMv: orUndefined(thermocouple.closedCircuitMv) }),
@@ -94,6 +110,32 @@ export function computeVisitResults(readings: ReadingsInput, appliance: Applianc
 }
 
 const isNumber = (v: unknown): v is number => typeof v === 'number';
+
+function ratingFlag(rating: RatingComparison, ratedBtuh: number, tolerancePct: number | null): TradeFlag | null {
+  if (rating.status === 'over_fired') {
+    return {
+      code: 'gas_input_over_fired',
+      severity: 'warning',
+      message: `Clocked input is ${rating.deviationPct.toFixed(1)} % above the nameplate rating of ${ratedBtuh.toLocaleString('en-US')} Btu/h: over-firing is prohibited. Adjust to the manufacturer's instructions.`,
+      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
+      threshold: Math.round(rating.allowedBtuPerHour),
+      unit: 'Btu/h',
+      source: rating.source,
+    };
+  }
+  if (rating.status === 'under_fired' && tolerancePct !== null) {
+    return {
+      code: 'gas_input_under_fired',
+      severity: 'info',
+      message: `Clocked input is ${Math.abs(rating.deviationPct).toFixed(1)} % below the nameplate rating, more than the company's ${tolerancePct} % tolerance.`,
+      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
+      threshold: Math.round(rating.allowedBtuPerHour * (1 - tolerancePct / 100)),
+      unit: 'Btu/h',
+      source: 'company policy',
+    };
+  }
+  return null;
+}
 
 /** An outcome must be chosen when the low-water cutoff failed or any result says stop. */
 export function isOutcomeRequired(results: Partial<VisitResults>): boolean {

@@ -7,6 +7,7 @@ import {
   memberships,
   partSwaps,
   users,
+  companies,
   visitAmendments,
   visits,
 } from '../../db/schema/index';
@@ -17,8 +18,17 @@ export type ComponentRow = typeof components.$inferSelect;
 export const visitsRepository = {
   async findAppliance(db: DbOrTx, companyId: string, id: string) {
     const [row] = await db
-      .select({ id: appliances.id, kind: appliances.kind, fuel: appliances.fuel, ventType: appliances.ventType, construction: appliances.construction })
+      .select({
+        id: appliances.id,
+        kind: appliances.kind,
+        fuel: appliances.fuel,
+        ventType: appliances.ventType,
+        construction: appliances.construction,
+        inputBtuh: appliances.inputBtuh,
+        underFiringTolerancePct: companies.underFiringTolerancePct,
+      })
       .from(appliances)
+      .innerJoin(companies, eq(companies.id, appliances.companyId))
       .where(and(eq(appliances.companyId, companyId), eq(appliances.id, id)))
       .limit(1);
     return row ?? null;

@@ -19,12 +19,14 @@ export function CompanySettingsPage() {
 
 function CompanySettingsForm({ company }: { company: CompanyDto }) {
   const update = useUpdateCompany();
-  const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone });
+  const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone, tolerance: company.underFiringTolerancePct?.toString() ?? '' });
   const details = update.error instanceof ApiError ? update.error.details : undefined;
 
   async function submit(e: FormEvent) {
     e.preventDefault();
-    await update.mutateAsync(form).catch(() => {});
+    const { tolerance, ...rest } = form;
+    const underFiringTolerancePct = tolerance.trim() === '' ? null : Number(tolerance);
+    await update.mutateAsync({ ...rest, underFiringTolerancePct }).catch(() => {});
   }
 
   return (
@@ -45,6 +47,14 @@ function CompanySettingsForm({ company }: { company: CompanyDto }) {
               <option key={tz}>{tz}</option>
             ))}
           </SelectField>
+          <TextField
+            label="Under-firing tolerance (%)"
+            inputMode="numeric"
+            hint="How far below the nameplate input a clocked gas input may be before the visit flags it. Leave empty to judge over-firing only (always prohibited)."
+            value={form.tolerance}
+            onChange={(e) => setForm({ ...form, tolerance: e.target.value })}
+            error={details?.underFiringTolerancePct}
+          />
           <Button type="submit" disabled={update.isPending}>
             {update.isPending ? 'Saving…' : 'Save'}
           </Button>

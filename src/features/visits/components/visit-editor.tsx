@@ -10,6 +10,7 @@ import type { VisitDto } from '@shared/schemas/visits';
 import { applianceQueryOptions, useAppliance } from '../api/get-appliance';
 import { readingErrors } from '../draft/draft-fields';
 import { computeLiveResults } from '../lib/live-results';
+import { useMe } from '@/lib/auth';
 import { useUnitPrefs } from '../lib/unit-prefs';
 import { Checklist } from './checklist';
 import { DraftContext, type DraftEditor } from './draft-context';
@@ -25,6 +26,7 @@ export function VisitEditor({ initial, visit }: { initial: VisitDto; visit: Visi
   const { sync, snapshot } = useDraftSync(initial);
   const appliance = useAppliance(visit.applianceId);
   const [prefs] = useUnitPrefs();
+  const tolerancePct = useMe().data?.company?.underFiringTolerancePct ?? null;
   const navigate = useNavigate();
   const qc = useQueryClient();
   const [completing, setCompleting] = useState(false);
@@ -32,7 +34,7 @@ export function VisitEditor({ initial, visit }: { initial: VisitDto; visit: Visi
   const { fields } = snapshot;
   const a = appliance.data?.appliance;
 
-  const live = useMemo(() => computeLiveResults(fields.readings, a), [fields.readings, a]);
+  const live = useMemo(() => computeLiveResults(fields.readings, a, tolerancePct), [fields.readings, a, tolerancePct]);
   const errors = useMemo(
     () => ({ ...snapshot.errors, ...(completeError instanceof ApiError ? completeError.details : {}), ...readingErrors(fields.readings) }),
     [snapshot.errors, completeError, fields.readings],

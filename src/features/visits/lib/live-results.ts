@@ -38,7 +38,7 @@ export type LiveResults = {
 };
 
 /** The same shared/trade functions the server runs, computed here as the technician types. */
-export function computeLiveResults(r: LocalReadings, a: ApplianceDto | undefined): LiveResults {
+export function computeLiveResults(r: LocalReadings, a: ApplianceDto | undefined, underFiringTolerancePct: number | null = null): LiveResults {
   const c = r.combustion;
   const o2 = num(c?.o2Pct), co = num(c?.coPpm), flue = num(c?.flueTempF), air = num(c?.airTempF);
   const combustion =
@@ -65,8 +65,10 @@ export function computeLiveResults(r: LocalReadings, a: ApplianceDto | undefined
     dial !== undefined && secs !== undefined && hv !== undefined
       ? attempt(() => {
           const clocked = clockGasInput({ dialCubicFeet: dial, secondsPerRevolution: secs, heatingValueBtuPerCubicFoot: hv });
-          // Tolerance 100 %: only over-firing is judged here; how far under is acceptable is the manufacturer's figure.
-          const rating = a?.inputBtuh ? compareInputToRating({ measuredBtuPerHour: clocked.inputBtuPerHour, ratedBtuPerHour: a.inputBtuh, underFiringTolerancePct: 100 }) : null;
+          // Without a company tolerance only over-firing is judged; the server applies the same rule.
+          const rating = a?.inputBtuh
+            ? compareInputToRating({ measuredBtuPerHour: clocked.inputBtuPerHour, ratedBtuPerHour: a.inputBtuh, underFiringTolerancePct: underFiringTolerancePct ?? 100 })
+            : null;
           return { ...clocked, rating };
         })
       : null;

@@ -46,7 +46,13 @@ export function GasInputReadings() {
           <p className="text-sm">{r.value.cubicFeetPerHour.toFixed(1)} ft³/h</p>
           {r.value.rating && (
             <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">
-              {r.value.rating.status === 'over_fired' ? <StatusBadge status="due">Over-fired</StatusBadge> : <StatusBadge status="ok">Not over the rating</StatusBadge>}
+              {r.value.rating.status === 'over_fired' ? (
+                <StatusBadge status="due">Over-fired</StatusBadge>
+              ) : r.value.rating.status === 'under_fired' ? (
+                <StatusBadge status="soon">Under-fired</StatusBadge>
+              ) : (
+                <StatusBadge status="ok">Not over the rating</StatusBadge>
+              )}
               {r.value.rating.deviationPct >= 0 ? '+' : ''}
               {r.value.rating.deviationPct.toFixed(0)} % against the nameplate {r.value.rating.allowedBtuPerHour.toLocaleString('en-US')} Btu/h
             </p>

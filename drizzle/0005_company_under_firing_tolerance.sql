@@ -1,0 +1,1 @@
+ALTER TABLE "companies" ADD COLUMN "under_firing_tolerance_pct" smallint;
