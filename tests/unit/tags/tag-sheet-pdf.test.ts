@@ -1,20 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { decodePDFRawStream, PDFArray, PDFDocument, PDFRawStream, type PDFPage } from 'pdf-lib';
+import { PDFDocument } from 'pdf-lib';
+import { pdfPageText as pageText } from '../../support/pdf-text';
 import { generateTagCode, formatTagCode } from '../../../shared/tags/tag-code';
 import { renderTagSheetPdf } from '../../../server/modules/tags/tag-sheet-pdf';
-
-/** The text a page shows: pdf-lib writes standard-font text as <hex> Tj operators. */
-function pageText(page: PDFPage): string {
-  const contents = page.node.Contents();
-  const streams = contents instanceof PDFArray ? contents.asArray().map((r) => page.doc.context.lookup(r)) : [contents];
-  let text = '';
-  for (const s of streams) {
-    if (!(s instanceof PDFRawStream)) continue;
-    const ops = Buffer.from(decodePDFRawStream(s).decode()).toString('latin1');
-    for (const m of ops.matchAll(/<([0-9A-Fa-f]+)>\s*Tj/g)) text += `${Buffer.from(m[1], 'hex').toString('latin1')}\n`;
-  }
-  return text;
-}
 
 describe('tag sheet PDF', () => {
   it('puts 30 tags on each US Letter sheet and prints every code', async () => {
