@@ -22,6 +22,8 @@ import { checklistRoutes } from './modules/checklists/checklists.routes';
 import { visitsRoutes } from './modules/visits/visits.routes';
 import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
+import { shareLinkRoutes } from './modules/share-links/share-links.routes';
+import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 
@@ -65,6 +67,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(visitsRoutes(ctx));
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
+  api.use(shareLinkRoutes(ctx));
+  api.use(homeownerRoutes(ctx));
   api.use(tagsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(notFoundApi);

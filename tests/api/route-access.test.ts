@@ -5,7 +5,7 @@ import { routeTable } from '../../server/lib/route';
 import { testApp } from '../support/context';
 
 // Routes anyone may call without signing in; every other route must answer 401 to a stranger.
-const PUBLIC = new Set(['get /health', 'get /me', 'get /public/tags/:code']);
+const PUBLIC = new Set(['get /health', 'get /me', 'get /public/tags/:code', 'get /share/:token']);
 
 describe('deny by default', () => {
   const { app, ctx } = testApp();

@@ -5,3 +5,4 @@ export * from './catalog';
 export * from './water';
 export * from './tags';
 export * from './photos';
+export * from './share-links';

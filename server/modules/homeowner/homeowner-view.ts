@@ -1,0 +1,78 @@
+import type { DbOrTx } from '../../db/client';
+import { LABELS } from '../../../shared/schemas/enums';
+import type { HomeownerViewDto } from '../../../shared/schemas/homeowner';
+import { addMonths } from '../../../shared/trade/iso-date';
+import { loadApplianceRecord } from '../appliances/appliance-record';
+import { typeLabelFor } from '../due/type-label';
+import { homeownerRepository as repo } from './homeowner.repository';
+import { readingsInWords } from './readings-in-words';
+
+const MEANING = {
+  replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
+  inspection: (part: string) => `The ${part} is due to be checked at the next service.`,
+};
+
+/**
+ * What a homeowner may read about one appliance. It is built field by field from the record, so office notes,
+ * technician-only fields and other customers' data can never slip through.
+ */
+export async function buildHomeownerView(db: DbOrTx, companyId: string, applianceId: string): Promise<HomeownerViewDto> {
+  const record = await loadApplianceRecord(db, companyId, applianceId);
+  const [company, visitRows, photoRows] = await Promise.all([
+    repo.company(db, companyId),
+    repo.completedVisits(db, companyId, applianceId),
+    repo.visiblePhotos(db, companyId, applianceId),
+  ]);
+  const swaps = await repo.swapsFor(
+    db,
+    companyId,
+    visitRows.map((v) => v.id),
+  );
+  const a = record.appliance;
+  const lastAnnual = visitRows.find((v) => v.type === 'annual_maintenance');
+
+  return {
+    company,
+    appliance: {
+      title: `${LABELS.applianceKind[a.kind]}, ${LABELS.fuel[a.fuel].toLowerCase()}`,
+      makeAndModel: [a.manufacturer, a.model].filter(Boolean).join(' ') || null,
+      location: a.location,
+      address: `${record.site.street}, ${record.site.town}`,
+      installedOn: a.installedOn,
+      ageYears: record.ageYears,
+      kind: a.kind,
+      fuel: a.fuel,
+    },
+    unsafe: record.unsafe && { visitedOn: record.unsafe.visitedOn, reason: record.unsafe.reason },
+    nextAnnualServiceDue: lastAnnual ? addMonths(lastAnnual.visitedOn, 12) : null,
+    comingDue: record.due
+      .filter((d) => d.status !== 'ok')
+      .map((d) => ({
+        part: d.typeLabel,
+        what: d.kind === 'replacement' ? 'replace' : 'inspect',
+        dueOn: d.dueOn,
+        meaning: MEANING[d.kind](d.typeLabel),
+      })),
+    lifeExpectancy:
+      record.endOfLife?.medianYears && record.ageYears !== null
+        ? `Boilers like this one last about ${record.endOfLife.medianYears} years on average (a median: half last longer). Yours is ${record.ageYears} years old.`
+        : null,
+    visits: visitRows.map((v) => {
+      const { words, numbers } = readingsInWords(v.results);
+      const checked = [...new Set(v.checklist.filter((i) => i.mark === 'done').map((i) => i.section))];
+      return {
+        visitedOn: v.visitedOn,
+        what: LABELS.visitType[v.type],
+        outcome: v.outcome,
+        outcomeWords: v.outcome === 'shut_down_unsafe' ? `Shut down as unsafe: ${v.outcomeReason ?? 'see the technician’s note'}` : v.outcome ? 'Left running' : null,
+        checked,
+        replaced: swaps.filter((s) => s.visitId === v.id).map((s) => ({ part: s.label ?? typeLabelFor(s.typeCode), reason: s.reason })),
+        findings: v.findings,
+        recommendations: v.recommendations,
+        readingsInWords: words,
+        readings: numbers,
+      };
+    }),
+    photos: photoRows.map((p) => ({ id: p.id, caption: p.caption, kind: p.kind, takenOn: p.createdAt.toISOString().slice(0, 10) })),
+  };
+}

@@ -1,0 +1,66 @@
+/**
+ * The homeowner's read-only view of one appliance, in plain words, and the share links that open it.
+ *
+ *   POST /appliances/:id/share-links      CreatedShareLinkDto  share:create   (the URL is shown once)
+ *   GET  /appliances/:id/share-links      ShareLinkDto[]       records:read
+ *   POST /share-links/:id/revoke          ShareLinkDto         share:revoke
+ *   GET  /share/:token                    HomeownerViewDto     public (410 once expired or revoked)
+ *   GET  /homeowner/appliances            HomeownerApplianceSummary[]  homeowner
+ *   GET  /homeowner/appliances/:id        HomeownerViewDto     homeowner (own appliances only)
+ */
+import { z } from 'zod';
+import { optionalText } from './common';
+
+export const shareLinkInput = z.object({
+  expiresInDays: z.number('Give a number of days.').int('Whole days.').min(1, 'At least 1 day.').max(1825, 'At most 5 years.').default(365),
+  label: optionalText(120),
+});
+export type ShareLinkInput = z.input<typeof shareLinkInput>;
+export const shareTokenParam = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'Not a share link.') });
+
+export type ShareLinkDto = {
+  id: string;
+  label: string | null;
+  createdAt: string;
+  expiresAt: string;
+  revokedAt: string | null;
+  status: 'active' | 'expired' | 'revoked';
+};
+export type CreatedShareLinkDto = ShareLinkDto & { url: string };
+
+export const SHARE_LINK_GONE_MESSAGE = 'This link has expired: ask your service company for a new one.';
+
+export type HomeownerVisitDto = {
+  visitedOn: string;
+  what: string;
+  outcome: 'left_operating' | 'shut_down_unsafe' | null;
+  outcomeWords: string | null;
+  checked: string[];
+  replaced: { part: string; reason: string | null }[];
+  findings: string;
+  recommendations: string;
+  readingsInWords: string[];
+  readings: Record<string, number>;
+};
+
+export type HomeownerViewDto = {
+  company: { name: string; phone: string };
+  appliance: {
+    title: string;
+    makeAndModel: string | null;
+    location: string | null;
+    address: string;
+    installedOn: string | null;
+    ageYears: number | null;
+    kind: string;
+    fuel: string;
+  };
+  unsafe: { visitedOn: string; reason: string | null } | null;
+  nextAnnualServiceDue: string | null;
+  comingDue: { part: string; what: 'inspect' | 'replace'; dueOn: string; meaning: string }[];
+  lifeExpectancy: string | null;
+  visits: HomeownerVisitDto[];
+  photos: { id: string; caption: string | null; kind: string; takenOn: string }[];
+};
+
+export type HomeownerApplianceSummary = { id: string; title: string; address: string };
