@@ -1,4 +1,11 @@
-// Placeholder until the photo screens land.
-export function AppliancePhotos(_props: { applianceId: string }) {
-  return null;
+import { PhotosPanel } from './photos-panel';
+
+/** The photos section of an appliance's life record. */
+export function AppliancePhotos({ applianceId }: { applianceId: string }) {
+  return <PhotosPanel title="Photos" applianceId={applianceId} />;
+}
+
+/** The same section narrowed to one visit: uploads are filed under the visit, the grid shows only its photos. */
+export function VisitPhotos({ applianceId, visitId }: { applianceId: string; visitId: string }) {
+  return <PhotosPanel title="Photos from this visit" applianceId={applianceId} visitId={visitId} />;
 }

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { PhotoDto } from '@shared/schemas/photos';
+import { photosQueryOptions } from './list-photos';
+
+export type PhotoChange = { caption?: string | null; homeownerVisible?: boolean };
+
+export const updatePhoto = (id: string, change: PhotoChange) => api<PhotoDto>(`/photos/${id}`, { method: 'PATCH', body: change });
+
+export function useUpdatePhoto(applianceId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, change }: { id: string; change: PhotoChange }) => updatePhoto(id, change),
+    onSuccess: (updated) => {
+      qc.setQueryData(photosQueryOptions(applianceId).queryKey, (list) => list?.map((p) => (p.id === updated.id ? updated : p)));
+      // The timeline entry's homeowner visibility follows the photo's.
+      void qc.invalidateQueries({ queryKey: ['appliance', applianceId] });
+    },
+  });
+}
