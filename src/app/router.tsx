@@ -2,7 +2,7 @@ import type { ComponentType } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import type { Permission } from '@shared/policy';
 import { AppShell } from './app-shell';
-import { RequirePermission, RequireSignIn } from './guards';
+import { RequireHomeowner, RequirePermission, RequireSignIn } from './guards';
 import { NotFoundPage } from './pages/not-found';
 import { HomePage } from './pages/home';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
@@ -27,6 +27,14 @@ function guardedPage(path: string, permission: Permission, load: () => Promise<C
 export function createAppRouter() {
   return createBrowserRouter([
     { path: '/sign-in', element: <SignInPage /> },
+    // A homeowner's share link: no sign-in, its own small chunk.
+    {
+      path: '/s/:token',
+      lazy: async () => {
+        const { SharePage } = await import('@/features/homeowner/components/share-page');
+        return { element: <SharePage /> };
+      },
+    },
     // Opened by anyone who scans a tag, signed in or not: the page itself decides what each person sees.
     {
       path: '/t/:code',
@@ -68,6 +76,13 @@ export function createAppRouter() {
         guardedPage('scan', 'records:read', async () => (await import('@/features/tags/components/scan-page')).ScanPage),
         guardedPage('tags', 'catalog:manage', async () => (await import('@/features/tags/components/tag-batches-page')).TagBatchesPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
+        {
+          path: 'my/:id',
+          lazy: async () => {
+            const { MyAppliancePage } = await import('@/features/homeowner/components/my-appliances-page');
+            return { element: <RequireHomeowner><MyAppliancePage /></RequireHomeowner> };
+          },
+        },
         { path: '*', element: <NotFoundPage /> },
       ],
     },

@@ -1,6 +1,5 @@
 import { useMe } from '@/lib/auth';
-import { Page } from '@/components/ui/page';
-import { Card } from '@/components/ui/card';
+import { MyAppliancesPage } from '@/features/homeowner/components/my-appliances-page';
 import { FindPage } from '@/features/find/components/find-page';
 import { NoRolePage } from './no-role';
 
@@ -9,17 +8,7 @@ export function HomePage() {
   const me = useMe();
   const principal = me.data?.principal;
   if (!principal) return <NoRolePage />;
-  if (principal.kind === 'homeowner') {
-    return (
-      <Page title={`Hello, ${me.data?.user.name}`} subtitle={`Your heating is looked after by ${me.data?.company?.name}.`}>
-        <Card title="Your service company">
-          <p>
-            {me.data?.company?.name} · <a className="font-semibold underline" href={`tel:${me.data?.company?.phone}`}>{me.data?.company?.phone}</a>
-          </p>
-        </Card>
-      </Page>
-    );
-  }
+  if (principal.kind === 'homeowner') return <MyAppliancesPage />;
   // Every member starts from finding an appliance: the technician at the door, the office on the phone.
   return <FindPage />;
 }

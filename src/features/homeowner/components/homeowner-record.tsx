@@ -1,0 +1,119 @@
+import { Card } from '@/components/ui/card';
+import { Notice } from '@/components/ui/notice';
+import { StatusBadge } from '@/components/ui/status-badge';
+import type { HomeownerViewDto } from '@shared/schemas/homeowner';
+import { SafetyNotes } from './safety-notes';
+
+const date = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+
+/** The homeowner's life record: read-only, plain words first, the numbers alongside. */
+export function HomeownerRecord({ view, photoUrl }: { view: HomeownerViewDto; photoUrl?: (id: string, variant: 'thumb' | 'display') => string }) {
+  const a = view.appliance;
+  return (
+    <div className="mx-auto flex w-full max-w-2xl flex-col gap-4 px-3 py-4">
+      <header>
+        <h1 className="text-2xl font-bold">Your {a.title.toLowerCase()}</h1>
+        <p className="text-iron-muted">
+          {a.address}
+          {a.location ? ` · ${a.location}` : ''}
+        </p>
+      </header>
+      {view.unsafe && (
+        <Notice kind="danger" title={`Shut down as unsafe on ${date(view.unsafe.visitedOn)}`}>
+          <p>{view.unsafe.reason ?? 'The technician found a fault that makes it unsafe to run.'}</p>
+          <p className="mt-1 font-semibold">Do not turn it back on or relight it yourself. Call {view.company.name} to have the fault repaired first.</p>
+        </Notice>
+      )}
+      <Card title="What it is">
+        <p>
+          {a.title}
+          {a.makeAndModel ? `, made by ${a.makeAndModel}` : ''}.
+          {a.ageYears !== null ? ` It is ${a.ageYears} years old${a.installedOn ? ` (installed ${date(a.installedOn)})` : ''}.` : ''}
+        </p>
+        {view.lifeExpectancy && <p className="mt-1 text-sm text-iron-muted">{view.lifeExpectancy}</p>}
+      </Card>
+      <Card title="What is coming up">
+        {view.nextAnnualServiceDue && (
+          <p className="mb-2">
+            Next yearly service due by <strong>{date(view.nextAnnualServiceDue)}</strong>.
+          </p>
+        )}
+        {view.comingDue.length ? (
+          <ul className="flex flex-col gap-2">
+            {view.comingDue.map((d) => (
+              <li key={`${d.part}-${d.dueOn}`} className="border-b border-plate-line pb-2">
+                <StatusBadge status={d.what === 'replace' ? 'due' : 'soon'}>{d.what === 'replace' ? 'Replace' : 'Check'}</StatusBadge>{' '}
+                <span className="font-semibold">{d.part}</span> · {date(d.dueOn)}
+                <p className="text-sm">{d.meaning}</p>
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p>Nothing else is coming due.</p>
+        )}
+        <p className="mt-2 text-sm">
+          To book a visit, call {view.company.name} at{' '}
+          <a className="font-semibold underline" href={`tel:${view.company.phone}`}>
+            {view.company.phone}
+          </a>
+          .
+        </p>
+      </Card>
+      <Card title="Visits">
+        {!view.visits.length && <p>No visits are recorded yet.</p>}
+        <ol className="flex flex-col gap-4">
+          {view.visits.map((v) => (
+            <li key={`${v.visitedOn}-${v.what}`} className="border-b border-plate-line pb-3">
+              <p className="font-semibold">
+                {date(v.visitedOn)} · {v.what}
+              </p>
+              {v.outcome === 'shut_down_unsafe' ? (
+                <StatusBadge status="unsafe">{v.outcomeWords ?? 'Shut down as unsafe'}</StatusBadge>
+              ) : (
+                v.outcomeWords && <StatusBadge status="ok">{v.outcomeWords}</StatusBadge>
+              )}
+              {v.checked.length > 0 && <p className="mt-1 text-sm">Checked: {v.checked.join(', ')}.</p>}
+              {v.replaced.map((r) => (
+                <p key={r.part} className="text-sm">
+                  Replaced the {r.part}
+                  {r.reason ? `: ${r.reason}` : ''}.
+                </p>
+              ))}
+              {v.readingsInWords.map((w) => (
+                <p key={w} className="text-sm">
+                  {w}
+                </p>
+              ))}
+              {v.findings && <p className="mt-1 text-sm">{v.findings}</p>}
+              {v.recommendations && <p className="text-sm">Recommended: {v.recommendations}</p>}
+              {Object.keys(v.readings).length > 0 && (
+                <details className="mt-1 text-xs text-iron-muted">
+                  <summary className="cursor-pointer">The numbers</summary>
+                  <ul className="tabular">
+                    {v.readings.efficiencyPct !== undefined && <li>Combustion efficiency: {v.readings.efficiencyPct} % (higher heating value basis)</li>}
+                    {v.readings.coAirFreePpm !== undefined && <li>Carbon monoxide, air-free: {v.readings.coAirFreePpm} ppm</li>}
+                  </ul>
+                </details>
+              )}
+            </li>
+          ))}
+        </ol>
+      </Card>
+      {photoUrl && view.photos.length > 0 && (
+        <Card title="Photos">
+          <div className="grid grid-cols-3 gap-2">
+            {view.photos.map((p) => (
+              <a key={p.id} href={photoUrl(p.id, 'display')}>
+                <img src={photoUrl(p.id, 'thumb')} alt={p.caption ?? p.kind} loading="lazy" className="aspect-square w-full rounded-plate object-cover" />
+              </a>
+            ))}
+          </div>
+        </Card>
+      )}
+      <SafetyNotes kind={a.kind} fuel={a.fuel} />
+      <p className="text-center text-sm text-iron-muted">
+        Kept by {view.company.name} · {view.company.phone}
+      </p>
+    </div>
+  );
+}
