@@ -13,6 +13,7 @@ import { ComponentsList } from './components-list';
 import { DueList } from './due-list';
 import { EndOfLife } from './end-of-life';
 import { MakeupWaterSection } from './makeup-water-section';
+import { ShareLinksSection } from './share-links-section';
 import type { ReactNode } from 'react';
 import { RecordHeader } from './record-header';
 import { StartVisit } from './start-visit';
@@ -69,6 +70,7 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
         <MakeupWaterSection applianceId={a.id} timeZone={me.data?.company?.timeZone ?? 'UTC'} canRecord={can(me.data?.principal, 'visits:record') && a.status !== 'removed'} />
       )}
       <Timeline applianceId={a.id} />
+      {can(me.data?.principal, 'share:create') && <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />}
     </Page>
   );
 }

@@ -1,0 +1,71 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser, PHONE, startTestServer } from '../support/browser';
+import { createTenant, type Tenant } from '../support/tenant';
+import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
+import { insertAppliance, insertSite } from '../../server/db/factories/records';
+import { visits } from '../../server/db/schema/index';
+
+let server: Awaited<ReturnType<typeof startTestServer>>;
+let browser: Browser;
+let t: Tenant;
+
+beforeAll(async () => {
+  server = await startTestServer();
+  browser = await launchBrowser();
+  t = await createTenant(server.ctx.db);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+describe('share link for the homeowner', () => {
+  it('the manager makes a link; a fresh browser opens it without signing in and reads the record; revoked, it says so', async () => {
+    const site = await insertSite(server.ctx.db, { companyId: t.company.id, customerId: t.customer.id, street: '3 Larkspur Row', town: 'Wrenfield' });
+    const boiler = await insertAppliance(server.ctx.db, { companyId: t.company.id, siteId: site.id, kind: 'steam_boiler', fuel: 'natural_gas' });
+    await server.ctx.db.insert(visits).values({
+      companyId: t.company.id,
+      applianceId: boiler.id,
+      type: 'annual_maintenance',
+      status: 'completed',
+      visitedOn: '2026-11-02',
+      findings: 'Cleaned the gauge glass; water line steady.',
+      internalNotes: 'Office only: do not show',
+      outcome: 'left_operating',
+      completedAt: new Date('2026-11-02T16:00:00Z'),
+    });
+
+    const office = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await office.newPage();
+    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.getByLabel('E-mail').fill(t.manager.user.email);
+    await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.getByLabel('Label (optional)').fill('sent to the owner');
+    await page.getByRole('button', { name: 'Make a share link' }).click();
+    const url = (await page.getByTestId('new-share-link').textContent())!.trim();
+    expect(url).toMatch(/\/s\/[A-Za-z0-9_-]{43}$/);
+
+    // A fresh context: no cookies, as on the homeowner's own phone.
+    const home = await browser.newContext(PHONE);
+    const phone = await home.newPage();
+    expect(url.startsWith(server.baseUrl)).toBe(true);
+    await phone.goto(url);
+    await phone.getByRole('heading', { name: 'Your steam boiler, natural gas' }).waitFor();
+    await phone.getByText('Cleaned the gauge glass; water line steady.').waitFor();
+    await phone.getByText('If no water shows in the gauge glass, do not add any.', { exact: false }).waitFor();
+    expect(await phone.getByText('Office only: do not show').count()).toBe(0);
+    expect(await phone.getByText(t.customer.name).count()).toBe(0);
+
+    await page.getByRole('button', { name: 'Revoke' }).click();
+    await page.getByText('Revoked').waitFor();
+    await phone.reload();
+    await phone.getByText('This link has expired: ask your service company for a new one.').waitFor();
+    expect(await phone.getByText('Cleaned the gauge glass').count()).toBe(0);
+    await office.close();
+    await home.close();
+  });
+});
