@@ -68,7 +68,15 @@ export function createAppRouter() {
             );
           };
         }),
-        guardedPage('visits/:id', 'records:read', async () => (await import('@/features/visits/components/visit-page')).VisitPage),
+        guardedPage('visits/:id', 'records:read', async () => {
+          const [{ VisitPage }, { VisitPhotos }] = await Promise.all([
+            import('@/features/visits/components/visit-page'),
+            import('@/features/photos/components/appliance-photos'),
+          ]);
+          return function VisitWithPhotos() {
+            return <VisitPage slots={{ photos: (applianceId, visitId) => <VisitPhotos applianceId={applianceId} visitId={visitId} /> }} />;
+          };
+        }),
         guardedPage('customers', 'records:read', async () => (await import('@/features/customers/components/customers-page')).CustomersPage),
         guardedPage('customers/new', 'records:write', async () => (await import('@/features/customers/components/new-customer-page')).NewCustomerPage),
         guardedPage('customers/:id', 'records:read', async () => (await import('@/features/customers/components/customer-detail-page')).CustomerDetailPage),

@@ -32,7 +32,7 @@ function TagLanding({ code }: { code: string }) {
   const publicInfo = useQuery({ ...publicTagQueryOptions(code), enabled: notTheirs });
 
   const found = resolved.data;
-  const target = !found ? null : 'homeowner' in found ? '/' : found.status === 'assigned' && found.applianceId ? `/appliances/${found.applianceId}` : null;
+  const target = !found ? null : 'homeowner' in found ? `/my/${found.applianceId}` : found.status === 'assigned' && found.applianceId ? `/appliances/${found.applianceId}` : null;
   useEffect(() => {
     // Replace: Back from the record returns to where the scan started, not to this hop.
     if (target) navigate(target, { replace: true, state: { fromTag: code } });

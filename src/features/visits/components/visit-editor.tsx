@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import { Button } from '@/components/ui/button';
@@ -22,7 +22,7 @@ import { SwapParts } from './swap-parts';
 import { UnitToggle } from './unit-toggle';
 import { useDraftSync } from './use-draft-sync';
 
-export function VisitEditor({ initial, visit }: { initial: VisitDto; visit: VisitDto }) {
+export function VisitEditor({ initial, visit, photos }: { initial: VisitDto; visit: VisitDto; photos?: ReactNode }) {
   const { sync, snapshot } = useDraftSync(initial);
   const appliance = useAppliance(visit.applianceId);
   const [prefs] = useUnitPrefs();
@@ -78,6 +78,7 @@ export function VisitEditor({ initial, visit }: { initial: VisitDto; visit: Visi
         <Checklist items={visit.checklist} />
         <ServerResults results={visit.results} />
         <SwapParts visit={visit} components={appliance.data?.components} onSwapped={(v) => sync.adopt(v)} />
+        {photos}
         <NotesSection serverErrors={errors} />
         <OutcomeSection required={outcomeNeeded} serverErrors={errors} />
         <Panel title="Finish">

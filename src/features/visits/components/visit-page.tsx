@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { useEffect, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
@@ -8,7 +9,10 @@ import { useVisit } from '../api/get-visit';
 import { CompletedVisit } from './completed-visit';
 import { VisitEditor } from './visit-editor';
 
-export function VisitPage() {
+/** The photos section belongs to another feature and is handed in by the app's router. */
+export type VisitSlots = { photos?: (applianceId: string, visitId: string) => ReactNode };
+
+export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   const { id = '' } = useParams();
   const visit = useVisit(id);
   useEffect(() => {
@@ -27,11 +31,11 @@ export function VisitPage() {
     );
   }
   if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} />;
-  return <DraftVisit key={id} visit={visit.data} />;
+  return <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} />;
 }
 
 /** Holds on to the first server copy: the draft engine starts from it once, later copies only feed the display. */
-function DraftVisit({ visit }: { visit: VisitDto }) {
+function DraftVisit({ visit, photos }: { visit: VisitDto; photos?: ReactNode }) {
   const [initial] = useState(visit);
-  return <VisitEditor initial={initial} visit={visit} />;
+  return <VisitEditor initial={initial} visit={visit} photos={photos} />;
 }
