@@ -5,10 +5,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import type { Browser, Locator, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { launchBrowser, PHONE, screenshotDir, startTestServer } from '../support/browser';
+import { launchBrowser, PHONE, screenshotDir, startTestServer, signInAsMember } from '../support/browser';
 import { phoneJpegWithGps } from '../support/images';
 import { createTenant, type Tenant } from '../support/tenant';
-import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { photos } from '../../server/db/schema/index';
 
@@ -57,11 +56,7 @@ async function signInOnPhone() {
     // Chromium logs every refused request as a failed resource; the app's own handling of it is asserted instead.
     if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(`console: ${m.text()}`);
   });
-  await page.goto(`${server.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(t.technician.user.email);
-  await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+  await signInAsMember(page, server.baseUrl, t.technician.user.email);
   return { context, page, errors };
 }
 

@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
-import { launchBrowser, PHONE, startTestServer } from '../support/browser';
+import { launchBrowser, PHONE, startTestServer, signInAsMember } from '../support/browser';
 import { createTenant, type Tenant } from '../support/tenant';
-import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { visits } from '../../server/db/schema/index';
 
@@ -38,11 +37,7 @@ describe('share link for the homeowner', () => {
 
     const office = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await office.newPage();
-    await page.goto(`${server.baseUrl}/sign-in`);
-    await page.getByLabel('E-mail').fill(t.manager.user.email);
-    await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+    await signInAsMember(page, server.baseUrl, t.manager.user.email);
     await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
     await page.getByLabel('Label (optional)').fill('sent to the owner');
     await page.getByRole('button', { name: 'Make a share link' }).click();

@@ -7,7 +7,7 @@ import sharp from 'sharp';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, PHONE, screenshotDir, startTestServer } from '../support/browser';
+import { launchBrowser, PHONE, screenshotDir, startTestServer, signInAsMember } from '../support/browser';
 import { createTenant, type Tenant } from '../support/tenant';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
@@ -81,11 +81,7 @@ async function phonePage(): Promise<{ page: Page; errors: string[] }> {
 }
 
 async function signIn(page: Page, email: string) {
-  await page.goto(`${server.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+  await signInAsMember(page, server.baseUrl, email);
 }
 
 beforeAll(async () => {

@@ -1,9 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { launchBrowser, PHONE, startTestServer } from '../support/browser';
+import { launchBrowser, PHONE, startTestServer, signInAsMember } from '../support/browser';
 import { createTenant, type Tenant } from '../support/tenant';
-import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { components, visits } from '../../server/db/schema/index';
 import { todayInTimeZone } from '../../shared/dates';
@@ -49,11 +48,7 @@ async function signInOnPhone(): Promise<{ context: BrowserContext; page: Page; e
     // Chromium logs every refused or cut-off request as a failed resource; the app's own handling is asserted instead.
     if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(`console: ${m.text()}`);
   });
-  await page.goto(`${server.baseUrl}/sign-in`);
-  await page.getByLabel('E-mail').fill(t.technician.user.email);
-  await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+  await signInAsMember(page, server.baseUrl, t.technician.user.email);
   return { context, page, errors };
 }
 

@@ -2,7 +2,8 @@ import fs from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
 import { execFileSync } from 'node:child_process';
-import { chromium, type Browser, type BrowserContextOptions } from 'playwright-core';
+import { chromium, type Browser, type BrowserContextOptions, type Page } from 'playwright-core';
+import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { inject } from 'vitest';
 import { buildClientIfStale } from '../../scripts/lib/client-build';
 import { PROJECT_ROOT } from '../../scripts/lib/paths';
@@ -56,3 +57,12 @@ export async function startTestServer() {
 }
 
 export const screenshotDir = () => path.join(inject('runDir'), 'screenshots');
+
+/** Signs a member in through the real form and waits for their home (the search page). */
+export async function signInAsMember(page: Page, baseUrl: string, email: string, password = DEFAULT_TEST_PASSWORD) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+}
