@@ -5,6 +5,7 @@ import { currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
 import { dueQuery, dueRuleInput, dueStockQuery } from '../../../shared/schemas/due';
 import { dueService } from './due.service';
+import { dueItemsToCsv } from './due-csv';
 
 export function dueRoutes(ctx: AppContext) {
   const router = Router();
@@ -23,6 +24,14 @@ export function dueRoutes(ctx: AppContext) {
   defineRoute(router, 'get', '/due', { access: { permission: 'records:read' }, schemas: { query: dueQuery } }, ({ query }, _req, res) =>
     service.listDue(currentMember(res).companyId, query),
   );
+  defineRoute(router, 'get', '/due/export.csv', { access: { permission: 'records:read' }, schemas: { query: dueQuery } }, async ({ query }, _req, res) => {
+    const { after: _after, limit: _limit, ...filters } = query;
+    const csv = dueItemsToCsv(await service.exportAll(currentMember(res).companyId, filters));
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader('Content-Disposition', `attachment; filename="due-list-next-${query.withinDays}-days.csv"`);
+    // A byte-order mark so spreadsheet programs read the UTF-8 names correctly.
+    res.send(`\uFEFF${csv}`);
+  });
   defineRoute(router, 'get', '/due/stock', { access: { permission: 'records:read' }, schemas: { query: dueStockQuery } }, ({ query }, _req, res) =>
     service.stock(currentMember(res).companyId, query.withinDays),
   );

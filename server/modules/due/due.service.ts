@@ -32,6 +32,8 @@ function decodeCursor(cursor: string) {
   return { dueOn: match[1], id: match[2] };
 }
 
+const MAX_EXPORT_ROWS = 20_000;
+
 export function dueService(ctx: AppContext) {
   return {
     async listRules(companyId: string): Promise<DueRuleDto[]> {
@@ -89,6 +91,18 @@ export function dueService(ctx: AppContext) {
       });
       const last = page.at(-1);
       return { items, nextCursor: rows.length > q.limit && last ? encodeCursor(last.component.dueOn!, last.component.id) : null };
+    },
+
+    /** Every matching item, walked page by page along the same keyset; capped so one request stays bounded. */
+    async exportAll(companyId: string, q: { withinDays: number; type?: string; applianceKind?: ApplianceKind; technicianId?: string; town?: string }) {
+      const items: DueItemDto[] = [];
+      let after: string | undefined;
+      do {
+        const page = await this.listDue(companyId, { ...q, after, limit: 100 });
+        items.push(...page.items);
+        after = page.nextCursor ?? undefined;
+      } while (after && items.length < MAX_EXPORT_ROWS);
+      return items.slice(0, MAX_EXPORT_ROWS);
     },
 
     async stock(companyId: string, withinDays: number): Promise<DueStockDto> {

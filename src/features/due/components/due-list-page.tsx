@@ -38,8 +38,25 @@ export function DueListPage() {
   const resetPaging = () => setCursors([]);
 
   return (
-    <Page title="Due list" subtitle="Parts and inspections coming due across all customers, from each part's age and condition.">
-      <Card>
+    <Page
+      title="Due list"
+      subtitle="Parts and inspections coming due across all customers, from each part's age and condition."
+      actions={
+        <div className="no-print flex gap-2">
+          <a
+            className="inline-flex min-h-tap items-center rounded-plate border border-plate-line bg-plate-deep px-4 font-semibold"
+            href={`/api/due/export.csv?${new URLSearchParams(Object.entries({ ...query, after: undefined, limit: undefined }).filter((e): e is [string, string | number] => e[1] !== undefined && e[1] !== '').map(([k, v]) => [k, String(v)])).toString()}`}
+            download
+          >
+            Export CSV
+          </a>
+          <Button variant="secondary" onClick={() => window.print()}>
+            Print
+          </Button>
+        </div>
+      }
+    >
+      <Card className="no-print">
         <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
           <SelectField label="Window" value={withinDays} onChange={(e) => (setWithinDays(Number(e.target.value)), resetPaging())}>
             {[30, 60, 90, 180, 365].map((d) => (
@@ -121,7 +138,7 @@ export function DueListPage() {
               </table>
             </div>
           )}
-          <div className="mt-3 flex gap-2">
+          <div className="no-print mt-3 flex gap-2">
             <Button variant="secondary" disabled={!cursors.length} onClick={() => setCursors(cursors.slice(0, -1))}>
               Previous page
             </Button>
