@@ -24,6 +24,7 @@ import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
 import { shareLinkRoutes } from './modules/share-links/share-links.routes';
 import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
+import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 
@@ -69,6 +70,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(makeupWaterRoutes(ctx));
   api.use(shareLinkRoutes(ctx));
   api.use(homeownerRoutes(ctx));
+  api.use(fleetRoutes(ctx));
   api.use(tagsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(notFoundApi);

@@ -10,6 +10,7 @@ import type { DueItemStatus } from '@shared/schemas/due';
 import { useDue } from '../api/get-due';
 import { useTechnicians } from '../api/get-technicians';
 import { StockForecast } from './stock-forecast';
+import { AnnualServiceDue } from './annual-service-due';
 
 const STATUS: Record<DueItemStatus, { look: Status; word: string }> = {
   replace_now: { look: 'due', word: 'Replace now' },
@@ -148,6 +149,7 @@ export function DueListPage() {
           </div>
         </Card>
       )}
+      <AnnualServiceDue />
     </Page>
   );
 }

@@ -1,0 +1,20 @@
+/**
+ *   GET /fleet/annual-service-due?limit=   AnnualServiceDueDto   records:read
+ *     In-service appliances whose last completed annual maintenance was more than a year ago (or never), oldest first.
+ */
+import { z } from 'zod';
+import type { ApplianceKind, Fuel } from './enums';
+
+export const annualServiceDueQuery = z.object({ limit: z.coerce.number().int().min(1).max(500).default(200) });
+
+export type AnnualServiceDueItem = {
+  applianceId: string;
+  kind: ApplianceKind;
+  fuel: Fuel;
+  makeAndModel: string | null;
+  street: string;
+  town: string;
+  lastAnnualOn: string | null;
+  customer: { id: string; name: string; phone: string | null; email: string | null; remindersOptOut: boolean };
+};
+export type AnnualServiceDueDto = { asOf: string; items: AnnualServiceDueItem[]; total: number };

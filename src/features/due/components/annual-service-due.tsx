@@ -1,0 +1,54 @@
+import { Link } from 'react-router-dom';
+import { Card } from '@/components/ui/card';
+import { Spinner } from '@/components/ui/page';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { LABELS } from '@shared/schemas/enums';
+import { useAnnualServiceDue } from '../api/get-annual-service-due';
+
+/** Appliances whose yearly tune-up has lapsed, with who to call. */
+export function AnnualServiceDue() {
+  const due = useAnnualServiceDue();
+  if (due.isPending) return <Spinner />;
+  if (!due.data) return null;
+  return (
+    <Card title={`Annual service overdue (${due.data.total})`}>
+      {!due.data.items.length ? (
+        <p>Every appliance in service has had its annual maintenance within the last year.</p>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="tabular w-full text-left text-sm">
+            <thead>
+              <tr className="border-b-2 border-plate-line">
+                <th className="py-2 pr-3">Last annual service</th>
+                <th className="pr-3">Appliance</th>
+                <th className="pr-3">Customer</th>
+                <th className="pr-3">Contact</th>
+              </tr>
+            </thead>
+            <tbody>
+              {due.data.items.map((i) => (
+                <tr key={i.applianceId} className="border-b border-plate-line align-top">
+                  <td className="py-2 pr-3 whitespace-nowrap">{i.lastAnnualOn ?? <StatusBadge status="due">Never recorded</StatusBadge>}</td>
+                  <td className="pr-3">
+                    <Link className="font-semibold text-brass-dark underline" to={`/appliances/${i.applianceId}`}>
+                      {LABELS.applianceKind[i.kind]}, {LABELS.fuel[i.fuel].toLowerCase()}
+                    </Link>
+                    <p className="text-xs text-iron-muted">
+                      {i.street}, {i.town}
+                    </p>
+                  </td>
+                  <td className="pr-3">{i.customer.name}</td>
+                  <td className="pr-3">
+                    {i.customer.phone && <p>{i.customer.phone}</p>}
+                    {i.customer.email && <p className="text-xs">{i.customer.email}</p>}
+                    {i.customer.remindersOptOut && <StatusBadge status="info">No reminders</StatusBadge>}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </Card>
+  );
+}
