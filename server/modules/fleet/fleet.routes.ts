@@ -2,7 +2,9 @@ import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { defineRoute } from '../../lib/route';
 import { currentMember } from '../../middleware/authenticate';
-import { annualServiceDueQuery, type AnnualServiceDueDto } from '../../../shared/schemas/fleet';
+import { annualServiceDueQuery, replacementProspectsQuery, type AnnualServiceDueDto, type ReplacementProspectDto } from '../../../shared/schemas/fleet';
+import { findReplacementProspects } from './replacement-prospects.repository';
+import { wholeYearsBetween } from '../appliances/appliance-age';
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 import { addMonths } from '../../../shared/trade/iso-date';
 import { companyToday } from '../due/company-today';
@@ -34,6 +36,36 @@ export function fleetRoutes(ctx: AppContext) {
           customer: { id: r.customer_id, name: r.name, phone: r.phone, email: r.email, remindersOptOut: r.reminders_opt_out },
         })),
       };
+    },
+  );
+  defineRoute(
+    router,
+    'get',
+    '/fleet/replacement-prospects',
+    { access: { permission: 'records:read' }, schemas: { query: replacementProspectsQuery } },
+    async ({ query }, _req, res): Promise<ReplacementProspectDto[]> => {
+      const { companyId } = currentMember(res);
+      const today = await companyToday(ctx.db, companyId);
+      const rows = await findReplacementProspects(ctx.db, companyId, today, query.nearYears, query.limit);
+      return rows.map((r) => {
+        const ageYears = wholeYearsBetween(r.age_from, today);
+        return {
+          applianceId: r.appliance_id,
+          kind: r.kind as ApplianceKind,
+          fuel: r.fuel as Fuel,
+          makeAndModel: [r.manufacturer, r.model].filter(Boolean).join(' ') || null,
+          street: r.street,
+          town: r.town,
+          customerName: r.customer_name,
+          ageYears,
+          medianYears: r.median_years,
+          status: ageYears >= r.median_years ? 'past' : 'near',
+          lastCombustion:
+            r.combustion && r.combustion_on
+              ? { on: r.combustion_on, efficiencyPct: r.combustion.efficiencyPct ?? null, coAirFreePpm: r.combustion.coAirFreePpm ?? null }
+              : null,
+        };
+      });
     },
   );
   return router;

@@ -11,6 +11,7 @@ import { useDue } from '../api/get-due';
 import { useTechnicians } from '../api/get-technicians';
 import { StockForecast } from './stock-forecast';
 import { AnnualServiceDue } from './annual-service-due';
+import { ReplacementProspects } from './replacement-prospects';
 
 const STATUS: Record<DueItemStatus, { look: Status; word: string }> = {
   replace_now: { look: 'due', word: 'Replace now' },
@@ -150,6 +151,7 @@ export function DueListPage() {
         </Card>
       )}
       <AnnualServiceDue />
+      <ReplacementProspects />
     </Page>
   );
 }
