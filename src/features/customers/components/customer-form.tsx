@@ -4,11 +4,10 @@ import { CUSTOMER_KINDS, LABELS, type CustomerKind } from '@shared/schemas/enums
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { FieldErrors } from '@/lib/api-client';
 import type { CustomerBody } from '../api/create-customer';
 import { CheckboxField } from './checkbox-field';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
-import { useFocusFirstError } from '@/lib/use-focus-first-error';
+import { unclaimedErrors } from '@/lib/form-errors';
+import { useValidatedSubmit } from '@/lib/use-validated-submit';
 
 type Draft = { name: string; kind: CustomerKind; phone: string; email: string; remindersOptOut: boolean; notes: string };
 const FIELDS = ['name', 'kind', 'phone', 'email', 'remindersOptOut', 'notes'];
@@ -35,31 +34,12 @@ export function CustomerForm({
   onCancel?: () => void;
 }) {
   const [draft, setDraft] = useState<Draft>(() => toDraft(initial));
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const formRef = useFocusFirstError<HTMLFormElement>(errors);
+  const { errors, failure, saving, formRef, submit: validateAndSend } = useValidatedSubmit(customerInput, onSubmit);
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
-    setFailure(null);
-    const parsed = customerInput.safeParse(draft);
-    if (!parsed.success) {
-      setErrors(zodFieldErrors(parsed.error));
-      return;
-    }
-    setErrors({});
-    setSaving(true);
-    try {
-      await onSubmit(parsed.data);
-    } catch (err) {
-      const { fields, message } = describeFailure(err);
-      setErrors(fields);
-      setFailure(message);
-    } finally {
-      setSaving(false);
-    }
+    void validateAndSend(draft);
   }
 
   const other = unclaimedErrors(errors, (k) => FIELDS.includes(k));

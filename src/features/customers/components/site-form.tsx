@@ -3,11 +3,10 @@ import { siteInput, type SiteDto } from '@shared/schemas/records';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { FieldErrors } from '@/lib/api-client';
 import type { SiteBody } from '../api/create-site';
 import { useTechnicians } from '../api/get-technicians';
-import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
-import { useFocusFirstError } from '@/lib/use-focus-first-error';
+import { unclaimedErrors } from '@/lib/form-errors';
+import { useValidatedSubmit } from '@/lib/use-validated-submit';
 
 type Draft = { street: string; town: string; postalCode: string; accessNotes: string; assignedTechnicianId: string };
 const FIELDS = ['customerId', 'street', 'town', 'postalCode', 'accessNotes', 'assignedTechnicianId'];
@@ -34,31 +33,12 @@ export function SiteForm({
     accessNotes: initial?.accessNotes ?? '',
     assignedTechnicianId: initial?.assignedTechnicianId ?? '',
   });
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const [failure, setFailure] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const formRef = useFocusFirstError<HTMLFormElement>(errors);
+  const { errors, failure, saving, formRef, submit: validateAndSend } = useValidatedSubmit(siteInput, onSubmit);
   const set = <K extends keyof Draft>(key: K, value: Draft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
-    setFailure(null);
-    const parsed = siteInput.safeParse({ ...draft, customerId, assignedTechnicianId: draft.assignedTechnicianId || null });
-    if (!parsed.success) {
-      setErrors(zodFieldErrors(parsed.error));
-      return;
-    }
-    setErrors({});
-    setSaving(true);
-    try {
-      await onSubmit(parsed.data);
-    } catch (err) {
-      const { fields, message } = describeFailure(err);
-      setErrors(fields);
-      setFailure(message);
-    } finally {
-      setSaving(false);
-    }
+    void validateAndSend({ ...draft, customerId, assignedTechnicianId: draft.assignedTechnicianId || null });
   }
 
   const other = unclaimedErrors(errors, (k) => FIELDS.includes(k));

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { Page } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import type { SearchHit } from '@shared/schemas/records';
-import { MIN_SEARCH_LENGTH, useSearch } from '../api/search';
+import { MIN_SEARCH_LENGTH, useSearch } from '@/lib/appliance-search';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
 
 const MATCHED: Record<SearchHit['matched'], string> = { name: 'name', street: 'address', phone: 'phone', serial: 'serial' };

@@ -6,7 +6,7 @@ import { Page, Spinner } from '@/components/ui/page';
 import { formatTagCode } from '@shared/tags/tag-code';
 import type { SearchHit } from '@shared/schemas/records';
 import { useAssignTag } from '../api/assign-tag';
-import { MIN_SEARCH_LENGTH, useApplianceSearch } from '../api/search-appliances';
+import { MIN_SEARCH_LENGTH, useSearch as useApplianceSearch } from '@/lib/appliance-search';
 import { useDebouncedValue } from '../lib/use-debounced-value';
 import { AssignError } from './assign-error';
 

@@ -1,3 +1,4 @@
+/** Appliance search, used by more than one feature (find, tag assignment), so it lives here once. */
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { SearchHit } from '@shared/schemas/records';
