@@ -4,15 +4,18 @@ import { createAuth } from './auth/auth';
 import { createDb } from './db/client';
 import { createLogger } from './logger';
 import { createObjectStorage } from './lib/object-storage';
+import { createMailer } from './lib/mailer';
 
 export function buildContext(config: AppConfig, overrides: Partial<AppContext> = {}): AppContext {
   const { db, pool } = createDb(config.DATABASE_URL);
   const logger = overrides.logger ?? createLogger(config.LOG_LEVEL);
   const storage = overrides.storage ?? createObjectStorage(config);
-  return { config, db, pool, auth: createAuth(db, config), logger, storage, ...overrides };
+  const mailer = overrides.mailer ?? createMailer(config);
+  return { config, db, pool, auth: createAuth(db, config), logger, storage, mailer, ...overrides };
 }
 
 export async function closeContext(ctx: AppContext) {
   ctx.storage.destroy();
+  ctx.mailer.close();
   await ctx.pool.end();
 }

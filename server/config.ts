@@ -24,6 +24,8 @@ export const envSchema = z
     SMTP_PASS: optionalString,
     SMTP_SECURE: z.stringbool().default(false),
     MAIL_FROM: z.string().default('Lifeplate <no-reply@lifeplate.test>'),
+    /** The local SMTP fake's folder, shown on the development outbox page; never set in production. */
+    FAKE_SMTP_OUTBOX: optionalString,
     TRUST_PROXY: z.string().default('loopback'),
     SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   })

@@ -4,6 +4,7 @@ import type { Auth } from './auth/auth';
 import type { AppConfig } from './config';
 import type { Db } from './db/client';
 import type { ObjectStorage } from './lib/object-storage';
+import type { Mailer } from './lib/mailer';
 
 /** Everything a request handler may need, built once at boot and passed down explicitly (no module singletons). */
 export type AppContext = {
@@ -14,4 +15,6 @@ export type AppContext = {
   logger: Logger;
   /** Photo bytes (S3 API; the local fake in development and tests). */
   storage: ObjectStorage;
+  /** Outgoing mail over SMTP (the local fake in development and tests). */
+  mailer: Mailer;
 };

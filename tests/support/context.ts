@@ -15,6 +15,9 @@ export function testConfig(overrides: Record<string, string> = {}): AppConfig {
     SIGN_IN_RATE_LIMIT: '100000',
     S3_ENDPOINT: inject('s3Endpoint'),
     S3_BUCKET: inject('s3Bucket'),
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(inject('smtpPort')),
+    FAKE_SMTP_OUTBOX: inject('outboxDir'),
     ...overrides,
   });
 }

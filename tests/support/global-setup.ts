@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node';
 import { clusterUrl, ensureCluster, ensureDatabase, findPgBin, startCluster, stopCluster, type Cluster } from '../../scripts/lib/postgres';
 import { runMigrations } from '../../server/db/migrate';
 import { startFakeS3 } from '../../fakes/s3';
+import { startFakeSmtp } from '../../fakes/smtp';
 
 const TEST_BUCKET = 'lifeplate-test';
 
@@ -27,6 +28,8 @@ declare module 'vitest' {
     runDir: string;
     s3Endpoint: string;
     s3Bucket: string;
+    smtpPort: number;
+    outboxDir: string;
   }
 }
 
@@ -42,9 +45,11 @@ export default async function setup(project: TestProject) {
   ensureCluster(cluster);
   startCluster(cluster);
   let s3: Awaited<ReturnType<typeof startFakeS3>> | undefined;
+  let smtp: Awaited<ReturnType<typeof startFakeSmtp>> | undefined;
   const teardown = async () => {
     try {
       await s3?.close();
+      await smtp?.close();
     } catch {
       // best effort
     }
@@ -64,6 +69,9 @@ export default async function setup(project: TestProject) {
     s3 = await startFakeS3({ port: await freePort(), directory: path.join(runDir, 's3'), bucket: TEST_BUCKET });
     project.provide('s3Endpoint', s3.endpoint);
     project.provide('s3Bucket', TEST_BUCKET);
+    smtp = await startFakeSmtp({ port: await freePort(), directory: path.join(runDir, 'outbox') });
+    project.provide('smtpPort', smtp.port);
+    project.provide('outboxDir', smtp.directory);
   } catch (err) {
     await teardown();
     throw err;

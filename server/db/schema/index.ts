@@ -6,3 +6,6 @@ export * from './water';
 export * from './tags';
 export * from './photos';
 export * from './share-links';
+export * from './reminders';
+export * from './service-requests';
+export * from './invitations';
