@@ -1,18 +1,19 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import type { Permission } from '@shared/policy';
-import { AppShell } from './app-shell';
-import { RequireHomeowner, RequirePermission, RequireSignIn } from './guards';
-import { NotFoundPage } from './pages/not-found';
-import { HomePage } from './pages/home';
-import { SignInPage } from '@/features/auth/components/sign-in-page';
+
+/*
+ * Everything but the router itself is lazy, so a page opened from a tag or a share link on a weak signal loads only the
+ * shared vendor chunk, this file and its own chunk: no sign-in form, no shell, no office screens.
+ * server/spa/route-chunks.ts names the chunks each path needs (for modulepreload and the bundle budget): keep it in step.
+ */
 
 /** A page in its own chunk, shown only to roles with the permission (the server enforces the same). */
 function guardedPage(path: string, permission: Permission, load: () => Promise<ComponentType>): RouteObject {
   return {
     path,
     lazy: async () => {
-      const Page = await load();
+      const [{ RequirePermission }, Page] = await Promise.all([import('./guards'), load()]);
       return {
         element: (
           <RequirePermission permission={permission}>
@@ -26,7 +27,13 @@ function guardedPage(path: string, permission: Permission, load: () => Promise<C
 
 export function createAppRouter() {
   return createBrowserRouter([
-    { path: '/sign-in', element: <SignInPage /> },
+    {
+      path: '/sign-in',
+      lazy: async () => {
+        const { SignInPage } = await import('@/features/auth/components/sign-in-page');
+        return { element: <SignInPage /> };
+      },
+    },
     // A homeowner's share link: no sign-in, its own small chunk.
     {
       path: '/s/:token',
@@ -44,13 +51,18 @@ export function createAppRouter() {
       },
     },
     {
-      element: (
-        <RequireSignIn>
-          <AppShell />
-        </RequireSignIn>
-      ),
+      lazy: async () => {
+        const { SignedInLayout } = await import('./signed-in-layout');
+        return { element: <SignedInLayout /> };
+      },
       children: [
-        { index: true, element: <HomePage /> },
+        {
+          index: true,
+          lazy: async () => {
+            const { HomePage } = await import('./pages/home');
+            return { element: <HomePage /> };
+          },
+        },
         guardedPage('team', 'records:read', async () => (await import('@/features/team/components/team-page')).TeamPage),
         guardedPage('settings', 'company:settings', async () => (await import('@/features/company/components/company-settings-page')).CompanySettingsPage),
         guardedPage('appliances/new', 'records:write', async () => (await import('@/features/customers/components/new-appliance-page')).NewAppliancePage),
@@ -87,11 +99,20 @@ export function createAppRouter() {
         {
           path: 'my/:id',
           lazy: async () => {
-            const { MyAppliancePage } = await import('@/features/homeowner/components/my-appliances-page');
+            const [{ RequireHomeowner }, { MyAppliancePage }] = await Promise.all([
+              import('./guards'),
+              import('@/features/homeowner/components/my-appliances-page'),
+            ]);
             return { element: <RequireHomeowner><MyAppliancePage /></RequireHomeowner> };
           },
         },
-        { path: '*', element: <NotFoundPage /> },
+        {
+          path: '*',
+          lazy: async () => {
+            const { NotFoundPage } = await import('./pages/not-found');
+            return { element: <NotFoundPage /> };
+          },
+        },
       ],
     },
   ]);

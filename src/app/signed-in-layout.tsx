@@ -1,0 +1,11 @@
+import { AppShell } from './app-shell';
+import { RequireSignIn } from './guards';
+
+/** The header, navigation and sign-in check of every member and homeowner screen, loaded with the first of them. */
+export function SignedInLayout() {
+  return (
+    <RequireSignIn>
+      <AppShell />
+    </RequireSignIn>
+  );
+}
