@@ -12,17 +12,14 @@ import { startServer } from '../server/main';
 import { buildClientIfStale } from './lib/client-build';
 import { startLocalServices } from './lib/local-services';
 import { acquireLock, writeLock } from './lib/lock';
-import { CHECKOUT_ID, CLIENT_DIST, PROJECT_ROOT } from './lib/paths';
-import { resolveDataRoot } from './lib/postgres';
+import { CLIENT_DIST, PROJECT_ROOT } from './lib/paths';
+import { localDataRoot, localPgPort } from './lib/local-cluster';
 
 const dev = process.argv.includes('--dev');
 const log = (line: string) => console.log(`[lifeplate] ${line}`);
 
 async function main() {
-  const { dir: dataRoot, moved } = resolveDataRoot(
-    process.env.LIFEPLATE_DATA_DIR ?? path.join(PROJECT_ROOT, '.data'),
-    CHECKOUT_ID,
-  );
+  const { dir: dataRoot, moved } = localDataRoot();
   if (moved) log(`The checkout is not reachable by the postgres user, so data lives in ${dataRoot}`);
 
   const lockFile = path.join(dataRoot, 'lifeplate.pid');
@@ -34,7 +31,7 @@ async function main() {
 
   const services = await startLocalServices({
     dataRoot,
-    pgPort: Number(process.env.PG_PORT ?? 54329),
+    pgPort: localPgPort(),
     database: 'lifeplate',
     s3Port: Number(process.env.FAKE_S3_PORT ?? 4569),
     smtpPort: Number(process.env.FAKE_SMTP_PORT ?? 2525),

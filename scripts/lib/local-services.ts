@@ -3,7 +3,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { startFakeS3 } from '../../fakes/s3';
 import { startFakeSmtp } from '../../fakes/smtp';
-import { clusterUrl, ensureCluster, ensureDatabase, findPgBin, isClusterRunning, startCluster, stopCluster, type Cluster } from './postgres';
+import { clusterUrl, ensureDatabase } from './postgres';
+import { clusterIn, ensureClusterRunning } from './local-cluster';
 
 type Stopper = () => Promise<void> | void;
 
@@ -24,18 +25,10 @@ export async function startLocalServices(opts: {
   const stoppers: Stopper[] = [];
 
   if (!opts.env.DATABASE_URL) {
-    const cluster: Cluster = {
-      bin: findPgBin(),
-      dataDir: path.join(opts.dataRoot, 'pg'),
-      port: opts.pgPort,
-      logFile: path.join(opts.dataRoot, 'postgres.log'),
-    };
-    const { created } = ensureCluster(cluster);
-    if (created) opts.log(`Created a PostgreSQL cluster in ${cluster.dataDir}`);
-    if (!isClusterRunning(cluster)) {
-      startCluster(cluster);
-      stoppers.push(() => stopCluster(cluster));
-    }
+    const cluster = clusterIn(opts.dataRoot, opts.pgPort);
+    const running = ensureClusterRunning(cluster);
+    if (running.created) opts.log(`Created a PostgreSQL cluster in ${cluster.dataDir}`);
+    if (running.started) stoppers.push(running.stop);
     await ensureDatabase(opts.pgPort, opts.database);
     env.DATABASE_URL = clusterUrl(opts.pgPort, opts.database);
     opts.log(`PostgreSQL on 127.0.0.1:${opts.pgPort} (data in ${cluster.dataDir})`);
