@@ -7,6 +7,9 @@
  *   GET  /share/:token                    HomeownerViewDto     public (410 once expired or revoked)
  *   GET  /homeowner/appliances            HomeownerApplianceSummary[]  homeowner
  *   GET  /homeowner/appliances/:id        HomeownerViewDto     homeowner (own appliances only)
+ *   GET  /share/:token/photos/:photoId/:variant                 image/jpeg  public (the link's appliance, homeowner-visible only)
+ *   GET  /homeowner/appliances/:id/photos/:photoId/:variant     image/jpeg  homeowner (own appliance, homeowner-visible only)
+ *        variant: thumb | display; anything else, a hidden photo or another appliance's answers 404.
  */
 import { z } from 'zod';
 import { optionalText } from './common';
@@ -17,6 +20,11 @@ export const shareLinkInput = z.object({
 });
 export type ShareLinkInput = z.input<typeof shareLinkInput>;
 export const shareTokenParam = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'Not a share link.') });
+export const HOMEOWNER_PHOTO_VARIANTS = ['thumb', 'display'] as const;
+export type HomeownerPhotoVariant = (typeof HOMEOWNER_PHOTO_VARIANTS)[number];
+const photoParams = { photoId: z.uuid('Not a valid id.'), variant: z.string().max(20) };
+export const sharePhotoParams = shareTokenParam.extend(photoParams);
+export const homeownerPhotoParams = z.object({ id: z.uuid('Not a valid id.'), ...photoParams });
 
 export type ShareLinkDto = {
   id: string;

@@ -5,7 +5,16 @@ import { routeTable } from '../../server/lib/route';
 import { testApp } from '../support/context';
 
 // Routes anyone may call without signing in; every other route must answer 401 to a stranger.
-const PUBLIC = new Set(['get /health', 'get /me', 'get /public/tags/:code', 'get /share/:token']);
+const PUBLIC = new Set([
+  'get /health',
+  'get /me',
+  'get /public/tags/:code',
+  'get /share/:token',
+  'get /share/:token/photos/:photoId/:variant',
+  'post /share/:token/service-requests',
+  'get /unsubscribe/:token',
+  'post /unsubscribe/:token',
+]);
 
 describe('deny by default', () => {
   const { app, ctx } = testApp();

@@ -3,7 +3,8 @@ import { auditLog } from '../../db/schema/index';
 
 export async function recordAudit(
   db: DbOrTx,
-  entry: { companyId: string; actorId: string; action: string; entity: string; entityId: string; changes?: Record<string, unknown> },
+  /** actorId is null when no one signed in did it (a homeowner through a share link). */
+  entry: { companyId: string; actorId: string | null; action: string; entity: string; entityId: string; changes?: Record<string, unknown> },
 ) {
   await db.insert(auditLog).values(entry);
 }

@@ -2,12 +2,12 @@ import { Router } from 'express';
 import type { AppContext } from '../../context';
 import { defineRoute } from '../../lib/route';
 import { currentHomeowner } from '../../middleware/authenticate';
-import { notFound } from '../../lib/http-error';
 import { uuidParam } from '../../../shared/schemas/common';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { HomeownerApplianceSummary } from '../../../shared/schemas/homeowner';
 import { buildHomeownerView } from './homeowner-view';
 import { homeownerRepository } from './homeowner.repository';
+import { requireOwnAppliance } from './own-appliance';
 
 export function homeownerRoutes(ctx: AppContext) {
   const router = Router();
@@ -18,9 +18,7 @@ export function homeownerRoutes(ctx: AppContext) {
   });
   defineRoute(router, 'get', '/homeowner/appliances/:id', { access: 'homeowner', schemas: { params: uuidParam } }, async ({ params }, _req, res) => {
     const me = currentHomeowner(res);
-    const own = await homeownerRepository.appliancesOfCustomers(ctx.db, me.companyId, me.customerIds);
-    // Someone else's appliance answers exactly like one that does not exist.
-    if (!own.some((a) => a.id === params.id)) throw notFound('Appliance');
+    await requireOwnAppliance(ctx, me, params.id);
     return buildHomeownerView(ctx.db, me.companyId, params.id);
   });
   return router;

@@ -1,18 +1,18 @@
 import crypto from 'node:crypto';
 import type { AppContext } from '../../context';
-import { gone, notFound } from '../../lib/http-error';
-import { SHARE_LINK_GONE_MESSAGE, type CreatedShareLinkDto, type ShareLinkDto } from '../../../shared/schemas/homeowner';
+import { notFound } from '../../lib/http-error';
+import type { CreatedShareLinkDto, ShareLinkDto } from '../../../shared/schemas/homeowner';
 import { recordAudit } from '../audit/audit.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
 import { buildHomeownerView } from '../homeowner/homeowner-view';
 import { shareLinksRepository as repo } from './share-links.repository';
+import { hashShareToken as hash, resolveShareToken } from './resolve-share-token';
 
 type Row = NonNullable<Awaited<ReturnType<typeof repo.find>>>;
 type Member = { companyId: string; userId: string };
 
 /** 32 random bytes (256 bits), base64url: far past the 128 bits a capability URL needs. Only its hash is stored. */
 const newToken = () => crypto.randomBytes(32).toString('base64url');
-const hash = (token: string) => crypto.createHash('sha256').update(token).digest('hex');
 
 const statusOf = (r: Row, now = new Date()): ShareLinkDto['status'] => (r.revokedAt ? 'revoked' : r.expiresAt <= now ? 'expired' : 'active');
 const toDto = (r: Row): ShareLinkDto => ({
@@ -67,9 +67,7 @@ export function shareLinksService(ctx: AppContext) {
     },
     /** Unknown tokens answer 404; expired or revoked ones 410, and neither says anything about the appliance. */
     async open(token: string) {
-      const row = await repo.findByHash(ctx.db, hash(token));
-      if (!row) throw notFound('Share link');
-      if (statusOf(row) !== 'active') throw gone(SHARE_LINK_GONE_MESSAGE);
+      const row = await resolveShareToken(ctx.db, token);
       return buildHomeownerView(ctx.db, row.companyId, row.applianceId);
     },
   };

@@ -1,0 +1,117 @@
+import { and, count, desc, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
+import type { DbOrTx } from '../../db/client';
+import { appliances, customers, memberships, serviceRequests, sites, users } from '../../db/schema/index';
+import type { ServiceRequestStatus } from '../../../shared/schemas/service-requests';
+
+export type ServiceRequestRow = typeof serviceRequests.$inferSelect;
+
+const listColumns = {
+  request: serviceRequests,
+  // Text keeps PostgreSQL's microseconds, so the keyset never skips a row that a JS Date would round.
+  createdAtKey: sql<string>`${serviceRequests.createdAt}::text`,
+  handledByName: users.name,
+  customerName: customers.name,
+  applianceKind: appliances.kind,
+  applianceFuel: appliances.fuel,
+  street: sites.street,
+  town: sites.town,
+};
+
+export const serviceRequestsRepository = {
+  /** The appliance with its address and customer, within the company. */
+  async applianceContext(db: DbOrTx, companyId: string, applianceId: string) {
+    const [row] = await db
+      .select({
+        id: appliances.id,
+        kind: appliances.kind,
+        fuel: appliances.fuel,
+        location: appliances.location,
+        street: sites.street,
+        town: sites.town,
+        customerId: sites.customerId,
+        customerName: customers.name,
+      })
+      .from(appliances)
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
+      .leftJoin(customers, eq(customers.id, sites.customerId))
+      .where(and(eq(appliances.companyId, companyId), eq(appliances.id, applianceId)));
+    return row ?? null;
+  },
+  /** Serialises requests for one key (a share link or a homeowner) so two at once cannot both slip under the limit. */
+  async lockFor(db: DbOrTx, key: string) {
+    await db.execute(sql`select pg_advisory_xact_lock(hashtextextended(${`service-request:${key}`}, 0))`);
+  },
+  async countSince(db: DbOrTx, by: { shareLinkId: string } | { requesterUserId: string }, since: Date) {
+    const who = 'shareLinkId' in by ? eq(serviceRequests.shareLinkId, by.shareLinkId) : eq(serviceRequests.requesterUserId, by.requesterUserId);
+    const [row] = await db.select({ n: count() }).from(serviceRequests).where(and(who, gte(serviceRequests.createdAt, since)));
+    return row?.n ?? 0;
+  },
+  async insert(db: DbOrTx, values: typeof serviceRequests.$inferInsert) {
+    const [row] = await db.insert(serviceRequests).values(values).returning();
+    return row;
+  },
+  /** The company has no office address: its active owners and managers hear about requests. */
+  async officeRecipients(db: DbOrTx, companyId: string) {
+    const rows = await db
+      .select({ email: users.email })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(and(eq(memberships.companyId, companyId), inArray(memberships.role, ['owner', 'manager']), isNull(memberships.deactivatedAt)))
+      .orderBy(users.email);
+    return rows.map((r) => r.email);
+  },
+  async markNotified(db: DbOrTx, id: string, at: Date) {
+    await db.update(serviceRequests).set({ officeNotifiedAt: at }).where(eq(serviceRequests.id, id));
+  },
+  /** Newest first, keyset on (created_at, id). */
+  list(db: DbOrTx, companyId: string, q: { status?: ServiceRequestStatus; after?: { createdAt: string; id: string }; limit: number }) {
+    return db
+      .select(listColumns)
+      .from(serviceRequests)
+      .innerJoin(appliances, eq(appliances.id, serviceRequests.applianceId))
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
+      .leftJoin(customers, eq(customers.id, serviceRequests.customerId))
+      .leftJoin(users, eq(users.id, serviceRequests.handledBy))
+      .where(
+        and(
+          eq(serviceRequests.companyId, companyId),
+          q.status ? eq(serviceRequests.status, q.status) : undefined,
+          q.after ? sql`(${serviceRequests.createdAt}, ${serviceRequests.id}) < (${q.after.createdAt}::timestamptz, ${q.after.id}::uuid)` : undefined,
+        ),
+      )
+      .orderBy(desc(serviceRequests.createdAt), desc(serviceRequests.id))
+      .limit(q.limit);
+  },
+  async findListed(db: DbOrTx, companyId: string, id: string) {
+    const [row] = await db
+      .select(listColumns)
+      .from(serviceRequests)
+      .innerJoin(appliances, eq(appliances.id, serviceRequests.applianceId))
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
+      .leftJoin(customers, eq(customers.id, serviceRequests.customerId))
+      .leftJoin(users, eq(users.id, serviceRequests.handledBy))
+      .where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.id, id)));
+    return row ?? null;
+  },
+  async countNew(db: DbOrTx, companyId: string) {
+    const [row] = await db
+      .select({ n: count() })
+      .from(serviceRequests)
+      .where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.status, 'new')));
+    return row?.n ?? 0;
+  },
+  async find(db: DbOrTx, companyId: string, id: string) {
+    const [row] = await db.select().from(serviceRequests).where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.id, id)));
+    return row ?? null;
+  },
+  async setStatus(db: DbOrTx, companyId: string, id: string, values: { status: ServiceRequestStatus; handledBy: string; handledAt: Date }) {
+    const [row] = await db
+      .update(serviceRequests)
+      .set(values)
+      .where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.id, id)))
+      .returning();
+    return row ?? null;
+  },
+};
+
+export type ListedServiceRequest = NonNullable<Awaited<ReturnType<typeof serviceRequestsRepository.findListed>>>;
