@@ -27,6 +27,8 @@ import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
+import { remindersRoutes } from './modules/reminders/reminders.routes';
+import { outboxRoutes } from './modules/reminders/outbox.routes';
 import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.routes';
 import { serviceRequestRoutes } from './modules/service-requests/service-requests.routes';
 
@@ -75,6 +77,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(fleetRoutes(ctx));
   api.use(tagsRoutes(ctx));
   api.use(photosRoutes(ctx));
+  api.use(remindersRoutes(ctx));
+  api.use(outboxRoutes(ctx));
   api.use(homeownerPhotoRoutes(ctx));
   api.use(serviceRequestRoutes(ctx));
   api.use(notFoundApi);

@@ -4,9 +4,7 @@ import https from 'node:https';
 import type { AppConfig } from './config';
 import { createApp, type AppOptions } from './app';
 import { buildContext, closeContext } from './build-context';
-import { sweepOrphanObjects } from './modules/photos/sweep-orphan-objects';
-
-const SWEEP_EVERY_MS = 6 * 3_600_000;
+import { startJobs } from './jobs/start-jobs';
 
 export async function startServer(config: AppConfig, options: AppOptions = {}) {
   const ctx = buildContext(config);
@@ -15,23 +13,28 @@ export async function startServer(config: AppConfig, options: AppOptions = {}) {
     config.TLS_CERT && config.TLS_KEY
       ? https.createServer({ cert: fs.readFileSync(config.TLS_CERT), key: fs.readFileSync(config.TLS_KEY) }, app)
       : http.createServer(app);
+  const closeHttp = async () => {
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+    server.closeAllConnections?.();
+  };
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
     server.listen(config.PORT, config.HOST, () => resolve());
   });
-  // Objects whose database row never got written (a crash between the two) are removed a day later.
-  const sweep = setInterval(() => {
-    sweepOrphanObjects(ctx, { olderThanHours: 24 })
-      .then(({ deleted }) => deleted.length && ctx.logger.info({ deleted: deleted.length }, 'removed orphaned photo objects'))
-      .catch((err: unknown) => ctx.logger.warn({ err }, 'orphaned photo sweep failed'));
-  }, SWEEP_EVERY_MS);
-  sweep.unref();
+  // Scheduled work (daily reminders, the orphaned photo sweep) runs in this process through pg-boss.
+  let jobs: Awaited<ReturnType<typeof startJobs>>;
+  try {
+    jobs = await startJobs(ctx);
+  } catch (err) {
+    await closeHttp();
+    await closeContext(ctx);
+    throw err;
+  }
   return {
     ctx,
     async close() {
-      clearInterval(sweep);
-      await new Promise<void>((resolve) => server.close(() => resolve()));
-      server.closeAllConnections?.();
+      await jobs.stop().catch((err: unknown) => ctx.logger.warn({ err }, 'stopping the job queue failed'));
+      await closeHttp();
       await closeContext(ctx);
     },
   };

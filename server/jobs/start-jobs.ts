@@ -1,0 +1,51 @@
+import PgBoss from 'pg-boss';
+import type { AppContext } from '../context';
+import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE, photoSweepJob } from './photo-sweep-job';
+import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
+
+export const JOBS_SCHEMA = 'pgboss';
+
+type Job = { queue: string; cron: string; run: (ctx: AppContext, data: unknown) => Promise<unknown> };
+const JOBS: Job[] = [
+  { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, run: remindersJob },
+  { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, run: (ctx) => photoSweepJob(ctx) },
+];
+
+/**
+ * pg-boss on the app's own PostgreSQL (its tables in their own schema). Each cron fires once per tick across all
+ * running servers, because pg-boss keeps the schedule in the database.
+ * `cron: false` registers the schedules but does not fire them (tests send jobs by hand).
+ */
+export async function startJobs(ctx: AppContext, options: { cron?: boolean } = {}) {
+  const boss = new PgBoss({
+    connectionString: ctx.config.DATABASE_URL,
+    schema: JOBS_SCHEMA,
+    max: 3,
+    schedule: options.cron ?? true,
+    application_name: 'lifeplate-jobs',
+  });
+  boss.on('error', (err) => ctx.logger.warn({ err }, 'job queue error'));
+  await boss.start();
+  for (const job of JOBS) {
+    await boss.createQueue(job.queue);
+    await boss.schedule(job.queue, job.cron, {}, { tz: 'UTC' });
+    await boss.work(job.queue, async (jobs) => {
+      for (const j of jobs) {
+        try {
+          await job.run(ctx, j.data);
+        } catch (err) {
+          // pg-boss marks the job failed (and retries it); the log says why.
+          ctx.logger.warn({ err, queue: job.queue }, 'scheduled job failed');
+          throw err;
+        }
+      }
+    });
+  }
+  return {
+    boss,
+    /** Waits (bounded) for a running job to finish, then closes pg-boss's own connections. */
+    stop: () => boss.stop({ graceful: true, timeout: 10_000 }),
+  };
+}
+
+export type Jobs = Awaited<ReturnType<typeof startJobs>>;
