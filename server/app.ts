@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import express, { Router } from 'express';
+import compression from 'compression';
 import { toNodeHandler } from 'better-auth/node';
 import { pinoHttp } from 'pino-http';
 import type { ViteDevServer } from 'vite';
@@ -27,6 +28,7 @@ import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
+import { serveClient } from './spa/serve-client';
 import { remindersRoutes } from './modules/reminders/reminders.routes';
 import { outboxRoutes } from './modules/reminders/outbox.routes';
 import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.routes';
@@ -45,6 +47,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.set('trust proxy', parseTrustProxy(ctx.config.TRUST_PROXY));
   app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(securityHeaders(ctx.config, { dev: Boolean(options.vite) }));
+  // gzip for HTML, JS, CSS and JSON on a phone's weak signal; images and PDFs are already compressed and pass as they are.
+  app.use(compression());
 
   // better-auth reads the raw body itself, so it is mounted before express.json().
   app.all('/api/auth/*splat', (req, _res, next) => {
@@ -86,14 +90,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
 
   if (options.vite) {
     app.use(options.vite.middlewares);
-  } else if (options.clientDir && fs.existsSync(options.clientDir)) {
-    // Hashed assets never change under the same name, so they may be cached for a year.
-    app.use('/assets', express.static(path.join(options.clientDir, 'assets'), { immutable: true, maxAge: '1y', index: false }));
-    app.use(express.static(options.clientDir, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile('index.html', { root: options.clientDir });
-    });
+  } else if (options.clientDir && fs.existsSync(path.join(options.clientDir, 'index.html'))) {
+    app.use(serveClient(ctx, options.clientDir));
   }
 
   app.use(errorHandler);

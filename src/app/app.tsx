@@ -2,10 +2,17 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router-dom';
 import { useState } from 'react';
 import { createQueryClient } from '@/lib/query-client';
+import { seedPreloadedQueries } from '@/lib/preload';
 import { createAppRouter } from './router';
 
+function createSeededQueryClient() {
+  const queryClient = createQueryClient();
+  seedPreloadedQueries(queryClient);
+  return queryClient;
+}
+
 export function App() {
-  const [queryClient] = useState(createQueryClient);
+  const [queryClient] = useState(createSeededQueryClient);
   const [router] = useState(createAppRouter);
   return (
     <QueryClientProvider client={queryClient}>
