@@ -28,6 +28,7 @@ import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
+import { invitationRoutes } from './modules/invitations/invitations.routes';
 import { serveClient } from './spa/serve-client';
 import { remindersRoutes } from './modules/reminders/reminders.routes';
 import { outboxRoutes } from './modules/reminders/outbox.routes';
@@ -81,6 +82,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(fleetRoutes(ctx));
   api.use(tagsRoutes(ctx));
   api.use(photosRoutes(ctx));
+  api.use(invitationRoutes(ctx));
   api.use(remindersRoutes(ctx));
   api.use(outboxRoutes(ctx));
   api.use(homeownerPhotoRoutes(ctx));

@@ -11,7 +11,7 @@ export function buildContext(config: AppConfig, overrides: Partial<AppContext> =
   const logger = overrides.logger ?? createLogger(config.LOG_LEVEL);
   const storage = overrides.storage ?? createObjectStorage(config);
   const mailer = overrides.mailer ?? createMailer(config);
-  return { config, db, pool, auth: createAuth(db, config), logger, storage, mailer, ...overrides };
+  return { config, db, pool, auth: createAuth(db, config, { mailer, logger }), logger, storage, mailer, ...overrides };
 }
 
 export async function closeContext(ctx: AppContext) {

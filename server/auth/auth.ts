@@ -3,10 +3,12 @@ import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import type { NodePgDatabase } from 'drizzle-orm/node-postgres';
 import * as schema from '../db/schema/index';
 import type { AppConfig } from '../config';
+import { magicLinkAuth, type MagicLinkDeps } from './magic-link';
 
 export const CLIENT_IP_HEADER = 'x-lifeplate-client-ip';
 
-export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig) {
+export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig, deps: MagicLinkDeps) {
+  const links = magicLinkAuth(db, deps);
   return betterAuth({
     appName: 'Lifeplate',
     baseURL: config.BASE_URL,
@@ -15,6 +17,9 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig)
     trustedOrigins: [config.BASE_URL],
     database: drizzleAdapter(db, { provider: 'pg', usePlural: true, schema }),
     emailAndPassword: { enabled: true, minPasswordLength: 10, autoSignIn: true },
+    plugins: [links.plugin],
+    hooks: { before: links.beforeHook },
+    databaseHooks: links.databaseHooks,
     session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
     rateLimit: {
       enabled: true,
@@ -24,6 +29,8 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig)
       customRules: {
         '/sign-in/email': { window: 60, max: config.SIGN_IN_RATE_LIMIT },
         '/sign-up/email': { window: 60, max: config.SIGN_IN_RATE_LIMIT },
+        [links.paths.signIn]: { window: 60, max: config.SIGN_IN_RATE_LIMIT },
+        [links.paths.verify]: { window: 60, max: config.SIGN_IN_RATE_LIMIT },
       },
     },
     advanced: {

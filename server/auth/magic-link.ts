@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { createAuthMiddleware } from 'better-auth/api';
+import { magicLink } from 'better-auth/plugins';
+import type { Logger } from 'pino';
+import type { Db } from '../db/client';
+import type { Mailer } from '../lib/mailer';
+import { invitationsRepository as repo } from '../modules/invitations/invitations.repository';
+import { invitationMail, signInMail } from '../modules/invitations/invitation-mail';
+import { SIGN_IN_LINK_HOURS } from '../../shared/schemas/invitations';
+
+export type MagicLinkDeps = { mailer: Pick<Mailer, 'send'>; logger: Pick<Logger, 'error'> };
+
+const SIGN_IN_PATH = '/sign-in/magic-link';
+const VERIFY_PATH = '/magic-link/verify';
+const requestBody = z.object({ email: z.email() });
+
+/**
+ * E-mailed one-time sign-in links. Mail goes only to an address with an open invitation or to someone Lifeplate
+ * already knows (the hook below); everyone else gets the same answer and no mail, so the endpoint tells nobody
+ * which addresses exist. A link may create an account only while its address still has an open invitation.
+ */
+export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
+  const mayReceiveLink = async (email: string) => (await repo.hasOpenInvitation(db, email)) || repo.isKnownPerson(db, email);
+
+  async function mailFor(email: string, url: string, invitationId: unknown) {
+    const invited = typeof invitationId === 'string' && z.uuid().safeParse(invitationId).success ? await repo.findOpenForMail(db, invitationId, email) : null;
+    if (!invited) return signInMail(email, url);
+    const { invitation, companyName, invitedByName } = invited;
+    return invitationMail(email, url, { kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
+  }
+
+  const plugin = magicLink({
+    expiresIn: SIGN_IN_LINK_HOURS * 60 * 60,
+    storeToken: 'hashed',
+    async sendMagicLink({ email, url, metadata }, ctx) {
+      const send = async () => deps.mailer.send(await mailFor(email, url, metadata?.invitationId));
+      // From the browser the answer must not wait on the mail, or its timing would tell who may receive one.
+      // A server-side call (an invitation being sent) waits, so the office learns if the mail failed.
+      if (ctx?.request) {
+        send().catch((err: unknown) => deps.logger.error({ err }, 'sign-in link mail failed'));
+        return;
+      }
+      await send();
+    },
+  });
+
+  const beforeHook = createAuthMiddleware(async (ctx) => {
+    if (ctx.path !== SIGN_IN_PATH) return;
+    const parsed = requestBody.safeParse(ctx.body);
+    if (!parsed.success) return; // the endpoint itself answers 400
+    if (await mayReceiveLink(parsed.data.email)) return;
+    return ctx.json({ status: true });
+  });
+
+  const databaseHooks = {
+    user: {
+      create: {
+        async before(user: { email: string }, ctx?: { path?: string } | null) {
+          if (ctx?.path === VERIFY_PATH && !(await repo.hasOpenInvitation(db, user.email))) return false;
+        },
+      },
+    },
+  };
+
+  return { plugin, beforeHook, databaseHooks, paths: { signIn: SIGN_IN_PATH, verify: VERIFY_PATH } };
+}
