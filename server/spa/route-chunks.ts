@@ -8,6 +8,12 @@ const SIGNED_IN = ['src/app/signed-in-layout.tsx', 'src/app/guards.tsx'];
 
 export const CLIENT_ROUTES: readonly ClientRoute[] = [
   { name: 'share', path: '/s/:token', pattern: /^\/s\/([^/]+)\/?$/, modules: ['src/features/homeowner/components/share-page.tsx'] },
+  {
+    name: 'unsubscribe',
+    path: '/unsubscribe/:token',
+    pattern: /^\/unsubscribe\/([^/]+)\/?$/,
+    modules: ['src/features/reminders/components/unsubscribe-page.tsx'],
+  },
   { name: 'tag', path: '/t/:code', pattern: /^\/t\/([^/]+)\/?$/, modules: ['src/features/tags/components/tag-landing-page.tsx'] },
   {
     name: 'my-appliance',
@@ -39,6 +45,7 @@ export const OFFICE_SCREENS: readonly string[] = [
   'src/features/team/components/team-page.tsx',
   'src/features/company/components/company-settings-page.tsx',
   'src/features/tags/components/tag-batches-page.tsx',
+  'src/features/reminders/components/outbox-page.tsx',
 ];
 
 export function matchClientRoute(pathname: string): { route: ClientRoute; param: string | null } | null {

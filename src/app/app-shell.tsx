@@ -3,6 +3,8 @@ import { useEffect, useState } from 'react';
 import { LogoMark } from '@/components/ui/logo-mark';
 import { useMe, useSignOut } from '@/lib/auth';
 import { ROLE_LABELS } from '@shared/schemas/roles';
+import { can } from '@shared/policy';
+import { useOutboxAvailable } from '@/features/reminders/api/get-outbox';
 import { navFor } from './nav';
 
 function useDimMode() {
@@ -20,6 +22,9 @@ export function AppShell() {
   const navigate = useNavigate();
   const [dim, setDim] = useDimMode();
   const principal = me.data?.principal;
+  // The development outbox is linked only where the API has one (beside the local mail fake).
+  const outbox = useOutboxAvailable(can(principal, 'reminders:send'));
+  const nav = [...navFor(principal), ...(outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [])];
   const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';
 
   return (
@@ -54,7 +59,7 @@ export function AppShell() {
           </div>
         </div>
         <nav aria-label="Main" className="mx-auto flex max-w-5xl gap-1 overflow-x-auto px-2 pb-1 sm:px-5">
-          {navFor(principal).map((item) => (
+          {nav.map((item) => (
             <NavLink
               key={item.to}
               to={item.to}

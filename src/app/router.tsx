@@ -42,6 +42,14 @@ export function createAppRouter() {
         return { element: <SharePage /> };
       },
     },
+    // From a reminder e-mail: no sign-in, outside the shell, its own small chunk.
+    {
+      path: '/unsubscribe/:token',
+      lazy: async () => {
+        const { UnsubscribePage } = await import('@/features/reminders/components/unsubscribe-page');
+        return { element: <UnsubscribePage /> };
+      },
+    },
     // Opened by anyone who scans a tag, signed in or not: the page itself decides what each person sees.
     {
       path: '/t/:code',
@@ -95,6 +103,7 @@ export function createAppRouter() {
         guardedPage('due', 'records:read', async () => (await import('@/features/due/components/due-list-page')).DueListPage),
         guardedPage('scan', 'records:read', async () => (await import('@/features/tags/components/scan-page')).ScanPage),
         guardedPage('tags', 'catalog:manage', async () => (await import('@/features/tags/components/tag-batches-page')).TagBatchesPage),
+        guardedPage('outbox', 'reminders:send', async () => (await import('@/features/reminders/components/outbox-page')).OutboxPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         {
           path: 'my/:id',

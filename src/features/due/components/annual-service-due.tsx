@@ -3,11 +3,18 @@ import { Card } from '@/components/ui/card';
 import { Spinner } from '@/components/ui/page';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { LABELS } from '@shared/schemas/enums';
+import { useMe } from '@/lib/auth';
+import { can } from '@shared/policy';
 import { useAnnualServiceDue } from '../api/get-annual-service-due';
+import { useReminders } from '../api/get-reminders';
+import { AnnualReminderCell, currentAnnualReminder } from './annual-reminder-cell';
 
 /** Appliances whose yearly tune-up has lapsed, with who to call. */
 export function AnnualServiceDue() {
   const due = useAnnualServiceDue();
+  const reminders = useReminders(200);
+  const me = useMe();
+  const canSend = can(me.data?.principal, 'reminders:send');
   if (due.isPending) return <Spinner />;
   if (!due.data) return null;
   return (
@@ -23,6 +30,7 @@ export function AnnualServiceDue() {
                 <th className="pr-3">Appliance</th>
                 <th className="pr-3">Customer</th>
                 <th className="pr-3">Contact</th>
+                <th className="pr-3">Reminder e-mail</th>
               </tr>
             </thead>
             <tbody>
@@ -42,6 +50,9 @@ export function AnnualServiceDue() {
                     {i.customer.phone && <p>{i.customer.phone}</p>}
                     {i.customer.email && <p className="text-xs">{i.customer.email}</p>}
                     {i.customer.remindersOptOut && <StatusBadge status="info">No reminders</StatusBadge>}
+                  </td>
+                  <td className="py-2 pr-3">
+                    <AnnualReminderCell item={i} reminder={currentAnnualReminder(i, reminders.data?.items)} canSend={canSend} />
                   </td>
                 </tr>
               ))}

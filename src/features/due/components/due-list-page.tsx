@@ -12,6 +12,7 @@ import { useTechnicians } from '../api/get-technicians';
 import { StockForecast } from './stock-forecast';
 import { AnnualServiceDue } from './annual-service-due';
 import { ReplacementProspects } from './replacement-prospects';
+import { RemindersSent } from './reminders-sent';
 
 const STATUS: Record<DueItemStatus, { look: Status; word: string }> = {
   replace_now: { look: 'due', word: 'Replace now' },
@@ -151,6 +152,7 @@ export function DueListPage() {
         </Card>
       )}
       <AnnualServiceDue />
+      <RemindersSent />
       <ReplacementProspects />
     </Page>
   );
