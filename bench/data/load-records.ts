@@ -1,4 +1,3 @@
-import type pg from 'pg';
 import { LABELS } from '../../shared/schemas/enums';
 import { PHOTO_KIND_LABELS, PHOTO_KINDS } from '../../shared/schemas/photos';
 import { INVENTED_NEIGHBOUR_TOWNS } from '../../server/db/factories/invented-names';

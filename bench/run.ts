@@ -1,0 +1,44 @@
+/**
+ * `npm run bench [-- --db lifeplate_bench_100k --growth-db lifeplate_bench_10k --quick --no-client]`: boots the
+ * app on a bench database (see `npm run bench:data`), measures the figures in docs/performance.md, prints a
+ * table and writes bench/results/<date>.json.
+ */
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { parseArgs } from './lib/args';
+import { benchDbName, databaseExists, databaseUrlOn, localBenchServer } from './lib/bench-db';
+import { runBench } from './server/run-bench';
+
+const HERE = path.dirname(fileURLToPath(import.meta.url));
+
+async function main() {
+  const args = parseArgs(process.argv.slice(2), { db: 'string', 'growth-db': 'string', quick: 'boolean', 'no-client': 'boolean', out: 'string' });
+  const log = (line: string) => console.log(`[bench] ${line}`);
+  const database = typeof args.db === 'string' ? args.db : benchDbName(100_000);
+  const growthName = typeof args['growth-db'] === 'string' ? args['growth-db'] : benchDbName(10_000);
+  const server = await localBenchServer(log);
+  try {
+    if (!(await databaseExists(server.serverUrl, database))) throw new Error(`No database ${database}: run \`npm run bench:data\` first.`);
+    const growth = growthName !== database && (await databaseExists(server.serverUrl, growthName)) ? databaseUrlOn(server.serverUrl, growthName) : null;
+    if (!growth) log(`No ${growthName}: the growth figures are skipped (npm run bench:data -- --appliances 10000).`);
+    const { file } = await runBench({
+      databaseUrl: databaseUrlOn(server.serverUrl, database),
+      growthDatabaseUrl: growth,
+      quick: Boolean(args.quick),
+      client: !args['no-client'],
+      outDir: typeof args.out === 'string' ? args.out : path.join(HERE, 'results'),
+      log,
+    });
+    log(`Wrote ${path.relative(process.cwd(), file)}`);
+  } finally {
+    server.stop();
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (err: unknown) => {
+    console.error(err instanceof Error ? (err.stack ?? err.message) : err);
+    process.exit(1);
+  },
+);
