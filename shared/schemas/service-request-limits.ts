@@ -12,3 +12,6 @@ export const SERVICE_REQUEST_LIMITS = {
 
 /** Requests one share link may send in a day: enough for a family, too few to flood the office. */
 export const SHARE_LINK_REQUESTS_PER_DAY = 5;
+
+export const NAME_NEEDED_MESSAGE = 'Your name is required.';
+export const CONTACT_NEEDED_MESSAGE = 'Give a phone number or an e-mail address, so the office can reach you.';

@@ -10,7 +10,7 @@
  */
 import { z } from 'zod';
 import { optionalText } from './common';
-import { SERVICE_REQUEST_LIMITS as MAX } from './service-request-limits';
+import { CONTACT_NEEDED_MESSAGE, NAME_NEEDED_MESSAGE, SERVICE_REQUEST_LIMITS as MAX } from './service-request-limits';
 
 export const SERVICE_REQUEST_VIAS = ['share_link', 'homeowner_account'] as const;
 export type ServiceRequestVia = (typeof SERVICE_REQUEST_VIAS)[number];
@@ -25,11 +25,9 @@ const phone = optionalText(MAX.contactPhone).refine(
 );
 const email = optionalText(MAX.contactEmail).refine((v) => !v || z.email().safeParse(v).success, 'Check the e-mail address, like name@example.com.');
 
-export const CONTACT_NEEDED_MESSAGE = 'Give a phone number or an e-mail address, so the office can reach you.';
-
 export const serviceRequestInput = z
   .object({
-    contactName: z.string('Your name is required.').trim().min(1, 'Your name is required.').max(MAX.contactName, `At most ${MAX.contactName} characters.`),
+    contactName: z.string(NAME_NEEDED_MESSAGE).trim().min(1, NAME_NEEDED_MESSAGE).max(MAX.contactName, `At most ${MAX.contactName} characters.`),
     contactPhone: phone,
     contactEmail: email,
     preferredTimes: optionalText(MAX.preferredTimes),

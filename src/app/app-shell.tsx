@@ -5,6 +5,7 @@ import { useMe, useSignOut } from '@/lib/auth';
 import { ROLE_LABELS } from '@shared/schemas/roles';
 import { can } from '@shared/policy';
 import { useOutboxAvailable } from '@/features/reminders/api/get-outbox';
+import { useNewServiceRequestCount } from '@/features/service-requests/api/list-service-requests';
 import { navFor } from './nav';
 
 function useDimMode() {
@@ -24,6 +25,7 @@ export function AppShell() {
   const principal = me.data?.principal;
   // The development outbox is linked only where the API has one (beside the local mail fake).
   const outbox = useOutboxAvailable(can(principal, 'reminders:send'));
+  const newRequests = useNewServiceRequestCount(can(principal, 'records:read')).data ?? 0;
   const nav = [...navFor(principal), ...(outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [])];
   const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';
 
@@ -69,6 +71,11 @@ export function AppShell() {
               }
             >
               {item.label}
+              {item.to === '/service-requests' && newRequests > 0 && (
+                <span className="ml-1.5 rounded-full bg-brass px-2 text-sm text-iron" aria-label={`${newRequests} new`}>
+                  {newRequests}
+                </span>
+              )}
             </NavLink>
           ))}
           <span className="ml-auto hidden items-center px-2 text-sm text-header-text/70 sm:flex">

@@ -6,6 +6,7 @@ type NavItem = { to: string; label: string; permission?: Permission; homeowner?:
 const ITEMS: NavItem[] = [
   { to: '/', label: 'Find' },
   { to: '/scan', label: 'Scan tag', permission: 'records:read' },
+  { to: '/service-requests', label: 'Service requests', permission: 'records:read' },
   { to: '/due', label: 'Due list', permission: 'catalog:manage' },
   { to: '/customers', label: 'Customers', permission: 'records:read' },
   { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },

@@ -2,12 +2,15 @@ import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { HomeownerViewDto } from '@shared/schemas/homeowner';
+import type { RecordSource } from '../api/record-source';
+import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
+import { ServiceRequestForm } from './service-request-form';
 
 const date = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
 
 /** The homeowner's life record: read-only, plain words first, the numbers alongside. */
-export function HomeownerRecord({ view, photoUrl }: { view: HomeownerViewDto; photoUrl?: (id: string, variant: 'thumb' | 'display') => string }) {
+export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; source: RecordSource }) {
   const a = view.appliance;
   return (
     <div className="mx-auto flex w-full max-w-2xl flex-col gap-4 px-3 py-4">
@@ -59,6 +62,7 @@ export function HomeownerRecord({ view, photoUrl }: { view: HomeownerViewDto; ph
           .
         </p>
       </Card>
+      <ServiceRequestForm source={source} company={view.company} />
       <Card title="Visits">
         {!view.visits.length && <p>No visits are recorded yet.</p>}
         <ol className="flex flex-col gap-4">
@@ -99,17 +103,7 @@ export function HomeownerRecord({ view, photoUrl }: { view: HomeownerViewDto; ph
           ))}
         </ol>
       </Card>
-      {photoUrl && view.photos.length > 0 && (
-        <Card title="Photos">
-          <div className="grid grid-cols-3 gap-2">
-            {view.photos.map((p) => (
-              <a key={p.id} href={photoUrl(p.id, 'display')}>
-                <img src={photoUrl(p.id, 'thumb')} alt={p.caption ?? p.kind} loading="lazy" className="aspect-square w-full rounded-plate object-cover" />
-              </a>
-            ))}
-          </div>
-        </Card>
-      )}
+      <HomeownerPhotos source={source} photos={view.photos} />
       <SafetyNotes kind={a.kind} fuel={a.fuel} />
       <p className="text-center text-sm text-iron-muted">
         Kept by {view.company.name} · {view.company.phone}

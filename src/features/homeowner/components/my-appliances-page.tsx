@@ -36,5 +36,5 @@ function MyApplianceView({ id }: { id: string }) {
   const view = useMyAppliance(id);
   if (view.isPending) return <Spinner />;
   if (view.error) return <Page title="Not found">{view.error.message}</Page>;
-  return <HomeownerRecord view={view.data} photoUrl={(photoId, variant) => `/api/photos/${photoId}/${variant}`} />;
+  return <HomeownerRecord view={view.data} source={{ kind: 'account', applianceId: id }} />;
 }

@@ -30,7 +30,7 @@ export function SharePage() {
           </p>
         </main>
       ) : (
-        <HomeownerRecord view={record.data} />
+        <HomeownerRecord view={record.data} source={{ kind: 'share', token }} />
       )}
     </div>
   );
