@@ -31,6 +31,8 @@ export type RunOptions = {
   /** Also run the client half (bench/client) against the served client build. */
   client: boolean;
   log: (line: string) => void;
+  /** Where the table goes (default: stdout). */
+  print?: (text: string) => void;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -141,8 +143,9 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   const m = meta as AppRun['meta'] | null;
   const g = growthMeta as AppRun['meta'] | null;
   const p = plan as Awaited<ReturnType<typeof explainDueQuery>> | null;
-  console.log(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
-  if (p) console.log(`Due query plan:\n${p.text}\n`);
+  const print = opts.print ?? ((text: string) => console.log(text));
+  print(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
+  if (p) print(`Due query plan:\n${p.text}\n`);
   const file = writeResults(opts.outDir, {
     date: new Date().toISOString(),
     quick: opts.quick,
