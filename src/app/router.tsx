@@ -1,4 +1,4 @@
-import type { ComponentType } from 'react';
+import { lazy, Suspense, type ComponentType } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import type { Permission } from '@shared/policy';
 
@@ -7,6 +7,10 @@ import type { Permission } from '@shared/policy';
  * shared vendor chunk, this file and its own chunk: no sign-in form, no shell, no office screens.
  * server/spa/route-chunks.ts names the chunks each path needs (for modulepreload and the bundle budget): keep it in step.
  */
+
+// The record's tag and photo sections sit below its first screen: their chunks load once the record has painted.
+const AppliancePhotos = lazy(async () => ({ default: (await import('@/features/photos/components/appliance-photos')).AppliancePhotos }));
+const ApplianceTag = lazy(async () => ({ default: (await import('@/features/tags/components/appliance-tag')).ApplianceTag }));
 
 /** A page in its own chunk, shown only to roles with the permission (the server enforces the same). */
 function guardedPage(path: string, permission: Permission, load: () => Promise<ComponentType>): RouteObject {
@@ -75,15 +79,22 @@ export function createAppRouter() {
         guardedPage('settings', 'company:settings', async () => (await import('@/features/company/components/company-settings-page')).CompanySettingsPage),
         guardedPage('appliances/new', 'records:write', async () => (await import('@/features/customers/components/new-appliance-page')).NewAppliancePage),
         guardedPage('appliances/:id', 'records:read', async () => {
-          const [{ ApplianceRecordPage }, { AppliancePhotos }, { ApplianceTag }] = await Promise.all([
-            import('@/features/appliance-record/components/appliance-record-page'),
-            import('@/features/photos/components/appliance-photos'),
-            import('@/features/tags/components/appliance-tag'),
-          ]);
+          const { ApplianceRecordPage } = await import('@/features/appliance-record/components/appliance-record-page');
           return function ApplianceRecordWithSections() {
             return (
               <ApplianceRecordPage
-                slots={{ photos: (id) => <AppliancePhotos applianceId={id} />, tag: (id) => <ApplianceTag applianceId={id} /> }}
+                slots={{
+                  photos: (id) => (
+                    <Suspense fallback={null}>
+                      <AppliancePhotos applianceId={id} />
+                    </Suspense>
+                  ),
+                  tag: (id) => (
+                    <Suspense fallback={null}>
+                      <ApplianceTag applianceId={id} />
+                    </Suspense>
+                  ),
+                }}
               />
             );
           };

@@ -1,4 +1,4 @@
-import { useEffect } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { useParams } from 'react-router-dom';
 import { Page, Spinner } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
@@ -12,12 +12,14 @@ import { CombustionTrend } from './combustion-trend';
 import { ComponentsList } from './components-list';
 import { DueList } from './due-list';
 import { EndOfLife } from './end-of-life';
-import { MakeupWaterSection } from './makeup-water-section';
-import { ShareLinksSection } from './share-links-section';
 import type { ReactNode } from 'react';
 import { RecordHeader } from './record-header';
 import { StartVisit } from './start-visit';
 import { Timeline } from './timeline';
+
+// Below the first screen, with their form schemas: fetched once the record has painted, not before it.
+const MakeupWaterSection = lazy(async () => ({ default: (await import('./makeup-water-section')).MakeupWaterSection }));
+const ShareLinksSection = lazy(async () => ({ default: (await import('./share-links-section')).ShareLinksSection }));
 
 /** Sections owned by other features (tags, photos) are handed in by the app's router, so features stay independent. */
 export type RecordSlots = { photos?: (applianceId: string) => ReactNode; tag?: (applianceId: string) => ReactNode };
@@ -67,10 +69,16 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
       {slots.photos?.(a.id)}
       <CombustionTrend applianceId={a.id} />
       {a.kind === 'steam_boiler' && (
-        <MakeupWaterSection applianceId={a.id} timeZone={me.data?.company?.timeZone ?? 'UTC'} canRecord={can(me.data?.principal, 'visits:record') && a.status !== 'removed'} />
+        <Suspense fallback={null}>
+          <MakeupWaterSection applianceId={a.id} timeZone={me.data?.company?.timeZone ?? 'UTC'} canRecord={can(me.data?.principal, 'visits:record') && a.status !== 'removed'} />
+        </Suspense>
       )}
       <Timeline applianceId={a.id} />
-      {can(me.data?.principal, 'share:create') && <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />}
+      {can(me.data?.principal, 'share:create') && (
+        <Suspense fallback={null}>
+          <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />
+        </Suspense>
+      )}
     </Page>
   );
 }
