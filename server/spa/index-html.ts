@@ -9,35 +9,54 @@ const ABOVE_THE_FOLD_FONTS = [
   'node_modules/@fontsource/source-sans-3/files/source-sans-3-latin-400-normal.woff2',
 ];
 
-/** The built index.html with, per route, modulepreload links for its lazy chunks and the embedded first-screen data. */
-export function indexHtmlRenderer(clientDir: string) {
+type Build = { mtimeMs: number; template: string; manifest: ViteManifest | null; entryFiles: Set<string>; fontLinks: string; headFor: Map<string, string> };
+
+function loadBuild(clientDir: string, mtimeMs: number): Build {
   const template = fs.readFileSync(path.join(clientDir, 'index.html'), 'utf8');
-  const manifest: ViteManifest | null = readManifest(clientDir);
-  const entryFiles = new Set(manifest?.[ENTRY_KEY] ? chunkClosure(manifest, [ENTRY_KEY]).js : []);
+  const manifest = readManifest(clientDir);
   const fontLinks = manifest
     ? ABOVE_THE_FOLD_FONTS.filter((key) => manifest[key])
         .map((key) => `<link rel="preload" href="/${manifest[key].file}" as="font" type="font/woff2" crossorigin>`)
         .join('')
     : '';
-  const headFor = new Map<string, string>();
+  const entryFiles = new Set(manifest?.[ENTRY_KEY] ? chunkClosure(manifest, [ENTRY_KEY]).js : []);
+  return { mtimeMs, template, manifest, entryFiles, fontLinks, headFor: new Map() };
+}
 
-  function routeHead(route: ClientRoute | null): string {
-    if (!manifest || !route) return fontLinks;
-    const cached = headFor.get(route.name);
-    if (cached !== undefined) return cached;
-    let links = '';
-    try {
-      links = chunkClosure(manifest, route.modules)
-        .js.filter((file) => !entryFiles.has(file))
-        .map((file) => `<link rel="modulepreload" crossorigin href="/${file}">`)
-        .join('');
-    } catch {
-      // A build older than the route table: serve the page without hints rather than fail it.
-    }
-    headFor.set(route.name, fontLinks + links);
-    return fontLinks + links;
+function routeHead(build: Build, route: ClientRoute | null): string {
+  if (!build.manifest || !route) return build.fontLinks;
+  const cached = build.headFor.get(route.name);
+  if (cached !== undefined) return cached;
+  let links = '';
+  try {
+    links = chunkClosure(build.manifest, route.modules)
+      .js.filter((file) => !build.entryFiles.has(file))
+      .map((file) => `<link rel="modulepreload" crossorigin href="/${file}">`)
+      .join('');
+  } catch {
+    // A build older than the route table: serve the page without hints rather than fail it.
   }
+  build.headFor.set(route.name, build.fontLinks + links);
+  return build.fontLinks + links;
+}
 
-  return (route: ClientRoute | null, bodyData = ''): string =>
-    template.replace('</head>', `${routeHead(route)}</head>`).replace('<div id="root"></div>', `<div id="root"></div>${bodyData}`);
+/**
+ * The built index.html with, per route, modulepreload links for its lazy chunks and the embedded first-screen data.
+ * Read again when index.html changes, so a rebuild under a running server never serves links to deleted chunks.
+ */
+export function indexHtmlRenderer(clientDir: string) {
+  const indexFile = path.join(clientDir, 'index.html');
+  let build = loadBuild(clientDir, fs.statSync(indexFile).mtimeMs);
+  return (route: ClientRoute | null, bodyData = ''): string => {
+    // Mid-rebuild the file may be missing for a moment: keep the build we have until a complete one is there.
+    const mtimeMs = fs.existsSync(indexFile) ? fs.statSync(indexFile).mtimeMs : build.mtimeMs;
+    if (mtimeMs !== build.mtimeMs) {
+      try {
+        build = loadBuild(clientDir, mtimeMs);
+      } catch {
+        // Half-written: the next request tries again.
+      }
+    }
+    return build.template.replace('</head>', `${routeHead(build, route)}</head>`).replace('<div id="root"></div>', `<div id="root"></div>${bodyData}`);
+  };
 }
