@@ -5,10 +5,17 @@ import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
 
 export const JOBS_SCHEMA = 'pgboss';
 
-type Job = { queue: string; cron: string; run: (ctx: AppContext, data: unknown) => Promise<unknown> };
+type Job = {
+  queue: string;
+  cron: string;
+  /** How long one run may take before pg-boss counts it as failed, and how often a failed run is tried again. */
+  options: { expireInSeconds: number; retryLimit: number; retryDelay: number };
+  run: (ctx: AppContext, data: unknown) => Promise<unknown>;
+};
 const JOBS: Job[] = [
-  { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, run: remindersJob },
-  { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, run: (ctx) => photoSweepJob(ctx) },
+  // A retry is safe: the unique key keeps a reminder from being recorded (and so sent) twice.
+  { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, options: { expireInSeconds: 4 * 3600, retryLimit: 2, retryDelay: 600 }, run: remindersJob },
+  { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, options: { expireInSeconds: 3600, retryLimit: 1, retryDelay: 600 }, run: (ctx) => photoSweepJob(ctx) },
 ];
 
 /**
@@ -27,7 +34,9 @@ export async function startJobs(ctx: AppContext, options: { cron?: boolean } = {
   boss.on('error', (err) => ctx.logger.warn({ err }, 'job queue error'));
   await boss.start();
   for (const job of JOBS) {
-    await boss.createQueue(job.queue);
+    await boss.createQueue(job.queue, { name: job.queue, ...job.options });
+    // createQueue leaves an existing queue as it was; this brings its options up to date.
+    await boss.updateQueue(job.queue, { name: job.queue, ...job.options });
     await boss.schedule(job.queue, job.cron, {}, { tz: 'UTC' });
     await boss.work(job.queue, async (jobs) => {
       for (const j of jobs) {

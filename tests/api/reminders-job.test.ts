@@ -8,6 +8,7 @@ import { REMINDERS_CRON, REMINDERS_QUEUE } from '../../server/jobs/reminders-job
 import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE } from '../../server/jobs/photo-sweep-job';
 import { todayInTimeZone } from '../../shared/dates';
 import { addMonths } from '../../shared/trade/iso-date';
+import { closeContext } from '../../server/build-context';
 import { testContext } from '../support/context';
 import { eventually, mailTo, uniqueEmail } from '../support/outbox';
 
@@ -20,7 +21,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await jobs?.stop();
-  await ctx.pool.end();
+  await closeContext(ctx);
 });
 
 describe('the reminders job on pg-boss', () => {
@@ -32,6 +33,10 @@ describe('the reminders job on pg-boss', () => {
         expect.objectContaining({ name: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON }),
       ]),
     );
+  });
+
+  it('gives the daily run time to finish and retries it when it fails', async () => {
+    expect(await jobs.boss.getQueue(REMINDERS_QUEUE)).toMatchObject({ expireInSeconds: 4 * 3600, retryLimit: 2 });
   });
 
   it('runs the reminder sweep when the job is sent, and a second job sends nothing more', async () => {

@@ -5,6 +5,7 @@ import { insertAppliance, insertCustomer, insertSite } from '../../server/db/fac
 import { createApp } from '../../server/app';
 import { todayInTimeZone } from '../../shared/dates';
 import { addMonths } from '../../shared/trade/iso-date';
+import { closeContext } from '../../server/build-context';
 import { testApp } from '../support/context';
 import { mailTo, uniqueEmail } from '../support/outbox';
 import { agentsFor, createTenant, signIn, type Tenant } from '../support/tenant';
@@ -36,7 +37,7 @@ beforeAll(async () => {
   await boilerFor(t, 'noEmail', { email: null });
   await boilerFor(other, 'elsewhere', { email: uniqueEmail() });
 });
-afterAll(() => ctx.pool.end());
+afterAll(() => closeContext(ctx));
 
 describe('POST /api/reminders/annual-service/:applianceId (the office sends a reminder)', () => {
   it('sends it, records the row, the timeline event and an audit row', async () => {

@@ -9,12 +9,13 @@ import { runReminders } from '../../server/modules/reminders/reminders.service';
 import type { AppContext } from '../../server/context';
 import { todayInTimeZone } from '../../shared/dates';
 import { addDays, addMonths } from '../../shared/trade/iso-date';
+import { closeContext } from '../../server/build-context';
 import { testApp } from '../support/context';
 import { mailTo, parsedMailTo, uniqueEmail } from '../support/outbox';
 import { createTenant, type Tenant } from '../support/tenant';
 
 const { app, ctx } = testApp();
-afterAll(() => ctx.pool.end());
+afterAll(() => closeContext(ctx));
 
 type Customer = Awaited<ReturnType<typeof insertCustomer>>;
 
