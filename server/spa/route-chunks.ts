@@ -24,6 +24,12 @@ export const CLIENT_ROUTES: readonly ClientRoute[] = [
   },
   { name: 'tag', path: '/t/:code', pattern: /^\/t\/([^/]+)\/?$/, modules: ['src/features/tags/components/tag-landing-page.tsx'] },
   {
+    name: 'welcome',
+    path: '/welcome/:invitationId',
+    pattern: /^\/welcome\/([^/]+)\/?$/,
+    modules: ['src/features/invitations/components/welcome-page.tsx'],
+  },
+  {
     name: 'my-appliance',
     path: '/my/:id',
     pattern: /^\/my\/([^/]+)\/?$/,

@@ -62,6 +62,14 @@ export function createAppRouter() {
         return { element: <TagLandingPage /> };
       },
     },
+    // Where an invitation's e-mailed sign-in link lands: small, outside the office shell.
+    {
+      path: '/welcome/:invitationId',
+      lazy: async () => {
+        const { WelcomePage } = await import('@/features/invitations/components/welcome-page');
+        return { element: <WelcomePage /> };
+      },
+    },
     {
       lazy: async () => {
         const { SignedInLayout } = await import('./signed-in-layout');

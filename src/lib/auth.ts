@@ -18,6 +18,15 @@ export type SignInInput = { email: string; password: string };
 export const signIn = (input: SignInInput) => api<unknown>('/auth/sign-in/email', { method: 'POST', body: input });
 export const signOut = () => api<unknown>('/auth/sign-out', { method: 'POST', body: {} });
 
+export type SignInLinkRequest = { email: string; callbackURL: string; errorCallbackURL?: string; invitationId?: string };
+
+/**
+ * Asks for a one-time sign-in link by e-mail. The server answers the same whether or not it sent one (it sends only to
+ * invited or known addresses), so the screen can only say "if this address may sign in, a link is on its way".
+ */
+export const requestSignInLink = ({ invitationId, ...body }: SignInLinkRequest) =>
+  api<{ status: boolean }>('/auth/sign-in/magic-link', { method: 'POST', body: { ...body, ...(invitationId ? { metadata: { invitationId } } : {}) } });
+
 export function useSignIn() {
   const qc = useQueryClient();
   return useMutation({ mutationFn: signIn, onSuccess: () => qc.invalidateQueries({ queryKey: ['me'] }) });

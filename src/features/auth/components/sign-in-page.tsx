@@ -6,13 +6,17 @@ import { LogoMark } from '@/components/ui/logo-mark';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useMe, useSignIn } from '@/lib/auth';
+import { SignInLinkForm } from './sign-in-link-form';
 
 export function SignInPage() {
   const me = useMe();
   const signIn = useSignIn();
   const navigate = useNavigate();
   const location = useLocation();
-  const next = new URLSearchParams(location.search).get('next') ?? '/';
+  const params = new URLSearchParams(location.search);
+  const next = params.get('next') ?? '/';
+  const linkFailed = params.get('link') === 'failed';
+  const [byLink, setByLink] = useState(linkFailed);
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const [errors, setErrors] = useState<{ email?: string; password?: string; form?: string }>({});
@@ -67,6 +71,17 @@ export function SignInPage() {
           {signIn.isPending ? 'Signing in…' : 'Sign in'}
         </Button>
       </form>
+      <section className="flex flex-col gap-4 rounded-plate border border-plate-line bg-surface p-5">
+        <h2 className="text-lg font-semibold">No password?</h2>
+        {linkFailed && <Notice kind="caution" title="That sign-in link did not work">Each link works once, for 24 hours. Ask for a new one below.</Notice>}
+        {byLink ? (
+          <SignInLinkForm next={next.startsWith('/') ? next : '/'} />
+        ) : (
+          <Button variant="secondary" onClick={() => setByLink(true)}>
+            E-mail me a sign-in link
+          </Button>
+        )}
+      </section>
     </main>
   );
 }

@@ -12,12 +12,14 @@ import { useCreateSite } from '../api/create-site';
 import { ContactCard } from './contact-card';
 import { SiteCard } from './site-card';
 import { SiteForm } from './site-form';
+import { InviteHomeowner } from './invite-homeowner';
 
 export function CustomerDetailPage() {
   const { id } = useParams();
   const me = useMe();
   const customer = useCustomer(id);
   const canWrite = can(me.data?.principal, 'records:write');
+  const canInvite = can(me.data?.principal, 'share:create');
 
   if (customer.isPending) return <Spinner />;
   if (customer.isError) {
@@ -45,6 +47,7 @@ export function CustomerDetailPage() {
       }
     >
       <ContactCard customer={c} canWrite={canWrite} />
+      {canInvite && <InviteHomeowner customer={c} />}
       <h2 className="mt-2 text-xl font-bold">Sites</h2>
       {c.sites.length === 0 && <p className="text-iron-muted">No site yet. Add the address where the appliances are.</p>}
       {c.sites.map((s) => (

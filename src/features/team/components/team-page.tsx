@@ -8,6 +8,8 @@ import { can, canManageMemberRole } from '@shared/policy';
 import { MEMBER_ROLES, ROLE_LABELS, type MemberRole } from '@shared/schemas/roles';
 import { useMembers } from '../api/get-members';
 import { useChangeMemberRole, useDeactivateMember } from '../api/update-member';
+import { InviteForm } from './invite-form';
+import { PendingInvitations } from './pending-invitations';
 
 export function TeamPage() {
   const me = useMe();
@@ -21,6 +23,8 @@ export function TeamPage() {
   return (
     <Page title="Team" subtitle="Everyone who signs in for your company.">
       {error && <Notice kind="danger" title="Not changed">{error.message}</Notice>}
+      {manages && principal && <InviteForm principal={principal} />}
+      {manages && principal && <PendingInvitations principal={principal} />}
       {members.isPending ? (
         <Spinner />
       ) : (
