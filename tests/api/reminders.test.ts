@@ -127,6 +127,19 @@ describe('the scheduled reminder run', () => {
     expect(await reminderEvents(b.lapsed.id)).toHaveLength(1);
   });
 
+  it('a reminder held back for lack of an address goes out once the customer has one, and only once', async () => {
+    const address = uniqueEmail();
+    await ctx.db.update(customers).set({ email: address }).where(eq(customers.id, c.noEmail.id));
+    expect(await runReminders(ctx, { companyId: t.company.id })).toMatchObject({ created: 0, retried: 1, sent: 1, emails: 1 });
+    const rows = (await rowsOf(t.company.id)).filter((r) => r.applianceId === b.noEmail.id);
+    expect(rows).toEqual([expect.objectContaining({ status: 'sent', toEmail: address, attempts: 1 })]);
+    expect(mailTo(address)).toHaveLength(1);
+    expect(await runReminders(ctx, { companyId: t.company.id })).toMatchObject({ created: 0, retried: 0, emails: 0 });
+    expect(mailTo(address)).toHaveLength(1);
+    // The opted-out customer is still opted out: their row stays as it was.
+    expect((await rowsOf(t.company.id)).filter((r) => r.applianceId === b.optedOut.id)).toEqual([expect.objectContaining({ status: 'opted_out' })]);
+  });
+
   it('the database itself refuses a second row for the same appliance, kind, part and due date', async () => {
     const [row] = (await rowsOf(t.company.id)).filter((r) => r.applianceId === b.lapsed.id);
     const duplicate = ctx.db.insert(reminders).values({

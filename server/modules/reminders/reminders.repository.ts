@@ -122,6 +122,28 @@ export const remindersRepository = {
       .returning({ id: reminders.id });
   },
 
+  /**
+   * Rows among `keys` (reminders still due) that could not go out before, for lack of an address or because the
+   * customer had opted out, whose customer can be reached now: back to 'pending', atomically as in `claim`.
+   */
+  async claimNowReachable(db: DbOrTx, companyId: string, keys: Pick<NewReminder, 'applianceId' | 'kind' | 'partKey' | 'dueOn'>[]) {
+    if (!keys.length) return [];
+    const result = await db.execute<{ id: string }>(sql`
+      update reminders r set status = 'pending'
+      from customers c
+      where r.company_id = ${companyId} and r.status in ('no_email', 'opted_out')
+        and c.id = r.customer_id and c.company_id = r.company_id
+        and coalesce(c.email, '') <> '' and not c.reminders_opt_out
+        and (r.appliance_id, r.kind::text, r.part_key, r.due_on) in (
+          select k.appliance_id, k.kind, k.part_key, k.due_on
+          from jsonb_to_recordset(${JSON.stringify(keys.map((k) => ({ appliance_id: k.applianceId, kind: k.kind, part_key: k.partKey ?? '', due_on: k.dueOn })))}::jsonb)
+            as k(appliance_id uuid, kind text, part_key text, due_on date)
+        )
+      returning r.id
+    `);
+    return result.rows;
+  },
+
   /** The pending rows with everything an e-mail line needs, the customer's current address and choice included. */
   async pendingWithDetails(db: DbOrTx, companyId: string, ids: string[]) {
     if (!ids.length) return [];

@@ -59,7 +59,9 @@ export async function runReminders(ctx: AppContext, options: { companyId: string
     })),
   ];
   const created = await repo.insertNew(ctx.db, rows);
-  const retried = await repo.claim(ctx.db, { companyId, from: ['failed'], maxAttempts: MAX_SEND_ATTEMPTS });
+  const failed = await repo.claim(ctx.db, { companyId, from: ['failed'], maxAttempts: MAX_SEND_ATTEMPTS });
+  const reachable = await repo.claimNowReachable(ctx.db, companyId, rows);
+  const retried = [...failed, ...reachable];
   const ids = [...created, ...retried].map((r) => r.id);
   const outcome = await deliverReminders(ctx, { companyId, today, ids });
   return { created: created.length, retried: retried.length, ...outcome };
