@@ -6,11 +6,11 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { readStoredMail } from '../../fakes/smtp';
 import { auditLog, memberships, serviceRequests, shareLinks, timelineEvents } from '../../server/db/schema/index';
 import { insertAppliance, insertCustomer, insertSite } from '../../server/db/factories/records';
-import { insertMember } from '../../server/db/factories/users';
+import { insertHomeowner, insertMember } from '../../server/db/factories/users';
 import { hashShareToken } from '../../server/modules/share-links/resolve-share-token';
 import { testApp } from '../support/context';
 import { freePort } from '../support/global-setup';
-import { agentsFor, createTenant, type Tenant } from '../support/tenant';
+import { agentsFor, createTenant, signIn, type Tenant } from '../support/tenant';
 
 const { app, ctx } = testApp();
 let t: Tenant;
@@ -198,6 +198,16 @@ describe('a service request from the signed-in homeowner', () => {
     expect(row).toMatchObject({ via: 'homeowner_account', requesterUserId: t.homeowner.user.id, shareLinkId: null, applianceId: boilerId });
     const [event] = await ctx.db.select().from(timelineEvents).where(eq(timelineEvents.refId, res.body.id));
     expect(event).toMatchObject({ kind: 'note', homeownerVisible: false, actorId: t.homeowner.user.id });
+  });
+
+  it('takes five a day from one homeowner, then answers 429', async () => {
+    const homeowner = await insertHomeowner(ctx.db, { companyId: t.company.id, customerId: t.customer.id });
+    const agent = await signIn(app, homeowner.user.email);
+    const body = { contactName: 'Second Owner', contactEmail: 'second.owner@example.test' };
+    for (let i = 0; i < 5; i++) expect((await agent.post(`/api/homeowner/appliances/${boilerId}/service-requests`).send(body)).status).toBe(201);
+    const sixth = await agent.post(`/api/homeowner/appliances/${boilerId}/service-requests`).send(body);
+    expect(sixth.status).toBe(429);
+    expect(await ctx.db.select().from(serviceRequests).where(eq(serviceRequests.requesterUserId, homeowner.user.id))).toHaveLength(5);
   });
 
   it('answers 404 for a neighbour’s or another company’s appliance, 403 to a member, 401 signed out', async () => {

@@ -72,6 +72,8 @@ describe('booking a service from the share page', () => {
     const box = await send.boundingBox();
     expect(box!.height).toBeGreaterThanOrEqual(44);
     expect(box!.width).toBeLessThanOrEqual(360);
+    // Nothing on the page is wider than the phone.
+    expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
 
     // Nothing typed: the two missing pieces are named before anything is sent.
     await send.click();
