@@ -7,7 +7,9 @@ import type { buildNameLists } from './name-lists';
 export type LoadStep = { name: string; sql: string; params?: unknown[] };
 
 /** Share of years with an annual visit, of visits with a part swap and of visits with a photo. */
-const VISIT_YEAR_SHARE = 0.65;
+const VISIT_YEAR_SHARE = 0.5;
+/** In the last two years most customers are on an annual service agreement, as a working company's records show. */
+const RECENT_VISIT_YEAR_SHARE = 0.92;
 const SWAP_SHARE = 0.28;
 const PHOTO_SHARE = 0.15;
 const HISTORY_DAYS = 7305; // 20 years
@@ -23,7 +25,7 @@ export function prototypeSteps(protos: ReturnType<typeof buildPrototypes>): Load
           input_btuh int, firing_rate_gph numeric, gross_output_btuh int, mawp_psi numeric, manufactured_month smallint, location text,
           ignition_type text, burner_count smallint, vent_type text, nslots int);
         create temp table bench_proto_slot as
-        select * from jsonb_to_recordset($2::jsonb) as t(p int, slot int, type_code text, spec jsonb, spec_key text, label text, reasons text[]);
+        select * from jsonb_to_recordset($2::jsonb) as t(p int, slot int, type_code text, spec jsonb, spec_key text, label text, reasons text[], annual boolean);
         create temp table bench_reading as
         select * from jsonb_to_recordset($3::jsonb) as t(p int, wear int, r int, readings jsonb, results jsonb, key jsonb, summary text, findings text);
         create index on bench_proto_slot (p, slot);
@@ -49,7 +51,7 @@ export function prototypeSteps(protos: ReturnType<typeof buildPrototypes>): Load
             nslots: protos.slots.filter((s) => s.p === p).length,
           })),
         ),
-        JSON.stringify(protos.slots.map((s) => ({ p: s.p, slot: s.slot, type_code: s.typeCode, spec: s.spec, spec_key: s.specKey, label: s.label, reasons: s.reasons }))),
+        JSON.stringify(protos.slots.map((s) => ({ p: s.p, slot: s.slot, type_code: s.typeCode, spec: s.spec, spec_key: s.specKey, label: s.label, reasons: s.reasons, annual: s.annual }))),
         JSON.stringify(protos.readings),
       ],
     },
@@ -121,7 +123,7 @@ export function recordSteps(opts: { today: string; names: ReturnType<typeof buil
         cross join lateral (select a.installed_on + y * 365 + pg_temp.between_int(-20, 20, a.k || ':vd:' || a.n || ':' || y) as visited_on) d
         cross join lateral (select pg_temp.h(a.k || ':vt:' || a.n || ':' || y) as x) t
         where d.visited_on < ${today} and d.visited_on > ${today} - ${HISTORY_DAYS}
-          and pg_temp.h(a.k || ':vy:' || a.n || ':' || y) < ${VISIT_YEAR_SHARE};
+          and pg_temp.h(a.k || ':vy:' || a.n || ':' || y) < (case when d.visited_on > ${today} - 730 then ${RECENT_VISIT_YEAR_SHARE} else ${VISIT_YEAR_SHARE} end);
         alter table bench_vis add column departed_at timestamptz;
         update bench_vis set departed_at = arrived_at + make_interval(mins => pg_temp.between_int(60, 150, k || ':vm:' || n || ':' || y));
         create temp table bench_last as select appliance_id, max(visited_on) as last_visit from bench_vis group by appliance_id;
@@ -135,13 +137,19 @@ export function recordSteps(opts: { today: string; names: ReturnType<typeof buil
       name: 'components and part swaps',
       sql: `
         create temp table bench_swp as
-        select v.*, ps.slot, ps.type_code, ps.spec_key, ps.label, pg_temp.uid(v.k || ':sw:' || v.n || ':' || v.y) as swap_id,
-          ps.reasons[pg_temp.between_int(1, cardinality(ps.reasons), v.k || ':rs:' || v.n || ':' || v.y)] as reason,
-          row_number() over (partition by v.appliance_id, ps.slot order by v.visited_on) as seg
-        from bench_vis v
-        join bench_proto pr on pr.p = v.p
-        join bench_proto_slot ps on ps.p = v.p and ps.slot = floor(pg_temp.h(v.k || ':sl:' || v.n || ':' || v.y) * pr.nslots)::int
-        where pg_temp.h(v.k || ':sx:' || v.n || ':' || v.y) < ${SWAP_SHARE};
+        select sw.*, row_number() over (partition by sw.appliance_id, sw.slot order by sw.visited_on) as seg
+        from (
+          -- one part at random at some visits, and the annual parts at every visit, one swap per part per visit
+          select distinct on (v.id, ps.slot) v.*, ps.slot, ps.type_code, ps.spec_key, ps.label,
+            pg_temp.uid(v.k || ':sw:' || v.n || ':' || v.y || ':' || ps.slot) as swap_id,
+            ps.reasons[pg_temp.between_int(1, cardinality(ps.reasons), v.k || ':rs:' || v.n || ':' || v.y || ':' || ps.slot)] as reason
+          from bench_vis v
+          join bench_proto pr on pr.p = v.p
+          join bench_proto_slot ps on ps.p = v.p
+            and (ps.annual or (ps.slot = floor(pg_temp.h(v.k || ':sl:' || v.n || ':' || v.y) * pr.nslots)::int
+                               and pg_temp.h(v.k || ':sx:' || v.n || ':' || v.y) < ${SWAP_SHARE}))
+          order by v.id, ps.slot
+        ) sw;
         insert into components (id, company_id, appliance_id, type_code, spec, spec_key, installed_on, original_with_appliance, last_inspected_on,
           removed_on, removal_reason, replaced_by_id, condition_failed, condition_note, note, created_by, updated_by)
         select pg_temp.uid(s.k || ':p:' || s.n || ':' || s.slot || ':' || s.seg), s.company_id, s.appliance_id, ps.type_code, ps.spec, ps.spec_key,
@@ -194,11 +202,15 @@ export function recordSteps(opts: { today: string; names: ReturnType<typeof buil
         from bench_app a join bench_proto pr on pr.p = a.p;
         insert into timeline_events (company_id, appliance_id, occurred_at, kind, ref_id, summary, data, homeowner_visible, actor_id)
         select v.company_id, v.appliance_id, v.departed_at, 'visit', v.id,
-          ($2::jsonb ->> v.type) || ': left operating.' || coalesce(' Replaced: ' || s.label || case when s.spec_key <> '' then ' (' || s.spec_key || ')' else '' end || '.', ''),
-          jsonb_build_object('visitId', v.id, 'type', v.type, 'outcome', 'left_operating', 'visitedOn', v.visited_on,
-            'swapIds', case when s.swap_id is null then '[]'::jsonb else jsonb_build_array(s.swap_id) end),
+          ($2::jsonb ->> v.type) || ': left operating.' || coalesce(' Replaced: ' || s.parts || '.', ''),
+          jsonb_build_object('visitId', v.id, 'type', v.type, 'outcome', 'left_operating', 'visitedOn', v.visited_on, 'swapIds', coalesce(s.ids, '[]'::jsonb)),
           true, v.tech
-        from bench_vis v left join bench_swp s on s.id = v.id;
+        from bench_vis v
+        left join (
+          select id, string_agg(label || case when spec_key <> '' then ' (' || spec_key || ')' else '' end, ', ' order by slot) as parts,
+            jsonb_agg(swap_id order by slot) as ids
+          from bench_swp group by id
+        ) s on s.id = v.id;
         insert into timeline_events (company_id, appliance_id, occurred_at, kind, ref_id, summary, data, homeowner_visible, actor_id)
         select v.company_id, v.appliance_id, v.departed_at, 'reading', v.id, rd.summary,
           jsonb_build_object('visitId', v.id, 'visitedOn', v.visited_on) || coalesce(rd.key, '{}'::jsonb), true, v.tech

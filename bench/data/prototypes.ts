@@ -15,7 +15,8 @@ export const WEAR_LEVELS = 8;
 export const READINGS_PER_WEAR = 3;
 
 export type Prototype = { p: number; row: DemoApplianceRow };
-export type PrototypeSlot = { p: number; slot: number; typeCode: string; spec: Record<string, string | number>; specKey: string; label: string; reasons: string[] };
+/** `annual`: the demo swaps this part at every visit (oil nozzle and filter), so the generator does too. */
+export type PrototypeSlot = { p: number; slot: number; typeCode: string; spec: Record<string, string | number>; specKey: string; label: string; reasons: string[]; annual: boolean };
 export type PrototypeReading = { p: number; wear: number; r: number; readings: unknown; results: unknown; key: Record<string, number> | null; summary: string; findings: string };
 
 const fmt = (v: number | undefined, unit: string, label: string) => (v === undefined ? null : `${label} ${v}${unit}`);
@@ -35,7 +36,8 @@ export function buildPrototypes(f: Faker, today: string) {
     prototypes.push({ p, row });
     partSlotsFor(f, shape).forEach((s, slot) => {
       const label = COMPONENT_TYPES[s.typeCode].label;
-      slots.push({ p, slot, typeCode: s.typeCode, spec: s.spec, specKey: formatSpec(s.typeCode, s.spec), label, reasons: s.reasons });
+      const annual = s.swapEveryYears?.[0] === 1 && s.swapEveryYears[1] === 1;
+      slots.push({ p, slot, typeCode: s.typeCode, spec: s.spec, specKey: formatSpec(s.typeCode, s.spec), label, reasons: s.reasons, annual });
     });
     for (let wear = 0; wear < WEAR_LEVELS; wear++) {
       for (let r = 0; r < READINGS_PER_WEAR; r++) {

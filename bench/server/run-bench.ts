@@ -1,4 +1,3 @@
-import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -8,7 +7,8 @@ import * as schema from '../../server/db/schema/index';
 import type { Db } from '../../server/db/client';
 import { startFakeS3 } from '../../fakes/s3';
 import { createObjectStorage } from '../../server/lib/object-storage';
-import { CLIENT_DIST, PROJECT_ROOT } from '../../scripts/lib/paths';
+import { CLIENT_DIST } from '../../scripts/lib/paths';
+import { buildClientIfStale } from '../../scripts/lib/client-build';
 import { readBenchMeta } from '../data/bench-meta';
 import { databaseNameOf } from '../lib/bench-db';
 import type { BenchFigure } from '../lib/figure';
@@ -51,13 +51,6 @@ async function withApp<T>(databaseUrl: string, s3Endpoint: string, clientDir: st
   }
 }
 
-function ensureClientBuild(log: (line: string) => void) {
-  if (fs.existsSync(path.join(CLIENT_DIST, 'index.html'))) return;
-  log('Building the client (npx vite build)…');
-  const res = spawnSync('npx', ['vite', 'build'], { cwd: PROJECT_ROOT, stdio: 'inherit' });
-  if (res.status !== 0) throw new Error('vite build failed');
-}
-
 export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure[]; file: string }> {
   const scale: Scale = { quick: opts.quick };
   const log = opts.log;
@@ -68,7 +61,7 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   let meta: AppRun['meta'] | null = null;
   let growthMeta: AppRun['meta'] | null = null;
   try {
-    if (opts.client) ensureClientBuild(log);
+    if (opts.client) await buildClientIfStale(CLIENT_DIST, { quiet: true });
     const clientDir = opts.client ? CLIENT_DIST : undefined;
     let big: LatencySet | null = null;
 
