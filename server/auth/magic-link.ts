@@ -26,7 +26,7 @@ export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
     const invited = typeof invitationId === 'string' && z.uuid().safeParse(invitationId).success ? await repo.findOpenForMail(db, invitationId, email) : null;
     if (!invited) return signInMail(email, url);
     const { invitation, companyName, invitedByName } = invited;
-    return invitationMail(email, url, { kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
+    return invitationMail(email, url, { companyId: invitation.companyId, kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
   }
 
   const plugin = magicLink({

@@ -79,6 +79,7 @@ describe('team invitations', () => {
     expect(mail.subject).toContain(t.company.name);
     expect(mail.text).toContain(`${t.manager.user.name} at ${t.company.name}`);
     expect(mail.text).toContain('as a technician');
+    expect(mail.headers.get('x-lifeplate-company')).toBe(t.company.id);
     const link = linkIn(mail.text);
     expect(linkIn(mail.html || undefined).href).toBe(link.href);
     expect(link.searchParams.get('callbackURL')).toBe(`/welcome/${res.body.id}`);

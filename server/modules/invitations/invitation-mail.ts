@@ -1,8 +1,10 @@
 import type { Mail } from '../../lib/mailer';
+import { COMPANY_MAIL_HEADER } from '../reminders/deliver-reminders';
 import { ROLE_LABELS, type MemberRole } from '../../../shared/schemas/roles';
 import { SIGN_IN_LINK_HOURS, type InvitationKind } from '../../../shared/schemas/invitations';
 
 export type InvitationMailFacts = {
+  companyId: string;
   kind: InvitationKind;
   role: MemberRole | null;
   companyName: string;
@@ -32,7 +34,12 @@ function compose(to: string, subject: string, before: string[], linkLabel: strin
 
 const linkNote = `The link signs you in once and works for ${SIGN_IN_LINK_HOURS} hours.`;
 
+/** Marked with the company, so the development outbox shows it to that company. */
 export function invitationMail(to: string, url: string, facts: InvitationMailFacts): Mail {
+  return { ...invitationMailBody(to, url, facts), headers: { [COMPANY_MAIL_HEADER]: facts.companyId } };
+}
+
+function invitationMailBody(to: string, url: string, facts: InvitationMailFacts): Mail {
   const from = facts.invitedByName ? `${facts.invitedByName} at ${facts.companyName}` : facts.companyName;
   const lapse = `If it has stopped working, open it anyway and ask for a new one: the invitation stays open until ${longDate(facts.expiresAt)}.`;
   const ignore = 'If you were not expecting this, you can ignore this e-mail; nothing happens unless you open the link.';
