@@ -1,6 +1,9 @@
 import nodemailer from 'nodemailer';
 import type { AppConfig } from '../config';
 
+/** Names the company a message was sent for, so the development outbox shows a company only its own mail. */
+export const COMPANY_MAIL_HEADER = 'X-Lifeplate-Company';
+
 export type Mail = { to: string; subject: string; text: string; html: string; headers?: Record<string, string> };
 
 /** Mail over real SMTP; in development and tests the host is the local fake, which offers no TLS. */

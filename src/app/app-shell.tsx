@@ -4,7 +4,6 @@ import { LogoMark } from '@/components/ui/logo-mark';
 import { useMe, useSignOut } from '@/lib/auth';
 import { ROLE_LABELS } from '@shared/schemas/roles';
 import { can } from '@shared/policy';
-import { useOutboxAvailable } from '@/features/reminders/api/get-outbox';
 import { useNewServiceRequestCount } from '@/features/service-requests/api/list-service-requests';
 import { navFor } from './nav';
 
@@ -23,8 +22,8 @@ export function AppShell() {
   const navigate = useNavigate();
   const [dim, setDim] = useDimMode();
   const principal = me.data?.principal;
-  // The development outbox is linked only where the API has one (beside the local mail fake).
-  const outbox = useOutboxAvailable(can(principal, 'reminders:send'));
+  // The development outbox exists only beside the local mail fake; /me says so.
+  const outbox = Boolean(me.data?.devOutbox) && can(principal, 'reminders:send');
   const newRequests = useNewServiceRequestCount(can(principal, 'records:read')).data ?? 0;
   const nav = [...navFor(principal), ...(outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [])];
   const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';

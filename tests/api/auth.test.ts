@@ -18,12 +18,15 @@ describe('sign-in and sign-out', () => {
     expect(me.status).toBe(200);
     expect(me.body.principal).toEqual({ kind: 'member', userId: t.technician.user.id, companyId: t.company.id, role: 'technician' });
     expect(me.body.company.id).toBe(t.company.id);
+    // Tests run beside the SMTP fake, so members may open the development outbox.
+    expect(me.body.devOutbox).toBe(true);
   });
 
   it('knows a homeowner by their customer records, not as a member', async () => {
     const agent = await signIn(app, t.homeowner.user.email);
     const me = await agent.get('/api/me');
     expect(me.body.principal).toEqual({ kind: 'homeowner', userId: t.homeowner.user.id, companyId: t.company.id, customerIds: [t.customer.id] });
+    expect(me.body.devOutbox).toBe(false);
   });
 
   it('rejects a wrong password and keeps the person signed out', async () => {

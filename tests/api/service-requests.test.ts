@@ -102,6 +102,8 @@ describe('a service request through a share link', () => {
     }
     expect(parsed.subject).toBe('Service request: 4 Millrace Court, Wrenfield');
     expect(parsed.replyTo?.value).toEqual([{ address: 'maren.h@example.test', name: '' }]);
+    // So the development outbox shows it to this company only.
+    expect(parsed.headers.get('x-lifeplate-company')).toBe(t.company.id);
     const link = `http://127.0.0.1:3999/service-requests?request=${requestId}`;
     expect(parsed.text).toContain('Name: Maren Holloway');
     expect(parsed.text).toContain('Phone: 555-0142');

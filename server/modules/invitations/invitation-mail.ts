@@ -1,5 +1,5 @@
 import type { Mail } from '../../lib/mailer';
-import { COMPANY_MAIL_HEADER } from '../reminders/deliver-reminders';
+import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import { ROLE_LABELS, type MemberRole } from '../../../shared/schemas/roles';
 import { SIGN_IN_LINK_HOURS, type InvitationKind } from '../../../shared/schemas/invitations';
 

@@ -15,5 +15,6 @@ export async function describeMe(ctx: AppContext, res: Response): Promise<MeDto 
     company: company
       ? { id: company.id, name: company.name, phone: company.phone, timeZone: company.timeZone, underFiringTolerancePct: company.underFiringTolerancePct }
       : null,
+    devOutbox: Boolean(ctx.config.FAKE_SMTP_OUTBOX) && Boolean(principal && principal.kind === 'member'),
   };
 }

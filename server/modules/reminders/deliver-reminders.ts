@@ -1,3 +1,4 @@
+import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import type { ReminderStatus } from '../../../shared/schemas/reminders';
@@ -17,8 +18,6 @@ export function unsubscribeUrls(ctx: AppContext, customerId: string) {
   return { page: `${ctx.config.BASE_URL}/unsubscribe/${token}`, oneClick: `${ctx.config.BASE_URL}/api/unsubscribe/${token}` };
 }
 
-/** Lets the development outbox show a company only its own mail. */
-export const COMPANY_MAIL_HEADER = 'X-Lifeplate-Company';
 
 const SUMMARY: Record<Outcome['status'], (what: string, to?: string) => string> = {
   sent: (what, to) => `${what} reminder e-mailed to ${to}`,

@@ -4,7 +4,7 @@ import type { AppContext } from '../../context';
 import { defineRoute } from '../../lib/route';
 import { currentMember } from '../../middleware/authenticate';
 import { outboxQuery, type OutboxMessageDto } from '../../../shared/schemas/reminders';
-import { COMPANY_MAIL_HEADER } from './deliver-reminders';
+import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 
 /**
  * The local SMTP fake's messages, for development and tests. Mounted only when FAKE_SMTP_OUTBOX is set (never in a

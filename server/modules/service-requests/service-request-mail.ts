@@ -1,9 +1,11 @@
+import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import type { Mail } from '../../lib/mailer';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { ServiceRequestVia } from '../../../shared/schemas/service-requests';
 
 export type RequestForMail = {
   id: string;
+  companyId: string;
   via: ServiceRequestVia;
   contactName: string;
   contactPhone: string | null;
@@ -74,6 +76,6 @@ export function serviceRequestMail(baseUrl: string, request: RequestForMail, app
     text,
     html,
     // The address alone: it passed the e-mail check, while a typed name could carry characters a header must not.
-    headers: request.contactEmail ? { 'Reply-To': request.contactEmail } : undefined,
+    headers: { [COMPANY_MAIL_HEADER]: request.companyId, ...(request.contactEmail ? { 'Reply-To': request.contactEmail } : {}) },
   };
 }
