@@ -9,6 +9,7 @@ import { createDb } from '../server/db/client';
 import { seedDemo } from '../server/db/seed/seed-demo';
 import { DEMO_MEMBERS, DEMO_HOMEOWNER, DEMO_PASSWORD } from '../server/db/seed/demo-accounts';
 import { startServer } from '../server/main';
+import { REMINDERS_QUEUE } from '../server/jobs/reminders-job';
 import { buildClientIfStale } from './lib/client-build';
 import { startLocalServices } from './lib/local-services';
 import { acquireLock, writeLock } from './lib/lock';
@@ -68,6 +69,11 @@ async function main() {
     } else {
       await buildClientIfStale(CLIENT_DIST);
       server = await startServer(config, { clientDir: CLIENT_DIST });
+    }
+    if (config.FAKE_SMTP_OUTBOX) {
+      // Beside the local mail fake, today's reminders go out at once so the outbox has something to show;
+      // the database's once-per-period key keeps a restart from sending them again.
+      await server.jobs.boss.send(REMINDERS_QUEUE, {});
     }
     writeLock(lockFile, config.BASE_URL);
     console.log(`

@@ -32,6 +32,7 @@ export async function startServer(config: AppConfig, options: AppOptions = {}) {
   }
   return {
     ctx,
+    jobs,
     async close() {
       await jobs.stop().catch((err: unknown) => ctx.logger.warn({ err }, 'stopping the job queue failed'));
       await closeHttp();
