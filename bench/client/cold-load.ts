@@ -22,7 +22,16 @@ function parseCookieHeader(cookie: string, baseUrl: string) {
  * One cold load in a fresh context (empty cache, cache disabled, throttled), returning Largest Contentful Paint.
  * `ready` is a selector that shows the real content has rendered, so the LCP read is the page's and not a spinner's.
  */
-export async function coldLoadOnce(browser: Browser, opts: { url: string; baseUrl: string; cookie?: string; ready: string }): Promise<ColdLoadRun> {
+export type ColdLoadOptions = {
+  url: string;
+  baseUrl: string;
+  cookie?: string;
+  ready: string;
+  /** false: no network or CPU throttling, a reference for what the machine itself costs. */
+  throttle?: boolean;
+};
+
+export async function coldLoadOnce(browser: Browser, opts: ColdLoadOptions): Promise<ColdLoadRun> {
   const context = await browser.newContext({ viewport: { width: 360, height: 740 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true });
   try {
     if (opts.cookie) await context.addCookies(parseCookieHeader(opts.cookie, opts.baseUrl));
@@ -30,14 +39,16 @@ export async function coldLoadOnce(browser: Browser, opts: { url: string; baseUr
     const cdp = await context.newCDPSession(page);
     await cdp.send('Network.enable');
     await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
-    await cdp.send('Network.emulateNetworkConditions', {
-      offline: false,
-      latency: MOBILE_PROFILE.latencyMs,
-      // CDP wants bytes per second.
-      downloadThroughput: MOBILE_PROFILE.downloadBitsPerSecond / 8,
-      uploadThroughput: MOBILE_PROFILE.uploadBitsPerSecond / 8,
-    });
-    await cdp.send('Emulation.setCPUThrottlingRate', { rate: MOBILE_PROFILE.cpuSlowdown });
+    if (opts.throttle !== false) {
+      await cdp.send('Network.emulateNetworkConditions', {
+        offline: false,
+        latency: MOBILE_PROFILE.latencyMs,
+        // CDP wants bytes per second.
+        downloadThroughput: MOBILE_PROFILE.downloadBitsPerSecond / 8,
+        uploadThroughput: MOBILE_PROFILE.uploadBitsPerSecond / 8,
+      });
+      await cdp.send('Emulation.setCPUThrottlingRate', { rate: MOBILE_PROFILE.cpuSlowdown });
+    }
     await page.goto(opts.url, { waitUntil: 'load', timeout: 60_000 });
     await page.locator(opts.ready).first().waitFor({ timeout: 60_000 });
     // Let late paints (fonts swapping in, the rest of the record) settle before reading the last LCP candidate.
@@ -72,7 +83,7 @@ export const median = (values: number[]) => {
   return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 };
 
-export async function coldLoadMedian(browser: Browser, opts: { url: string; baseUrl: string; cookie?: string; ready: string; runs: number }) {
+export async function coldLoadMedian(browser: Browser, opts: ColdLoadOptions & { runs: number }) {
   const runs: ColdLoadRun[] = [];
   for (let i = 0; i < opts.runs; i++) runs.push(await coldLoadOnce(browser, opts));
   const measured = runs.map((r) => r.lcpMs).filter((v): v is number => v !== null);
