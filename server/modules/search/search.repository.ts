@@ -35,6 +35,16 @@ export async function searchAppliances(db: DbOrTx, companyId: string, text: stri
     digits.length >= 3
       ? sql`regexp_replace(c.phone, '\\D', '', 'g') like ${`%${digits}%`}`
       : sql`c.phone ilike ${contains}`;
+  // Text without a digit cannot be part of a phone number; skipping the branch saves a scan of every customer.
+  const phoneBranch = digits.length
+    ? sql`
+      union all
+      select a.id, 'phone', true, 3
+        from customers c
+        join sites s on s.customer_id = c.id and s.company_id = c.company_id
+        join appliances a on a.site_id = s.id and a.company_id = s.company_id
+        where c.company_id = ${companyId} and c.phone is not null and ${phoneMatch}`
+    : sql``;
   const result = await db.execute<SearchRow>(sql`
     with hits as (
       select a.id as appliance_id, 'serial' as matched, (a.serial ilike ${prefix}) as is_prefix, 0 as source_rank
@@ -50,12 +60,7 @@ export async function searchAppliances(db: DbOrTx, companyId: string, text: stri
         from sites s
         join appliances a on a.site_id = s.id and a.company_id = s.company_id
         where s.company_id = ${companyId} and s.street ilike ${contains}
-      union all
-      select a.id, 'phone', true, 3
-        from customers c
-        join sites s on s.customer_id = c.id and s.company_id = c.company_id
-        join appliances a on a.site_id = s.id and a.company_id = s.company_id
-        where c.company_id = ${companyId} and c.phone is not null and ${phoneMatch}
+      ${phoneBranch}
     ),
     best as (
       select distinct on (appliance_id) appliance_id, matched, is_prefix
