@@ -7,6 +7,7 @@ import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { inject } from 'vitest';
 import { buildClientIfStale } from '../../scripts/lib/client-build';
 import { PROJECT_ROOT } from '../../scripts/lib/paths';
+import { closeContext } from '../../server/build-context';
 import { createApp } from '../../server/app';
 import { testContext } from './context';
 import { freePort } from './global-setup';
@@ -51,7 +52,7 @@ export async function startTestServer() {
     async close() {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
-      await ctx.pool.end();
+      await closeContext(ctx);
     },
   };
 }
