@@ -1,14 +1,19 @@
-import { and, eq, isNull } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { homeownerAccounts, memberships } from '../db/schema/index';
 import type { Principal } from '../../shared/schemas/roles';
 
-export async function findPrincipal(db: Db, userId: string): Promise<Principal | null> {
+/**
+ * Who a signed-in user is to Lifeplate. 'deactivated' is a member whose membership was ended: their sessions are
+ * deleted at once, and a session still cached in their cookie must count as signed out too.
+ */
+export async function findPrincipal(db: Db, userId: string): Promise<Principal | 'deactivated' | null> {
   const [member] = await db
-    .select({ companyId: memberships.companyId, role: memberships.role })
+    .select({ companyId: memberships.companyId, role: memberships.role, deactivatedAt: memberships.deactivatedAt })
     .from(memberships)
-    .where(and(eq(memberships.userId, userId), isNull(memberships.deactivatedAt)))
+    .where(eq(memberships.userId, userId))
     .limit(1);
+  if (member?.deactivatedAt) return 'deactivated';
   if (member) return { kind: 'member', userId, companyId: member.companyId, role: member.role };
   const links = await db
     .select({ companyId: homeownerAccounts.companyId, customerId: homeownerAccounts.customerId })

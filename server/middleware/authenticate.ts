@@ -20,10 +20,15 @@ declare module 'express-serve-static-core' {
 export function loadSession(ctx: AppContext): RequestHandler {
   return async (req, res, next) => {
     try {
-      const session = await ctx.auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+      const { response: session, headers } = await ctx.auth.api.getSession({ headers: fromNodeHeaders(req.headers), returnHeaders: true });
+      // When the session cookie cache is refreshed, the new cookie goes back to the browser.
+      for (const cookie of headers.getSetCookie()) res.append('Set-Cookie', cookie);
       if (session) {
-        res.locals.session = { userId: session.user.id, name: session.user.name, email: session.user.email };
-        res.locals.principal = await findPrincipal(ctx.db, session.user.id);
+        const principal = await findPrincipal(ctx.db, session.user.id);
+        if (principal !== 'deactivated') {
+          res.locals.session = { userId: session.user.id, name: session.user.name, email: session.user.email };
+          res.locals.principal = principal;
+        }
       }
       next();
     } catch (err) {
