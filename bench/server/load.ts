@@ -6,7 +6,21 @@ export type LoadResult = { p50: number; p975: number; p99: number; ratePerSec: n
  * One autocannon run. `paths` gives a fresh path per request (random parameters). `amount` bounds the count and
  * `maxSeconds` the time: whichever comes first ends the run.
  */
-export function runLoad(opts: {
+/**
+ * The session cookie as a browser holds it just now: better-auth's session cache cookie lasts a minute and a
+ * browser gets it renewed on its next request, so each run starts from a renewed one, as a browser in use would.
+ */
+async function freshCookie(baseUrl: string, cookie: string): Promise<string> {
+  const res = await fetch(`${baseUrl}/api/me`, { headers: { cookie } });
+  const jar = new Map(cookie.split('; ').map((c) => [c.slice(0, c.indexOf('=')), c] as const));
+  for (const set of res.headers.getSetCookie()) {
+    const pair = set.split(';')[0];
+    jar.set(pair.slice(0, pair.indexOf('=')), pair);
+  }
+  return [...jar.values()].join('; ');
+}
+
+export async function runLoad(opts: {
   baseUrl: string;
   cookie: string;
   paths: () => string;
@@ -15,6 +29,7 @@ export function runLoad(opts: {
   amount?: number;
   maxSeconds: number;
 }): Promise<LoadResult> {
+  const cookie = await freshCookie(opts.baseUrl, opts.cookie);
   return new Promise((resolve, reject) => {
     let timer: NodeJS.Timeout | undefined;
     const instance = autocannon(
@@ -24,7 +39,7 @@ export function runLoad(opts: {
         ...(opts.overallRate ? { overallRate: opts.overallRate } : {}),
         ...(opts.amount ? { amount: opts.amount } : { duration: opts.maxSeconds }),
         timeout: 10,
-        headers: { cookie: opts.cookie, accept: 'application/json', 'accept-encoding': 'gzip, deflate, br' },
+        headers: { cookie, accept: 'application/json', 'accept-encoding': 'gzip, deflate, br' },
         requests: [{ method: 'GET', setupRequest: (req) => ({ ...req, path: opts.paths() }) }],
       },
       (err, result: Result) => {
