@@ -41,13 +41,14 @@ function routeHead(build: Build, route: ClientRoute | null): string {
 }
 
 /**
- * The built index.html with, per route, modulepreload links for its lazy chunks and the embedded first-screen data.
+ * The built index.html with, per route, modulepreload links for its lazy chunks, the embedded first-screen data and,
+ * where the server rendered it, the first screen's markup inside the root element.
  * Read again when index.html changes, so a rebuild under a running server never serves links to deleted chunks.
  */
 export function indexHtmlRenderer(clientDir: string) {
   const indexFile = path.join(clientDir, 'index.html');
   let build = loadBuild(clientDir, fs.statSync(indexFile).mtimeMs);
-  return (route: ClientRoute | null, bodyData = ''): string => {
+  return (route: ClientRoute | null, bodyData = '', rootMarkup = ''): string => {
     // Mid-rebuild the file may be missing for a moment: keep the build we have until a complete one is there.
     const mtimeMs = fs.existsSync(indexFile) ? fs.statSync(indexFile).mtimeMs : build.mtimeMs;
     if (mtimeMs !== build.mtimeMs) {
@@ -57,6 +58,9 @@ export function indexHtmlRenderer(clientDir: string) {
         // Half-written: the next request tries again.
       }
     }
-    return build.template.replace('</head>', `${routeHead(build, route)}</head>`).replace('<div id="root"></div>', `<div id="root"></div>${bodyData}`);
+    // Replacer functions: the markup and data hold user text, where `$&` or `$'` must stay literal.
+    return build.template
+      .replace('</head>', () => `${routeHead(build, route)}</head>`)
+      .replace('<div id="root"></div>', () => `<div id="root">${rootMarkup}</div>${bodyData}`);
   };
 }

@@ -12,11 +12,13 @@ import { shareTokenParam } from '../../shared/schemas/homeowner';
 import { indexHtmlRenderer } from './index-html';
 import { preloadKeys, preloadScriptTag, type PreloadedQuery } from './preload';
 import { matchClientRoute } from './route-chunks';
+import { sharePageMarkup } from './share-page-markup';
 
 /**
  * The built client: hashed assets cached for a year, and index.html for every other path, with modulepreload hints
  * for the route's chunks. The share page and the record also carry their first screen's data, fetched with the same
- * services and the same access rules as their API routes, so nothing is embedded that the API would not answer.
+ * services and the same access rules as their API routes, so nothing is embedded that the API would not answer;
+ * the share page's first screen is also rendered into the HTML.
  */
 export function serveClient(ctx: AppContext, clientDir: string) {
   const router = Router();
@@ -41,8 +43,8 @@ export function serveClient(ctx: AppContext, clientDir: string) {
     }
   }
 
-  const sendHtml = (req: Request, res: Response, queries: PreloadedQuery[] = []) => {
-    res.type('html').send(render(matchClientRoute(req.path)?.route ?? null, preloadScriptTag(queries)));
+  const sendHtml = (req: Request, res: Response, queries: PreloadedQuery[] = [], rootMarkup = '') => {
+    res.type('html').send(render(matchClientRoute(req.path)?.route ?? null, preloadScriptTag(queries), rootMarkup));
   };
 
   router.get('/s/:token', async (req, res) => {
@@ -52,7 +54,9 @@ export function serveClient(ctx: AppContext, clientDir: string) {
     const params = shareTokenParam.safeParse(req.params);
     const token = params.success ? params.data.token : null;
     const view = token ? await orNothing(() => shareLinks.open(token)) : undefined;
-    sendHtml(req, res, token && view ? [{ key: preloadKeys.share(token), data: view }] : []);
+    if (!token || !view) return sendHtml(req, res);
+    // Painted from the HTML, before the script arrives: the page's largest text does not wait for React.
+    sendHtml(req, res, [{ key: preloadKeys.share(token), data: view }], sharePageMarkup(token, view, ctx.logger));
   });
 
   router.get('/appliances/:id', loadSession(ctx), async (req, res) => {

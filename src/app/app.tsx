@@ -3,7 +3,7 @@ import { RouterProvider } from 'react-router-dom';
 import { useState } from 'react';
 import { createQueryClient } from '@/lib/query-client';
 import { seedPreloadedQueries } from '@/lib/preload';
-import { createAppRouter } from './router';
+import type { AppRouter } from './router';
 
 function createSeededQueryClient() {
   const queryClient = createQueryClient();
@@ -11,9 +11,8 @@ function createSeededQueryClient() {
   return queryClient;
 }
 
-export function App() {
+export function App({ router }: { router: AppRouter }) {
   const [queryClient] = useState(createSeededQueryClient);
-  const [router] = useState(createAppRouter);
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />

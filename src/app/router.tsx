@@ -146,3 +146,5 @@ export function createAppRouter() {
     },
   ]);
 }
+
+export type AppRouter = ReturnType<typeof createAppRouter>;

@@ -80,6 +80,12 @@ const preloadOf = (html: string): Preload | null => {
   return m ? (JSON.parse(m[1]) as Preload) : null;
 };
 const tokenOf = (url: string) => url.split('/s/')[1];
+/** What the server put inside `<div id="root">`, with React's text separators (`<!-- -->`) taken out. */
+const rootMarkupOf = (html: string): string => {
+  const m = /<div id="root">([\s\S]*?)<\/div>(?:<script type="application\/json"|<\/body>)/.exec(html);
+  if (!m) throw new Error('no root element in the page');
+  return m[1].replaceAll('<!-- -->', '');
+};
 
 async function makeShareLink() {
   const made = await as.manager.post(`/api/appliances/${boilerId}/share-links`).send({});
@@ -111,6 +117,24 @@ describe('share page HTML', () => {
     expect(res.text).toContain('<link rel="preload" href="/assets/latin-700-t.woff2" as="font" type="font/woff2" crossorigin>');
   });
 
+  it('carries the first screen rendered from the same data inside #root, with the findings as text, not markup', async () => {
+    const { token } = await makeShareLink();
+    const [res, api] = await Promise.all([request(app).get(`/s/${token}`), request(app).get(`/api/share/${token}`)]);
+    expect(api.status).toBe(200);
+    const root = rootMarkupOf(res.text);
+    expect(root).toContain('<h1 class="text-2xl font-bold">Your steam boiler, natural gas</h1>');
+    expect(root).toContain(STREET);
+    const [visit] = api.body.visits as { what: string }[];
+    expect(root).toContain(`October 20, 2026 · ${visit.what}`);
+    expect(root).toContain('Flue checked &lt;/script&gt;&lt;script&gt;alert(1)&lt;/script&gt;&lt;!-- ok');
+    expect(root).not.toContain('<script');
+    expect(root).not.toContain(SECRET_NOTE);
+    // Until the script has loaded, the request form cannot be filled in or sent (a native submit would lose it).
+    expect(root).toMatch(/<input[^>]*name="contactName"/);
+    for (const input of root.match(/<input[^>]*>/g) ?? []) expect(input).toContain('disabled=""');
+    expect(root).toMatch(/<button type="submit"[^>]*disabled=""/);
+  });
+
   it('embeds nothing about the appliance for a revoked, unknown or malformed token', async () => {
     const { id, token } = await makeShareLink();
     expect((await as.manager.post(`/api/share-links/${id}/revoke`)).status).toBe(200);
@@ -121,6 +145,7 @@ describe('share page HTML', () => {
       expect(res.headers['cache-control']).toContain('no-store');
       expect(res.headers['x-robots-tag']).toBe('noindex, nofollow');
       expect(res.text).not.toContain('lp-preload');
+      expect(rootMarkupOf(res.text)).toBe('');
       for (const secret of [STREET, t.company.name, 'Flue checked', SECRET_NOTE, boilerId]) expect(res.text).not.toContain(secret);
     }
   });
@@ -149,6 +174,7 @@ describe('record HTML', () => {
       expect(res.status).toBe(200);
       expect(res.headers['cache-control']).toContain('no-store');
       expect(res.text).not.toContain('lp-preload');
+      expect(rootMarkupOf(res.text)).toBe('');
       expect(res.text).not.toContain(STREET);
     }
     // Another company's manager gets their own /api/me, and the record's API answers them 404: so nothing of it here.

@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { useIsClient } from '@/lib/use-is-client';
 import type { HomeownerViewDto } from '@shared/schemas/homeowner';
 import { photoPath, type RecordSource } from '../api/record-source';
 
@@ -11,6 +12,7 @@ const describe = (p: Photo) => p.caption ?? `${KIND_WORDS[p.kind] ?? 'Photo'}, $
 /** The photos the company marked for the homeowner: small thumbnails that load as they scroll in, a tap opens the large one. */
 export function HomeownerPhotos({ source, photos }: { source: RecordSource; photos: Photo[] }) {
   const [open, setOpen] = useState<Photo | null>(null);
+  const ready = useIsClient();
   useEffect(() => {
     if (!open) return;
     const close = (e: KeyboardEvent) => e.key === 'Escape' && setOpen(null);
@@ -24,7 +26,7 @@ export function HomeownerPhotos({ source, photos }: { source: RecordSource; phot
       <ul className="grid grid-cols-3 gap-2">
         {photos.map((p) => (
           <li key={p.id}>
-            <button type="button" onClick={() => setOpen(p)} className="block w-full rounded-plate" aria-label={`Open the photo: ${describe(p)}`}>
+            <button type="button" disabled={!ready} onClick={() => setOpen(p)} className="block w-full rounded-plate" aria-label={`Open the photo: ${describe(p)}`}>
               <img
                 src={photoPath(source, p.id, 'thumb')}
                 alt={describe(p)}

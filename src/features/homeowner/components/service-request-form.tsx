@@ -4,6 +4,7 @@ import { Card } from '@/components/ui/card';
 import { TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { describeFailure } from '@/lib/form-errors';
+import { useIsClient } from '@/lib/use-is-client';
 import type { FieldErrors } from '@/lib/api-client';
 import { CONTACT_NEEDED_MESSAGE, NAME_NEEDED_MESSAGE, SERVICE_REQUEST_LIMITS as MAX } from '@shared/schemas/service-request-limits';
 import type { ServiceRequestCreatedDto } from '@shared/schemas/service-requests';
@@ -28,11 +29,14 @@ export function ServiceRequestForm({ source, company }: { source: RecordSource; 
   const [errors, setErrors] = useState<FieldErrors>({});
   const [failure, setFailure] = useState<string | null>(null);
   const [sent, setSent] = useState<ServiceRequestCreatedDto | null>(null);
+  // In the server's markup the form waits for the script: typed text would be lost and a submit would reload the page.
+  const ready = useIsClient();
 
   const bind = (name: keyof Fields) => ({
     name,
     value: fields[name],
     maxLength: MAX[name],
+    disabled: !ready,
     error: errors[name],
     onChange: (e: { target: { value: string } }) => setFields((f) => ({ ...f, [name]: e.target.value })),
   });
@@ -88,7 +92,7 @@ export function ServiceRequestForm({ source, company }: { source: RecordSource; 
             {failure}
           </Notice>
         )}
-        <Button type="submit" className="w-full" disabled={send.isPending}>
+        <Button type="submit" className="w-full" disabled={!ready || send.isPending}>
           {send.isPending ? 'Sending…' : 'Send request'}
         </Button>
       </form>
