@@ -1,27 +1,13 @@
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { readStoredMail } from '../../fakes/smtp';
 import { fakerFor } from '../../server/db/factories/faker';
 import { memberships, users } from '../../server/db/schema/index';
-import { launchBrowser, PHONE, screenshotDir, signInAsMember, startTestServer } from '../support/browser';
-import { createTenant, type Tenant } from '../support/tenant';
+import { PHONE, screenshotDir, signInAsMember, useBrowserFixture } from '../support/browser';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 async function signInLinkSentTo(address: string) {
   const mails = readStoredMail(inject('outboxDir')).filter((m) => m.to.includes(address));
@@ -35,10 +21,10 @@ async function signInLinkSentTo(address: string) {
 describe('invitation by e-mail', () => {
   it('the manager invites a technician; the e-mailed link opens the welcome page on their phone, and accepting lands on the search', async () => {
     const email = `${fakerFor().string.alphanumeric(12).toLowerCase()}@example.test`;
-    const office = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const office = await fx.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const desk = await office.newPage();
-    await signInAsMember(desk, server.baseUrl, t.manager.user.email);
-    await desk.goto(`${server.baseUrl}/team`);
+    await signInAsMember(desk, fx.server.baseUrl, fx.t.manager.user.email);
+    await desk.goto(`${fx.server.baseUrl}/team`);
     await desk.getByLabel('E-mail').fill(email);
     await desk.getByLabel('Role', { exact: true }).selectOption('technician');
     await desk.getByRole('button', { name: 'Send invitation' }).click();
@@ -48,12 +34,12 @@ describe('invitation by e-mail', () => {
     await desk.screenshot({ path: path.join(screenshotDir(), 'team-invitations.png'), fullPage: true });
 
     const link = await signInLinkSentTo(email);
-    expect(link.startsWith(`${server.baseUrl}/api/auth/magic-link/verify?`)).toBe(true);
+    expect(link.startsWith(`${fx.server.baseUrl}/api/auth/magic-link/verify?`)).toBe(true);
 
-    const phoneContext = await browser.newContext(PHONE);
+    const phoneContext = await fx.browser.newContext(PHONE);
     const phone = await phoneContext.newPage();
     await phone.goto(link);
-    await phone.getByRole('heading', { name: `Join ${t.company.name} as technician` }).waitFor();
+    await phone.getByRole('heading', { name: `Join ${fx.t.company.name} as technician` }).waitFor();
     expect(new URL(phone.url()).pathname).toMatch(/^\/welcome\/[0-9a-f-]{36}$/);
     await phone.screenshot({ path: path.join(screenshotDir(), 'welcome-member.png'), fullPage: true });
 
@@ -63,10 +49,10 @@ describe('invitation by e-mail', () => {
     await phone.getByRole('button', { name: 'Join the team' }).click();
     await phone.getByRole('heading', { name: 'Find an appliance' }).waitFor();
 
-    const [user] = await server.ctx.db.select().from(users).where(eq(users.email, email));
+    const [user] = await fx.server.ctx.db.select().from(users).where(eq(users.email, email));
     expect(user.name).toBe('Ada Brightwater');
-    const [membership] = await server.ctx.db.select().from(memberships).where(eq(memberships.userId, user.id));
-    expect(membership).toMatchObject({ companyId: t.company.id, role: 'technician' });
+    const [membership] = await fx.server.ctx.db.select().from(memberships).where(eq(memberships.userId, user.id));
+    expect(membership).toMatchObject({ companyId: fx.t.company.id, role: 'technician' });
 
     // The office's list no longer waits for them.
     await desk.reload();
@@ -78,9 +64,9 @@ describe('invitation by e-mail', () => {
   });
 
   it('a used or expired link lands on the welcome page, which offers a new one', async () => {
-    const context = await browser.newContext(PHONE);
+    const context = await fx.browser.newContext(PHONE);
     const page = await context.newPage();
-    await page.goto(`${server.baseUrl}/api/auth/magic-link/verify?token=not-a-real-token&callbackURL=${encodeURIComponent('/welcome/7b0c1f9e-3d2a-4c55-9a57-0d6f2b1e8c44')}`);
+    await page.goto(`${fx.server.baseUrl}/api/auth/magic-link/verify?token=not-a-real-token&callbackURL=${encodeURIComponent('/welcome/7b0c1f9e-3d2a-4c55-9a57-0d6f2b1e8c44')}`);
     await page.getByRole('heading', { name: 'This sign-in link has expired' }).waitFor();
     await page.getByLabel('Your e-mail').fill('nobody-invited@example.test');
     await page.getByRole('button', { name: 'Send me a new link' }).click();

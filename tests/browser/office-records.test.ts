@@ -1,9 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { and, eq } from 'drizzle-orm';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, startTestServer } from '../support/browser';
-import { createTenant, type Tenant } from '../support/tenant';
+import type { Page } from 'playwright-core';
+import { useBrowserFixture } from '../support/browser';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { appliances, checklistTemplates, componentCatalog, components, customers, dueRules, sites, visitAmendments, visits } from '../../server/db/schema/index';
 import type { ApplianceRecordDto, SiteDto } from '../../shared/schemas/records';
@@ -13,22 +12,10 @@ import { LABELS } from '../../shared/schemas/enums';
 
 const DESKTOP = { viewport: { width: 1280, height: 800 } };
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 async function signInThroughUi(page: Page, email: string) {
-  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.goto(`${fx.server.baseUrl}/sign-in`);
   await page.getByLabel('E-mail', { exact: true }).fill(email);
   await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
@@ -36,7 +23,7 @@ async function signInThroughUi(page: Page, email: string) {
 }
 
 async function apiAgent(email: string) {
-  const agent = request.agent(server.baseUrl);
+  const agent = request.agent(fx.server.baseUrl);
   const res = await agent.post('/api/auth/sign-in/email').send({ email, password: DEFAULT_TEST_PASSWORD });
   expect(res.status).toBe(200);
   return agent;
@@ -44,9 +31,9 @@ async function apiAgent(email: string) {
 
 describe('office screens for the life record (desktop)', () => {
   it('creates a customer, a site and an appliance with three parts, keeping what was typed through errors', async () => {
-    const context = await browser.newContext(DESKTOP);
+    const context = await fx.browser.newContext(DESKTOP);
     const page = await context.newPage();
-    await signInThroughUi(page, t.manager.user.email);
+    await signInThroughUi(page, fx.t.manager.user.email);
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers' }).click();
     await page.getByRole('heading', { name: 'Customers' }).waitFor();
@@ -79,7 +66,7 @@ describe('office screens for the life record (desktop)', () => {
     await siteForm.getByLabel('Town').fill('Wrenfield');
     await siteForm.getByLabel('Postal code').fill('00731');
     await siteForm.getByLabel('Access notes').fill('Side door, dog in yard');
-    await siteForm.getByLabel('Assigned technician').selectOption({ label: t.technician.user.name });
+    await siteForm.getByLabel('Assigned technician').selectOption({ label: fx.t.technician.user.name });
     await siteForm.getByRole('button', { name: 'Save site' }).click();
     await page.getByRole('heading', { name: '14 Quarry Lane, Wrenfield 00731' }).waitFor();
     await page.getByText('Side door, dog in yard').waitFor();
@@ -131,15 +118,15 @@ describe('office screens for the life record (desktop)', () => {
     // The life record opens for the new appliance.
     await page.getByText('Odalys Threnwick · 14 Quarry Lane, Wrenfield').waitFor();
 
-    const db = server.ctx.db;
+    const db = fx.server.ctx.db;
     const [customer] = await db.select().from(customers).where(eq(customers.id, customerId));
-    expect(customer).toMatchObject({ companyId: t.company.id, name: 'Odalys Threnwick', phone: '555-0142', email: 'odalys@example.test', remindersOptOut: true });
+    expect(customer).toMatchObject({ companyId: fx.t.company.id, name: 'Odalys Threnwick', phone: '555-0142', email: 'odalys@example.test', remindersOptOut: true });
     const [site] = await db.select().from(sites).where(eq(sites.customerId, customerId));
-    expect(site).toMatchObject({ street: '14 Quarry Lane', town: 'Wrenfield', postalCode: '00731', accessNotes: 'Side door, dog in yard', assignedTechnicianId: t.technician.user.id });
+    expect(site).toMatchObject({ street: '14 Quarry Lane', town: 'Wrenfield', postalCode: '00731', accessNotes: 'Side door, dog in yard', assignedTechnicianId: fx.t.technician.user.id });
     const [appliance] = await db.select().from(appliances).where(eq(appliances.id, applianceId));
     expect(appliance).toMatchObject({
       siteId: site.id,
-      companyId: t.company.id,
+      companyId: fx.t.company.id,
       kind: 'steam_boiler',
       fuel: 'natural_gas',
       construction: 'cast_iron',
@@ -158,7 +145,7 @@ describe('office screens for the life record (desktop)', () => {
     expect(byType.low_water_cutoff_float).toMatchObject({ originalWithAppliance: true });
 
     // Back on the customer, the appliance is listed with its status in words.
-    await page.goto(`${server.baseUrl}/customers/${customerId}`);
+    await page.goto(`${fx.server.baseUrl}/customers/${customerId}`);
     await page.getByRole('link', { name: 'Steam boiler, natural gas · Harrowgate Foundry' }).waitFor();
     await page.getByText('In service').waitFor();
 
@@ -171,7 +158,7 @@ describe('office screens for the life record (desktop)', () => {
     expect(edited).toMatchObject({ phone: '555-0199', remindersOptOut: true, email: 'odalys@example.test' });
 
     // A newer boiler replaces the old one; the old record stays readable.
-    const manager = await apiAgent(t.manager.user.email);
+    const manager = await apiAgent(fx.t.manager.user.email);
     const replacement = await manager
       .post('/api/appliances')
       .send({ siteId: site.id, kind: 'steam_boiler', fuel: 'natural_gas', construction: 'cast_iron', ignitionType: 'intermittent_pilot', ventType: 'draft_hood', serial: 'NC-7781' })
@@ -194,20 +181,20 @@ describe('office screens for the life record (desktop)', () => {
     const [old] = await db.select().from(appliances).where(eq(appliances.id, applianceId));
     expect(old).toMatchObject({ status: 'removed', replacedById: newId });
     await oldItem.getByRole('link', { name: 'Steam boiler, natural gas · Harrowgate Foundry' }).click();
-    await page.waitForURL(`${server.baseUrl}/appliances/${applianceId}`);
+    await page.waitForURL(`${fx.server.baseUrl}/appliances/${applianceId}`);
     await page.getByText('Odalys Threnwick · 14 Quarry Lane, Wrenfield').waitFor();
     await context.close();
   });
 
   it('pages the customer list by keyset, filters it, and shows cards on a phone', async () => {
-    const db = server.ctx.db;
+    const db = fx.server.ctx.db;
     const names = Array.from({ length: 30 }, (_, i) => `Pagewell Tester ${String(i + 1).padStart(2, '0')}`);
-    for (const name of names) await db.insert(customers).values({ companyId: t.company.id, name, phone: '555-0100' });
+    for (const name of names) await db.insert(customers).values({ companyId: fx.t.company.id, name, phone: '555-0100' });
 
-    const context = await browser.newContext(DESKTOP);
+    const context = await fx.browser.newContext(DESKTOP);
     const page = await context.newPage();
-    await signInThroughUi(page, t.manager.user.email);
-    await page.goto(`${server.baseUrl}/customers`);
+    await signInThroughUi(page, fx.t.manager.user.email);
+    await page.goto(`${fx.server.baseUrl}/customers`);
     await page.getByLabel('Filter').fill('Pagewell');
     await page.waitForURL(/q=Pagewell/);
     const rows = page.locator('table tbody tr');
@@ -223,20 +210,20 @@ describe('office screens for the life record (desktop)', () => {
     await rows.first().getByText('Pagewell Tester 01').waitFor();
     await context.close();
 
-    const phone = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const phone = await fx.browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
     const small = await phone.newPage();
-    await signInThroughUi(small, t.manager.user.email);
-    await small.goto(`${server.baseUrl}/customers?q=Pagewell`);
+    await signInThroughUi(small, fx.t.manager.user.email);
+    await small.goto(`${fx.server.baseUrl}/customers?q=Pagewell`);
     await small.getByRole('list', { name: 'Customers' }).getByRole('link', { name: 'Pagewell Tester 01' }).waitFor();
     expect(await small.locator('table').isVisible()).toBe(false);
     await phone.close();
   });
 
   it('shows a completed visit and its amendment to the manager', async () => {
-    const tech = await apiAgent(t.technician.user.email);
+    const tech = await apiAgent(fx.t.technician.user.email);
     const site = await tech
       .post('/api/sites')
-      .send({ customerId: t.customer.id, street: '3 Ferrow Court', town: 'Ashby Hollow' })
+      .send({ customerId: fx.t.customer.id, street: '3 Ferrow Court', town: 'Ashby Hollow' })
       .expect(201);
     const created = await tech
       .post('/api/appliances')
@@ -262,10 +249,10 @@ describe('office screens for the life record (desktop)', () => {
       .send({ revision: (saved.body as VisitDto).revision, outcome: 'left_operating' })
       .expect(200);
 
-    const context = await browser.newContext(DESKTOP);
+    const context = await fx.browser.newContext(DESKTOP);
     const page = await context.newPage();
-    await signInThroughUi(page, t.manager.user.email);
-    await page.goto(`${server.baseUrl}/visits/${visit.id}`);
+    await signInThroughUi(page, fx.t.manager.user.email);
+    await page.goto(`${fx.server.baseUrl}/visits/${visit.id}`);
 
     const original = 'Pilot flame lazy; cleaned the pilot orifice.';
     const reason = 'Technician noted the wrong part of the pilot.';
@@ -284,7 +271,7 @@ describe('office screens for the life record (desktop)', () => {
     // The original stays as it was recorded, beside the amendment.
     await recorded.getByText(original).waitFor();
 
-    const manager = await apiAgent(t.manager.user.email);
+    const manager = await apiAgent(fx.t.manager.user.email);
     const after = (await manager.get(`/api/visits/${visit.id}`).expect(200)).body as VisitDto;
     expect(after.status).toBe('completed');
     expect(after.amendments).toHaveLength(1);
@@ -292,12 +279,12 @@ describe('office screens for the life record (desktop)', () => {
     expect(JSON.stringify(after.amendments[0].changes)).toContain(corrected);
     expect(after.findings).toBe(original);
 
-    const [row] = await server.ctx.db.select().from(visits).where(eq(visits.id, visit.id));
+    const [row] = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visit.id));
     expect(row).toMatchObject({ status: 'completed', findings: original });
-    const amendments = await server.ctx.db
+    const amendments = await fx.server.ctx.db
       .select()
       .from(visitAmendments)
-      .where(and(eq(visitAmendments.visitId, visit.id), eq(visitAmendments.companyId, t.company.id)));
+      .where(and(eq(visitAmendments.visitId, visit.id), eq(visitAmendments.companyId, fx.t.company.id)));
     expect(amendments.map((a) => a.reason)).toEqual([reason]);
 
     await page.reload();
@@ -307,27 +294,27 @@ describe('office screens for the life record (desktop)', () => {
   });
 
   it('lets the manager rename and deactivate part types, edit a checklist without touching past visits, and change a due rule', async () => {
-    const db = server.ctx.db;
+    const db = fx.server.ctx.db;
     const [template] = await db
       .select()
       .from(checklistTemplates)
-      .where(and(eq(checklistTemplates.companyId, t.company.id), eq(checklistTemplates.applianceKind, 'hot_water_boiler')))
+      .where(and(eq(checklistTemplates.companyId, fx.t.company.id), eq(checklistTemplates.applianceKind, 'hot_water_boiler')))
       .orderBy(checklistTemplates.name)
       .limit(1);
     const before = template.items;
 
     // A visit started before the edit keeps its own copy of the checklist.
-    const tech = await apiAgent(t.technician.user.email);
-    const site = await tech.post('/api/sites').send({ customerId: t.customer.id, street: '27 Tanner Walk', town: 'Wrenfield' }).expect(201);
+    const tech = await apiAgent(fx.t.technician.user.email);
+    const site = await tech.post('/api/sites').send({ customerId: fx.t.customer.id, street: '27 Tanner Walk', town: 'Wrenfield' }).expect(201);
     const created = await tech
       .post('/api/appliances')
       .send({ siteId: (site.body as SiteDto).id, kind: 'hot_water_boiler', fuel: template.fuel ?? 'natural_gas', construction: 'cast_iron', ignitionType: 'direct_spark', ventType: 'power_vent' })
       .expect(201);
     const started = (await tech.post('/api/visits').send({ applianceId: (created.body as ApplianceRecordDto).appliance.id, type: 'annual_maintenance' }).expect(200)).body as VisitDto;
 
-    const context = await browser.newContext(DESKTOP);
+    const context = await fx.browser.newContext(DESKTOP);
     const page = await context.newPage();
-    await signInThroughUi(page, t.manager.user.email);
+    await signInThroughUi(page, fx.t.manager.user.email);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Parts & checklists' }).click();
     await page.getByRole('heading', { name: 'Parts & checklists' }).waitFor();
 
@@ -340,7 +327,7 @@ describe('office screens for the life record (desktop)', () => {
     await page.getByRole('button', { name: 'Rename pilot thermocouple' }).waitFor();
     await page.getByRole('button', { name: 'Deactivate thermopile' }).click();
     await page.getByRole('button', { name: 'Reactivate thermopile' }).waitFor();
-    const catalog = await db.select().from(componentCatalog).where(eq(componentCatalog.companyId, t.company.id));
+    const catalog = await db.select().from(componentCatalog).where(eq(componentCatalog.companyId, fx.t.company.id));
     expect(catalog.find((c) => c.code === 'thermocouple')).toMatchObject({ label: 'pilot thermocouple', active: true });
     expect(catalog.find((c) => c.code === 'thermopile')).toMatchObject({ active: false });
 
@@ -367,7 +354,7 @@ describe('office screens for the life record (desktop)', () => {
       'check_the_boiler_room_for_stored_combustibles',
     ]);
     expect(saved.items.at(-1)).toMatchObject({ section: 'Boiler room', caution: 'Keep flammable vapours away from the burner; follow local codes.' });
-    const manager = await apiAgent(t.manager.user.email);
+    const manager = await apiAgent(fx.t.manager.user.email);
     const visitAfter = (await manager.get(`/api/visits/${started.id}`).expect(200)).body as VisitDto;
     expect(visitAfter.checklist.map((i) => i.key)).toEqual(started.checklist.map((i) => i.key));
 
@@ -389,7 +376,7 @@ describe('office screens for the life record (desktop)', () => {
     await ruleForm.waitFor({ state: 'detached' });
     const [storedRule] = await db.select().from(dueRules).where(eq(dueRules.id, rule.id));
     expect(storedRule).toMatchObject({
-      companyId: t.company.id,
+      companyId: fx.t.company.id,
       inspectionIntervalMonths: 6,
       replacementPolicy: 'fixed_age',
       replacementAgeYears: 10,

@@ -1,29 +1,16 @@
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
-import type { Browser, Locator, Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import sharp from 'sharp';
-import { launchBrowser, PHONE, screenshotDir, startTestServer, signInAsMember } from '../support/browser';
+import { PHONE, screenshotDir, signInAsMember, useBrowserFixture } from '../support/browser';
 import { phoneJpegWithGps } from '../support/images';
-import { createTenant, type Tenant } from '../support/tenant';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { photos } from '../../server/db/schema/index';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 // The run folder is removed after the run; set LIFEPLATE_KEEP_SCREENSHOTS to a folder to look at them afterwards.
 async function screenshot(what: Page | Locator, name: string) {
@@ -34,7 +21,7 @@ async function screenshot(what: Page | Locator, name: string) {
 
 const solidJpeg = (r: number, g: number, b: number) => sharp({ create: { width: 400, height: 300, channels: 3, background: { r, g, b } } }).jpeg().toBuffer();
 const jpeg = (name: string, buffer: Buffer) => ({ name, mimeType: 'image/jpeg', buffer });
-const rowsFor = (applianceId: string) => server.ctx.db.select().from(photos).where(eq(photos.applianceId, applianceId));
+const rowsFor = (applianceId: string) => fx.server.ctx.db.select().from(photos).where(eq(photos.applianceId, applianceId));
 
 /** Resolves with the image's decoded width once it has loaded (0 if it failed), without a fixed wait. */
 const loadedWidth = (img: Locator) =>
@@ -48,7 +35,7 @@ const loadedWidth = (img: Locator) =>
   );
 
 async function signInOnPhone() {
-  const context = await browser.newContext(PHONE);
+  const context = await fx.browser.newContext(PHONE);
   const page = await context.newPage();
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
@@ -56,18 +43,18 @@ async function signInOnPhone() {
     // Chromium logs every refused request as a failed resource; the app's own handling of it is asserted instead.
     if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(`console: ${m.text()}`);
   });
-  await signInAsMember(page, server.baseUrl, t.technician.user.email);
+  await signInAsMember(page, fx.server.baseUrl, fx.t.technician.user.email);
   return { context, page, errors };
 }
 
 describe('photos on the life record, on a phone', () => {
   it('uploads a batch, opens one, shows it to the homeowner, dedupes a repeat, names a refused file, retries after a lost signal and after a stop', async () => {
-    const site = await insertSite(server.ctx.db, { companyId: t.company.id, customerId: t.customer.id, street: '6 Tallowmere Court', town: 'Wrenfield' });
-    const boiler = await insertAppliance(server.ctx.db, { companyId: t.company.id, siteId: site.id });
+    const site = await insertSite(fx.server.ctx.db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street: '6 Tallowmere Court', town: 'Wrenfield' });
+    const boiler = await insertAppliance(fx.server.ctx.db, { companyId: fx.t.company.id, siteId: site.id });
     const [first, second] = await Promise.all([phoneJpegWithGps(640, 480), phoneJpegWithGps(480, 360)]);
     const { context, page, errors } = await signInOnPhone();
 
-    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
     const section = page.getByRole('region', { name: 'Photos' });
     await section.getByText('No photos yet.').waitFor();
     await section.getByText('Location data is removed from photos before they are stored.').waitFor();
@@ -100,7 +87,7 @@ describe('photos on the life record, on a phone', () => {
     expect(uploadTypes).toEqual(['xhr']);
     let rows = await rowsFor(boiler.id);
     expect(rows).toHaveLength(2);
-    for (const row of rows) expect(row).toMatchObject({ companyId: t.company.id, kind: 'nameplate', caption: 'Rating plate, burner side', homeownerVisible: false, visitId: null });
+    for (const row of rows) expect(row).toMatchObject({ companyId: fx.t.company.id, kind: 'nameplate', caption: 'Rating plate, burner side', homeownerVisible: false, visitId: null });
     // With a nameplate on file the next photo is a finding, and the caption was cleared for it.
     expect(await section.getByRole('radio', { name: 'Finding' }).isChecked()).toBe(true);
     expect(await section.getByLabel('Caption (optional)').inputValue()).toBe('');

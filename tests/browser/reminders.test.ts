@@ -1,41 +1,27 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, PHONE, startTestServer, signInAsMember } from '../support/browser';
-import { createTenant, type Tenant } from '../support/tenant';
+import { describe, expect, it } from 'vitest';
+import { PHONE, signInAsMember, useBrowserFixture } from '../support/browser';
 import { parsedMailTo, uniqueEmail } from '../support/outbox';
 import { insertAppliance, insertCustomer, insertSite } from '../../server/db/factories/records';
 import { customers, visits } from '../../server/db/schema/index';
 import { todayInTimeZone } from '../../shared/dates';
 import { addMonths } from '../../shared/trade/iso-date';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 describe('reminder e-mails on screen', () => {
   it('the office sends a reminder from the annual-service list, reads it in the outbox, and the customer stops reminders from the link', async () => {
-    const db = server.ctx.db;
-    const owner = await insertCustomer(db, { companyId: t.company.id, name: 'Perpetua Quillfeather', email: uniqueEmail() });
-    const site = await insertSite(db, { companyId: t.company.id, customerId: owner.id, street: '9 Sorrel Lane', town: 'Wrenfield' });
-    const boiler = await insertAppliance(db, { companyId: t.company.id, siteId: site.id, kind: 'hot_water_boiler', fuel: 'natural_gas' });
-    const visitedOn = addMonths(todayInTimeZone(t.company.timeZone), -15);
-    await db.insert(visits).values({ companyId: t.company.id, applianceId: boiler.id, type: 'annual_maintenance', status: 'completed', visitedOn });
+    const db = fx.server.ctx.db;
+    const owner = await insertCustomer(db, { companyId: fx.t.company.id, name: 'Perpetua Quillfeather', email: uniqueEmail() });
+    const site = await insertSite(db, { companyId: fx.t.company.id, customerId: owner.id, street: '9 Sorrel Lane', town: 'Wrenfield' });
+    const boiler = await insertAppliance(db, { companyId: fx.t.company.id, siteId: site.id, kind: 'hot_water_boiler', fuel: 'natural_gas' });
+    const visitedOn = addMonths(todayInTimeZone(fx.t.company.timeZone), -15);
+    await db.insert(visits).values({ companyId: fx.t.company.id, applianceId: boiler.id, type: 'annual_maintenance', status: 'completed', visitedOn });
 
-    const office = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const office = await fx.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await office.newPage();
-    await signInAsMember(page, server.baseUrl, t.manager.user.email);
-    await page.goto(`${server.baseUrl}/due`);
+    await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
+    await page.goto(`${fx.server.baseUrl}/due`);
     const row = page.locator('tr', { hasText: owner.name }).first();
     await row.getByRole('button', { name: 'Send reminder' }).click();
     await row.getByText(/Reminder sent \d{4}-\d{2}-\d{2}/).waitFor();
@@ -53,19 +39,19 @@ describe('reminder e-mails on screen', () => {
 
     const [mail] = await parsedMailTo(owner.email!);
     const link = /href="([^"]*\/unsubscribe\/[^"]+)"/.exec(String(mail.html))![1];
-    expect(link.startsWith(`${server.baseUrl}/unsubscribe/`)).toBe(true);
+    expect(link.startsWith(`${fx.server.baseUrl}/unsubscribe/`)).toBe(true);
 
     // The customer's own phone: no cookies, no sign-in.
-    const home = await browser.newContext(PHONE);
+    const home = await fx.browser.newContext(PHONE);
     const phone = await home.newPage();
     await phone.goto(link);
-    await phone.getByRole('heading', { name: `Stop reminder e-mails from ${t.company.name}?` }).waitFor();
+    await phone.getByRole('heading', { name: `Stop reminder e-mails from ${fx.t.company.name}?` }).waitFor();
     await phone.getByRole('button', { name: 'Stop reminder e-mails' }).click();
     await phone.getByRole('heading', { name: 'Reminder e-mails stopped' }).waitFor();
     const [stored] = await db.select().from(customers).where(eq(customers.id, owner.id));
     expect(stored.remindersOptOut).toBe(true);
 
-    await phone.goto(`${server.baseUrl}/unsubscribe/not-a-real-token`);
+    await phone.goto(`${fx.server.baseUrl}/unsubscribe/not-a-real-token`);
     await phone.getByRole('heading', { name: 'This link does not work' }).waitFor();
     await home.close();
     await office.close();

@@ -1,27 +1,14 @@
 import { simpleParser } from 'mailparser';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { readStoredMail } from '../../fakes/smtp';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { photosService } from '../../server/modules/photos/photos.service';
 import { shareLinksService } from '../../server/modules/share-links/share-links.service';
-import { launchBrowser, PHONE, signInAsMember, startTestServer } from '../support/browser';
-import { createTenant, type Tenant } from '../support/tenant';
+import { PHONE, signInAsMember, useBrowserFixture } from '../support/browser';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 function collectErrors(page: Page) {
   const errors: string[] = [];
@@ -38,17 +25,17 @@ const loadedWidth = (page: Page, selector: string) =>
 
 describe('booking a service from the share page', () => {
   it('the homeowner, not signed in, sends a request and sees the confirmation; the manager opens it from the e-mail and marks it scheduled', async () => {
-    const site = await insertSite(server.ctx.db, { companyId: t.company.id, customerId: t.customer.id, street: '9 Sorrel Bank', town: 'Wrenfield' });
-    const boiler = await insertAppliance(server.ctx.db, { companyId: t.company.id, siteId: site.id, kind: 'hot_water_boiler', fuel: 'natural_gas' });
-    const manager = { kind: 'member' as const, userId: t.manager.user.id, companyId: t.company.id, role: 'manager' as const };
+    const site = await insertSite(fx.server.ctx.db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street: '9 Sorrel Bank', town: 'Wrenfield' });
+    const boiler = await insertAppliance(fx.server.ctx.db, { companyId: fx.t.company.id, siteId: site.id, kind: 'hot_water_boiler', fuel: 'natural_gas' });
+    const manager = { kind: 'member' as const, userId: fx.t.manager.user.id, companyId: fx.t.company.id, role: 'manager' as const };
     const jpeg = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 150, g: 110, b: 70 } } }).jpeg().toBuffer();
-    await photosService(server.ctx).upload(manager, { applianceId: boiler.id, kind: 'after', caption: 'New circulator fitted', homeownerVisible: true }, [
+    await photosService(fx.server.ctx).upload(manager, { applianceId: boiler.id, kind: 'after', caption: 'New circulator fitted', homeownerVisible: true }, [
       { originalname: 'after.jpg', buffer: jpeg },
     ]);
-    const { url } = await shareLinksService(server.ctx).create(manager, boiler.id, { expiresInDays: 30 });
+    const { url } = await shareLinksService(fx.server.ctx).create(manager, boiler.id, { expiresInDays: 30 });
 
     // A fresh phone context: no cookies, as on the homeowner's own phone.
-    const home = await browser.newContext(PHONE);
+    const home = await fx.browser.newContext(PHONE);
     const phone = await home.newPage();
     const phoneErrors = collectErrors(phone);
     await phone.goto(url);
@@ -93,21 +80,21 @@ describe('booking a service from the share page', () => {
     await phone.getByLabel('Anything they should know (optional)').fill('Upstairs radiators are lukewarm.');
     await send.click();
     const confirmation = phone.getByRole('status').filter({ hasText: 'sent your request' });
-    await confirmation.getByText(`We've sent your request to ${t.company.name}. They will call or e-mail you.`).waitFor();
-    expect(await confirmation.getByRole('link', { name: t.company.phone }).getAttribute('href')).toBe(`tel:${t.company.phone}`);
+    await confirmation.getByText(`We've sent your request to ${fx.t.company.name}. They will call or e-mail you.`).waitFor();
+    expect(await confirmation.getByRole('link', { name: fx.t.company.phone }).getAttribute('href')).toBe(`tel:${fx.t.company.phone}`);
     expect(await phone.getByRole('button', { name: 'Send request' }).count()).toBe(0);
     expect(phoneErrors).toEqual([]);
 
     // The office e-mail's link opens the request in the manager's list.
-    const [mail] = readStoredMail(inject('outboxDir')).filter((m) => m.to.includes(t.manager.user.email.toLowerCase()));
+    const [mail] = readStoredMail(inject('outboxDir')).filter((m) => m.to.includes(fx.t.manager.user.email.toLowerCase()));
     const { text } = await simpleParser(mail.raw);
     const link = /http:\/\/127\.0\.0\.1:\d+\/service-requests\?request=[0-9a-f-]{36}/.exec(text ?? '')?.[0];
-    expect(link?.startsWith(server.baseUrl)).toBe(true);
+    expect(link?.startsWith(fx.server.baseUrl)).toBe(true);
 
-    const office = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const office = await fx.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await office.newPage();
     const officeErrors = collectErrors(page);
-    await signInAsMember(page, server.baseUrl, t.manager.user.email);
+    await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
     await page.getByRole('link', { name: 'Service requests 1 new' }).waitFor();
     await page.goto(link!);
     const card = page.locator('li[aria-current="true"]');

@@ -1,31 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { launchBrowser, PHONE, startTestServer, signInAsMember } from '../support/browser';
-import { createTenant, type Tenant } from '../support/tenant';
+import type { BrowserContext, Page } from 'playwright-core';
+import { PHONE, signInAsMember, useBrowserFixture } from '../support/browser';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { components, visits } from '../../server/db/schema/index';
 import { todayInTimeZone } from '../../shared/dates';
 
-let server: Awaited<ReturnType<typeof startTestServer>>;
-let browser: Browser;
-let t: Tenant;
-
-beforeAll(async () => {
-  server = await startTestServer();
-  browser = await launchBrowser();
-  t = await createTenant(server.ctx.db);
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const fx = useBrowserFixture();
 
 /** A steam boiler at an invented street, with the parts a steam tune-up touches. */
 async function steamBoiler(street: string) {
-  const site = await insertSite(server.ctx.db, { companyId: t.company.id, customerId: t.customer.id, street, town: 'Wrenfield' });
-  return insertAppliance(server.ctx.db, {
-    companyId: t.company.id,
+  const site = await insertSite(fx.server.ctx.db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street, town: 'Wrenfield' });
+  return insertAppliance(fx.server.ctx.db, {
+    companyId: fx.t.company.id,
     siteId: site.id,
     kind: 'steam_boiler',
     fuel: 'natural_gas',
@@ -40,7 +27,7 @@ async function steamBoiler(street: string) {
 }
 
 async function signInOnPhone(): Promise<{ context: BrowserContext; page: Page; errors: string[] }> {
-  const context = await browser.newContext(PHONE);
+  const context = await fx.browser.newContext(PHONE);
   const page = await context.newPage();
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
@@ -48,7 +35,7 @@ async function signInOnPhone(): Promise<{ context: BrowserContext; page: Page; e
     // Chromium logs every refused or cut-off request as a failed resource; the app's own handling is asserted instead.
     if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(`console: ${m.text()}`);
   });
-  await signInAsMember(page, server.baseUrl, t.technician.user.email);
+  await signInAsMember(page, fx.server.baseUrl, fx.t.technician.user.email);
   return { context, page, errors };
 }
 
@@ -63,16 +50,16 @@ async function startVisitFromRecord(page: Page) {
 describe('a technician on a phone', () => {
   it('finds a steam boiler by street, works the checklist, swaps the thermocouple and completes the visit', async () => {
     const boiler = await steamBoiler('88 Cinderwick Row');
-    const today = todayInTimeZone(t.company.timeZone);
+    const today = todayInTimeZone(fx.t.company.timeZone);
     const { context, page, errors } = await signInOnPhone();
 
     await page.getByRole('searchbox').fill('Cinderwick');
     const hit = page.getByRole('link', { name: /88 Cinderwick Row/ });
     await hit.waitFor();
-    expect(await hit.textContent()).toContain(t.customer.name);
+    expect(await hit.textContent()).toContain(fx.t.customer.name);
     expect(await hit.textContent()).toContain(boiler.serial!);
     await hit.click();
-    await page.waitForURL(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.waitForURL(`${fx.server.baseUrl}/appliances/${boiler.id}`);
     await page.getByRole('region', { name: 'What it is' }).getByText(boiler.serial!).waitFor();
 
     const visitId = await startVisitFromRecord(page);
@@ -125,7 +112,7 @@ describe('a technician on a phone', () => {
     expect(await kept.locator('[data-result="Efficiency (HHV)"]').textContent()).toBe(liveEfficiency);
 
     await page.getByRole('button', { name: 'Complete visit' }).click();
-    await page.waitForURL(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.waitForURL(`${fx.server.baseUrl}/appliances/${boiler.id}`);
 
     const history = page.getByRole('list', { name: 'History, newest first' });
     await history.locator('li[data-kind="visit"]').first().waitFor();
@@ -136,13 +123,13 @@ describe('a technician on a phone', () => {
     const todayShown = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
     expect(await thermocouple.textContent()).toContain(`Installed ${todayShown}`);
 
-    const stored = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    const stored = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
     expect(stored[0].status).toBe('completed');
     expect(stored[0].outcome).toBe('left_operating');
     expect(stored[0].readings).toMatchObject({ gaugeGlassLevel: '5/8', lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', burnerStopped: true } });
     expect(stored[0].checklist.every((c) => c.mark === 'done')).toBe(true);
     expect(stored[0].readings).toMatchObject({ combustion: { o2Pct: 7.5, coPpm: 40, flueTempF: 428, airTempF: 68 } });
-    const parts = await server.ctx.db
+    const parts = await fx.server.ctx.db
       .select()
       .from(components)
       .where(and(eq(components.applianceId, boiler.id), eq(components.typeCode, 'thermocouple')));
@@ -158,13 +145,13 @@ describe('a technician on a phone', () => {
   it('keeps a draft typed without signal on the phone and sends it once, the latest text, when signal returns', async () => {
     const boiler = await steamBoiler('5 Larkspur Cut');
     const { context, page, errors } = await signInOnPhone();
-    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
     const visitId = await startVisitFromRecord(page);
 
     const findings = page.getByRole('textbox', { name: 'Findings' });
     await findings.fill('Pilot lit.');
     await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
-    const [{ revision: savedRevision }] = await server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
+    const [{ revision: savedRevision }] = await fx.server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
 
     await context.setOffline(true);
     const latest = 'Pilot lit. Flue pipe rusted at the elbow; customer told.';
@@ -196,7 +183,7 @@ describe('a technician on a phone', () => {
 
     expect(puts).toHaveLength(1);
     expect(puts[0].findings).toBe(latest);
-    const [row] = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    const [row] = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
     expect(row.findings).toBe(latest);
     expect(row.revision).toBe(savedRevision + 1);
     const after = await page.evaluate((id) => JSON.parse(localStorage.getItem(`lifeplate:visit-draft:${id}`) ?? 'null'), visitId);
@@ -209,14 +196,14 @@ describe('a technician on a phone', () => {
   it('on a revision conflict refetches, keeps what this phone changed on top of the other change, and saves once more', async () => {
     const boiler = await steamBoiler('31 Tallow Yard');
     const { context, page, errors } = await signInOnPhone();
-    await page.goto(`${server.baseUrl}/appliances/${boiler.id}`);
+    await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
     const visitId = await startVisitFromRecord(page);
     const findings = page.getByRole('textbox', { name: 'Findings' });
     await findings.fill('Burners cleaned.');
     await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
 
     // Another device saves the same draft first.
-    const [{ revision }] = await server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
+    const [{ revision }] = await fx.server.ctx.db.select({ revision: visits.revision }).from(visits).where(eq(visits.id, visitId));
     const other = await page.evaluate(
       async ({ id, rev }) =>
         (await fetch(`/api/visits/${id}/draft`, { method: 'PUT', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ revision: rev, recommendations: 'Replace the vent connector.' }) })).status,
@@ -233,7 +220,7 @@ describe('a technician on a phone', () => {
     await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
     expect(await page.getByRole('textbox', { name: 'Recommendations' }).inputValue()).toBe('Replace the vent connector.');
 
-    const [row] = await server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    const [row] = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
     expect(row.findings).toBe('Burners cleaned. Pilot adjusted.');
     expect(row.recommendations).toBe('Replace the vent connector.');
     expect(row.revision).toBe(revision + 2);

@@ -4,12 +4,13 @@ import path from 'node:path';
 import { execFileSync } from 'node:child_process';
 import { chromium, type Browser, type BrowserContextOptions, type Page } from 'playwright-core';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
-import { inject } from 'vitest';
+import { afterAll, beforeAll, inject } from 'vitest';
 import { buildClientIfStale } from '../../scripts/lib/client-build';
 import { PROJECT_ROOT } from '../../scripts/lib/paths';
 import { closeContext } from '../../server/build-context';
 import { createApp } from '../../server/app';
 import { testContext } from './context';
+import { createTenant, type Tenant } from './tenant';
 import { freePort } from './global-setup';
 
 export const CHROMIUM = '/usr/bin/chromium';
@@ -66,4 +67,22 @@ export async function signInAsMember(page: Page, baseUrl: string, email: string,
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('heading', { name: 'Find an appliance' }).waitFor();
+}
+
+export type TestServer = Awaited<ReturnType<typeof startTestServer>>;
+export type BrowserFixture = { server: TestServer; browser: Browser; t: Tenant };
+
+/** For one test file: the app on a free port, a Chromium, and a fresh tenant; all closed after the file. */
+export function useBrowserFixture(): BrowserFixture {
+  const fixture = {} as BrowserFixture;
+  beforeAll(async () => {
+    fixture.server = await startTestServer();
+    fixture.browser = await launchBrowser();
+    fixture.t = await createTenant(fixture.server.ctx.db);
+  });
+  afterAll(async () => {
+    await fixture.browser?.close();
+    await fixture.server?.close();
+  });
+  return fixture;
 }
