@@ -63,6 +63,8 @@ describe('the scheduled reminder run', () => {
     b.partDue = await boiler(id, c.agnes, { annualMonthsAgo: [2] });
     await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'thermocouple', spec: { lengthIn: 24 }, dueOn: addDays(today, 10), dueKind: 'replacement' });
     await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'thermopile', spec: { lengthIn: 30 }, dueOn: addDays(today, 60), dueKind: 'replacement' });
+    // Due for inspection only: that is what the annual service is for, so no reminder of its own.
+    await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'gauge_glass', dueOn: addDays(today, 3), dueKind: 'inspection' });
     b.removed = await boiler(id, c.agnes, { annualMonthsAgo: [30], status: 'removed' });
     b.optedOut = await boiler(id, c.optedOut, { annualMonthsAgo: [13] });
     b.noEmail = await boiler(id, c.noEmail, { annualMonthsAgo: [13] });
@@ -173,7 +175,7 @@ describe('the scheduled reminder run', () => {
     expect(audits).toEqual([expect.objectContaining({ actorId: null, action: 'update' })]);
 
     // A new part falls due for the same customer: recorded, not sent.
-    const part = await insertComponent(ctx.db, { companyId: t.company.id, applianceId: b.partDue.id, typeCode: 'flame_sensor', dueOn: addDays(today, 5), dueKind: 'inspection' });
+    const part = await insertComponent(ctx.db, { companyId: t.company.id, applianceId: b.partDue.id, typeCode: 'flame_sensor', dueOn: addDays(today, 5), dueKind: 'replacement' });
     const outcome = await runReminders(ctx, { companyId: t.company.id });
     expect(outcome).toMatchObject({ created: 1, emails: 0, opted_out: 1 });
     const [row] = (await rowsOf(t.company.id)).filter((r) => r.partKey === part.id);

@@ -65,7 +65,10 @@ export const remindersRepository = {
     return result.rows[0] ?? null;
   },
 
-  /** Present parts of in-service appliances whose stored due date is on or before `through`. */
+  /**
+   * Present parts of in-service appliances due for replacement on or before `through`. Parts due only for inspection
+   * are checked at the annual service, which has its own reminder; listing each of them would bury the ones to replace.
+   */
   async partsDue(db: DbOrTx, companyId: string, through: string) {
     const result = await db.execute<PartCandidate>(sql`
       select p.id as component_id, a.id as appliance_id, c.id as customer_id, p.type_code, p.spec_key, cat.label as catalog_label,
@@ -76,7 +79,7 @@ export const remindersRepository = {
       join customers c on c.id = s.customer_id and c.company_id = a.company_id
       left join component_catalog cat on cat.company_id = p.company_id and cat.code = p.type_code
       where p.company_id = ${companyId} and p.removed_on is null and p.due_on is not null and p.due_on <= ${through}::date
-        and a.status = 'in_service'
+        and p.due_kind = 'replacement' and a.status = 'in_service'
     `);
     return result.rows;
   },
