@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { checklistTemplateInput, type ChecklistTemplateDto } from '@shared/schemas/records';
 import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/ui/form-actions';
 import { TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
@@ -132,14 +133,7 @@ export function ChecklistTemplateEditor({ template, onClose }: { template: Check
           + Add item
         </Button>
       </div>
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={save.isPending}>
-          {save.isPending ? 'Saving…' : 'Save checklist'}
-        </Button>
-        <Button variant="secondary" onClick={onClose}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions saving={save.isPending} submitLabel="Save checklist" onCancel={onClose} />
     </form>
   );
 }

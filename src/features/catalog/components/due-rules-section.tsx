@@ -3,6 +3,7 @@ import { dueRuleInput, type DueRuleDto } from '@shared/schemas/due';
 import { LABELS } from '@shared/schemas/enums';
 import { DUE_RULE_BASES, REPLACEMENT_POLICIES, type DueRuleBasis, type ReplacementPolicy } from '@shared/trade';
 import { Card } from '@/components/ui/card';
+import { FormActions } from '@/components/ui/form-actions';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -176,14 +177,7 @@ function DueRuleForm({ rule, onClose }: { rule: DueRuleDto; onClose: () => void 
         </SelectField>
         <TextField label="Source" value={draft.source} onChange={(e) => setDraft({ ...draft, source: e.target.value })} error={errors.source} />
       </div>
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={update.isPending}>
-          {update.isPending ? 'Saving…' : 'Save rule'}
-        </Button>
-        <Button variant="secondary" onClick={onClose}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions saving={update.isPending} submitLabel="Save rule" onCancel={onClose} />
     </form>
   );
 }

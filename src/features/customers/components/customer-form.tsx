@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { customerInput, type CustomerDto } from '@shared/schemas/records';
 import { CUSTOMER_KINDS, LABELS, type CustomerKind } from '@shared/schemas/enums';
-import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/ui/form-actions';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { CustomerBody } from '../api/create-customer';
@@ -73,16 +73,7 @@ export function CustomerForm({
         error={errors.remindersOptOut}
       />
       <TextAreaField label="Notes" value={draft.notes} onChange={(e) => set('notes', e.target.value)} error={errors.notes} />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={saving}>
-          {saving ? 'Saving…' : submitLabel}
-        </Button>
-        {onCancel && (
-          <Button variant="secondary" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <FormActions saving={saving} submitLabel={submitLabel} onCancel={onCancel} />
     </form>
   );
 }

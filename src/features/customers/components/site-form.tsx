@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { siteInput, type SiteDto } from '@shared/schemas/records';
-import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/ui/form-actions';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { SiteBody } from '../api/create-site';
@@ -81,16 +81,7 @@ export function SiteForm({
           </option>
         ))}
       </SelectField>
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={saving}>
-          {saving ? 'Saving…' : submitLabel}
-        </Button>
-        {onCancel && (
-          <Button variant="secondary" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <FormActions saving={saving} submitLabel={submitLabel} onCancel={onCancel} />
     </form>
   );
 }
