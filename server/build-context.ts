@@ -7,8 +7,8 @@ import { createObjectStorage } from './lib/object-storage';
 import { createMailer } from './lib/mailer';
 
 export function buildContext(config: AppConfig, overrides: Partial<AppContext> = {}): AppContext {
-  const { db, pool } = createDb(config.DATABASE_URL);
   const logger = overrides.logger ?? createLogger(config.LOG_LEVEL);
+  const { db, pool } = createDb(config.DATABASE_URL, { onConnectionError: (err) => logger.warn({ err }, 'database connection lost') });
   const storage = overrides.storage ?? createObjectStorage(config);
   const mailer = overrides.mailer ?? createMailer(config);
   return { config, db, pool, auth: createAuth(db, config, { mailer, logger }), logger, storage, mailer, ...overrides };
