@@ -46,6 +46,9 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
       // Set by our own middleware from Express's req.ip (which honours TRUST_PROXY); any client-sent value is replaced.
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     },
+    // Errors other than better-auth's own answers (a database outage) go on to Express's error handler, which
+    // answers 503 for an outage; without this the router answered a bare 500 and wrote to console.error.
+    onAPIError: { throw: true },
     telemetry: { enabled: false },
     logger: { disabled: config.LOG_LEVEL === 'silent' },
   });

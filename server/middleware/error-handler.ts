@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { HttpError } from '../lib/http-error';
+import { RETRY_AFTER_SECONDS, unavailableMessage, unavailableService } from '../lib/unavailable';
 
 export const notFoundApi: RequestHandler = (_req, _res, next) => next(new HttpError(404, 'not_found', 'No such API route.'));
 
@@ -22,6 +23,15 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (Number.isInteger(err?.status) && err.status >= 400 && err.status < 500) {
     status = err.status;
     body = { code: 'http_error', message: err.expose ? err.message : 'The request was not accepted.' };
+  } else {
+    const service = unavailableService(err);
+    if (service) {
+      // An outage, not a bug: the client waits and tries again.
+      req.log?.warn({ err, service }, 'a service is unavailable');
+      res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
+      res.status(503).json({ error: { code: 'unavailable', message: unavailableMessage(service) } });
+      return;
+    }
   }
   if (status >= 500) req.log?.error({ err }, 'request failed');
   res.status(status).json({ error: body });
