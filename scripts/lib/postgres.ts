@@ -1,4 +1,4 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { execFile, execFileSync, spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import pg from 'pg';
@@ -30,9 +30,13 @@ export function findPgBin(): string {
 }
 
 /** Runs a PostgreSQL tool, as the postgres user when we are root (initdb and postgres refuse to run as root). */
-function runPg(bin: string, tool: string, args: string[], opts: { allowFail?: boolean } = {}) {
+function pgCommand(bin: string, tool: string, args: string[]): [string, string[]] {
   const exe = path.join(bin, tool);
-  const [cmd, argv] = isRoot() ? ['runuser', ['-u', 'postgres', '--', exe, ...args]] : [exe, args];
+  return isRoot() ? ['runuser', ['-u', 'postgres', '--', exe, ...args]] : [exe, args];
+}
+
+function runPg(bin: string, tool: string, args: string[], opts: { allowFail?: boolean } = {}) {
+  const [cmd, argv] = pgCommand(bin, tool, args);
   const res = spawnSync(cmd, argv, { encoding: 'utf8' });
   if (res.status !== 0 && !opts.allowFail) {
     throw new Error(`${tool} ${args.join(' ')} failed (${res.status}):\n${res.stderr || res.stdout}`);
@@ -88,6 +92,21 @@ export function startCluster(cluster: Cluster) {
 export function stopCluster(cluster: Cluster) {
   runPg(cluster.bin, 'pg_ctl', ['-D', cluster.dataDir, '-m', 'fast', '-w', 'stop'], { allowFail: true });
 }
+
+/** Like runPg, without blocking the event loop: clients in this process see the server go and come back as it happens. */
+function runPgAsync(bin: string, tool: string, args: string[]) {
+  const [cmd, argv] = pgCommand(bin, tool, args);
+  return new Promise<void>((resolve, reject) => {
+    execFile(cmd, argv, { encoding: 'utf8' }, (err, stdout, stderr) =>
+      err ? reject(new Error(`${tool} ${args.join(' ')} failed:\n${stderr || stdout}`)) : resolve(),
+    );
+  });
+}
+
+/** Fast shutdown (open sessions are ended with 57P01) and start again, e.g. to test surviving a restart. */
+export const stopClusterAsync = (cluster: Cluster) => runPgAsync(cluster.bin, 'pg_ctl', ['-D', cluster.dataDir, '-m', 'fast', '-w', 'stop']);
+export const startClusterAsync = (cluster: Cluster) =>
+  runPgAsync(cluster.bin, 'pg_ctl', ['-D', cluster.dataDir, '-l', cluster.logFile, '-o', `-p ${cluster.port}`, '-w', '-t', '60', 'start']);
 
 export function clusterUrl(port: number, database: string) {
   return `postgres://${DB_USER}@127.0.0.1:${port}/${database}`;
