@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { defineRoute } from '../lib/route';
+import { RETRY_AFTER_SECONDS } from '../lib/unavailable';
 
 export function healthRoutes(ctx: AppContext) {
   const router = Router();
@@ -9,6 +10,7 @@ export function healthRoutes(ctx: AppContext) {
       await ctx.pool.query('select 1');
       return { status: 'ok', db: 'ok' };
     } catch {
+      res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
       res.status(503).json({ status: 'degraded', db: 'unreachable' });
     }
   });
