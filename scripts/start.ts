@@ -1,23 +1,24 @@
 /**
- * `npm start` (and `npm run dev` with --dev): PostgreSQL, migrations, demo seed, local fakes, then the app.
- * Ctrl-C stops everything this process started.
+ * `npm start` (and `npm run dev` with --dev): PostgreSQL, migrations, demo seed, local fakes, then the app in a
+ * child process (scripts/app-process.ts), started again if it crashes. Ctrl-C stops everything this process started.
  */
+import { fork } from 'node:child_process';
 import path from 'node:path';
 import { parseConfig } from '../server/config';
 import { runMigrations } from '../server/db/migrate';
 import { createDb } from '../server/db/client';
 import { seedDemo } from '../server/db/seed/seed-demo';
 import { DEMO_MEMBERS, DEMO_HOMEOWNER, DEMO_PASSWORD } from '../server/db/seed/demo-accounts';
-import { startServer } from '../server/main';
-import { REMINDERS_QUEUE } from '../server/jobs/reminders-job';
 import { buildClientIfStale } from './lib/client-build';
 import { startLocalServices } from './lib/local-services';
 import { acquireLock, writeLock } from './lib/lock';
-import { CLIENT_DIST, PROJECT_ROOT } from './lib/paths';
+import { CLIENT_DIST } from './lib/paths';
 import { localDataRoot, localPgPort } from './lib/local-cluster';
+import { supervise } from './lib/supervise';
 
 const dev = process.argv.includes('--dev');
 const log = (line: string) => console.log(`[lifeplate] ${line}`);
+const APP_PROCESS = path.join(import.meta.dirname, 'app-process.ts');
 
 async function main() {
   const { dir: dataRoot, moved } = localDataRoot();
@@ -39,19 +40,24 @@ async function main() {
     env: process.env,
     log,
   });
-  let server: Awaited<ReturnType<typeof startServer>> | null = null;
+  let app: ReturnType<typeof supervise> | null = null;
   let stopping = false;
   const shutdown = async (code = 0) => {
     if (stopping) return;
     stopping = true;
     log('Stopping…');
-    await server?.close().catch(() => {});
+    await app?.stop().catch(() => {});
     await services.stop();
     lock.release();
     process.exit(code);
   };
   process.on('SIGINT', () => void shutdown(0));
   process.on('SIGTERM', () => void shutdown(0));
+  // This process holds the fakes and the cluster: if it fails itself, stop them all rather than leave them behind.
+  process.on('uncaughtException', (err) => {
+    console.error('[lifeplate] Stopping everything after an unexpected error:', err);
+    void shutdown(1);
+  });
 
   try {
     Object.assign(process.env, services.env);
@@ -62,22 +68,28 @@ async function main() {
     await pool.end();
     log(seeded ? 'Seeded the demo scenario.' : 'Demo data already present.');
 
-    if (dev) {
-      const { createServer } = await import('vite');
-      const vite = await createServer({ root: PROJECT_ROOT, server: { middlewareMode: true }, appType: 'spa' });
-      server = await startServer(config, { vite });
-    } else {
-      await buildClientIfStale(CLIENT_DIST);
-      server = await startServer(config, { clientDir: CLIENT_DIST });
-    }
-    if (config.FAKE_SMTP_OUTBOX) {
-      // Beside the local mail fake, today's reminders go out at once so the outbox has something to show;
-      // the database's once-per-period key keeps a restart from sending them again.
-      await server.jobs.boss.send(REMINDERS_QUEUE, {});
-    }
+    if (!dev) await buildClientIfStale(CLIENT_DIST);
+    // A child process, so a crash of the app leaves this one to say so and start it again.
+    app = supervise({
+      spawn: () => fork(APP_PROCESS, dev ? ['--dev'] : [], { env: process.env }),
+      log,
+      onReady: (first) => {
+        if (first) announce(config.BASE_URL);
+        else log(`The app is running again at ${config.BASE_URL}`);
+      },
+    });
     writeLock(lockFile, config.BASE_URL);
-    console.log(`
-  Lifeplate is running at ${config.BASE_URL}
+    const end = await app.ended;
+    if (end.reason !== 'stopped') await shutdown(1);
+  } catch (err) {
+    console.error(err instanceof Error ? err.message : err);
+    await shutdown(1);
+  }
+}
+
+function announce(baseUrl: string) {
+  console.log(`
+  Lifeplate is running at ${baseUrl}
 
   Demo accounts (password: ${DEMO_PASSWORD})
 ${DEMO_MEMBERS.map((m) => `    ${m.email.padEnd(26)} ${m.role}${m.company === 'other' ? ' (second company)' : ''}`).join('\n')}
@@ -85,10 +97,6 @@ ${DEMO_MEMBERS.map((m) => `    ${m.email.padEnd(26)} ${m.role}${m.company === 'o
 
   Press Ctrl-C to stop.
 `);
-  } catch (err) {
-    console.error(err instanceof Error ? err.message : err);
-    await shutdown(1);
-  }
 }
 
 void main();
