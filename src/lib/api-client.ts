@@ -6,6 +6,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly details?: FieldErrors,
+    /** From a 503's Retry-After: how long the server asked us to wait before trying again. */
+    readonly retryAfterMs?: number,
   ) {
     super(message);
   }
@@ -36,7 +38,13 @@ export async function api<T>(path: string, { body, query, headers, ...init }: Op
   const data = await res.json().catch(() => null);
   if (!res.ok) {
     const err = data?.error ?? data;
-    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `Request failed (${res.status}).`, err?.details);
+    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `Request failed (${res.status}).`, err?.details, retryAfterMs(res.headers.get('Retry-After')));
   }
   return data as T;
+}
+
+/** Retry-After in seconds (RFC 9110 §10.2.3 also allows an HTTP date; our server sends seconds). */
+export function retryAfterMs(header: string | null): number | undefined {
+  if (!header || !/^\d+$/.test(header.trim())) return undefined;
+  return Number(header.trim()) * 1000;
 }

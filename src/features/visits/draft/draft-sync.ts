@@ -23,7 +23,7 @@ export type DraftTransport = {
 const SAVE_AFTER_MS = 1000;
 const RETRY_MS = [2000, 4000, 8000, 15000];
 
-const isRetryable = (e: unknown) => e instanceof ApiError && (e.offline || e.status >= 500);
+const isRetryable = (e: unknown): e is ApiError => e instanceof ApiError && (e.offline || e.status >= 500);
 const isConflict = (e: unknown) => e instanceof ApiError && e.status === 409;
 
 /**
@@ -205,7 +205,9 @@ export class DraftSync {
   private afterFailure(e: unknown, conflictRetry: boolean) {
     if (isRetryable(e)) {
       this.setStatus('queued');
-      this.schedule(RETRY_MS[Math.min(this.attempt++, RETRY_MS.length - 1)]);
+      // The server may ask for longer (a 503 while its database restarts); the draft stays on the phone meanwhile.
+      const backoff = RETRY_MS[Math.min(this.attempt++, RETRY_MS.length - 1)];
+      this.schedule(Math.max(backoff, e.retryAfterMs ?? 0));
     } else if (isConflict(e) && !conflictRetry) {
       void this.rebaseOnServer().then(
         () => this.flush(true),
