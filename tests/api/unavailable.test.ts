@@ -44,6 +44,19 @@ describe('while the database cannot be reached', () => {
     }
   });
 
+  it('a session that must be looked up in the database answers 503, not 401 (the phone stays signed in)', async () => {
+    const signedIn = await request(app).post('/api/auth/sign-in/email').send({ email: t.manager.user.email, password: DEFAULT_TEST_PASSWORD });
+    // Only the session token, without better-auth's signed cache cookie, so the session is read from the database.
+    const token = (signedIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).filter((c) => c.includes('session_token'));
+    expect(token).toHaveLength(1);
+    const dctx = down();
+    try {
+      expectUnavailable(await request(createApp(dctx)).get('/api/me').set('Cookie', token.join('; ')));
+    } finally {
+      await closeContext(dctx);
+    }
+  });
+
   it('signing in answers 503 with Retry-After (better-auth passes the outage on)', async () => {
     const dctx = down();
     try {
