@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { SMTPServer } from 'smtp-server';
 
-export type StoredMail = { id: string; from: string; to: string[]; receivedAt: string; raw: string };
+export { readStoredMail, type StoredMail } from './smtp-outbox';
 
 /**
  * A local SMTP server on loopback that keeps every message as a .eml file, for development and tests only.
@@ -42,16 +42,4 @@ export async function startFakeSmtp(options: { port: number; directory: string }
     directory: options.directory,
     close: () => new Promise<void>((resolve) => server.close(() => resolve())),
   };
-}
-
-export function readStoredMail(directory: string): StoredMail[] {
-  if (!fs.existsSync(directory)) return [];
-  return fs
-    .readdirSync(directory)
-    .filter((f) => f.endsWith('.json'))
-    .map((f) => {
-      const meta = JSON.parse(fs.readFileSync(path.join(directory, f), 'utf8'));
-      return { ...meta, raw: fs.readFileSync(path.join(directory, f.replace(/\.json$/, '.eml')), 'utf8') } as StoredMail;
-    })
-    .sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
 }

@@ -5,6 +5,7 @@ import { defineRoute } from '../../lib/route';
 import { currentMember } from '../../middleware/authenticate';
 import { outboxQuery, type OutboxMessageDto } from '../../../shared/schemas/reminders';
 import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
+import { readStoredMail } from '../../../fakes/smtp-outbox';
 
 /**
  * The local SMTP fake's messages, for development and tests. Mounted only when FAKE_SMTP_OUTBOX is set (never in a
@@ -16,8 +17,6 @@ export function outboxRoutes(ctx: AppContext) {
   if (!directory) return router;
   defineRoute(router, 'get', '/dev/outbox', { access: { permission: 'reminders:send' }, schemas: { query: outboxQuery } }, async ({ query }, _req, res) => {
     const { companyId } = currentMember(res);
-    // Loaded here, not at the top: the fake (and its SMTP server package) is a development tool.
-    const { readStoredMail } = await import('../../../fakes/smtp');
     const ours = new RegExp(`^${COMPANY_MAIL_HEADER}: ${companyId}\\r?$`, 'im');
     const mine = readStoredMail(directory)
       .filter((m) => ours.test(m.raw.split(/\r?\n\r?\n/, 1)[0] ?? ''))
