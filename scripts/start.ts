@@ -61,7 +61,8 @@ async function main() {
 
   try {
     Object.assign(process.env, services.env);
-    const config = parseConfig({ NODE_ENV: dev ? 'development' : 'production', ...process.env });
+    // Someone at a terminal reads this output: short lines, unless LOG_FORMAT=json is asked for.
+    const config = parseConfig({ NODE_ENV: dev ? 'development' : 'production', LOG_FORMAT: 'pretty', ...process.env });
     await runMigrations(config.DATABASE_URL);
     const { db, pool } = createDb(config.DATABASE_URL, { max: 2 });
     const { seeded } = await seedDemo(db);

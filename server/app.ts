@@ -3,10 +3,10 @@ import path from 'node:path';
 import express, { Router } from 'express';
 import compression from 'compression';
 import { toNodeHandler } from 'better-auth/node';
-import { pinoHttp } from 'pino-http';
 import type { ViteDevServer } from 'vite';
 import type { AppContext } from './context';
 import { securityHeaders } from './security-headers';
+import { requestLogger } from './logger';
 import { CLIENT_IP_HEADER } from './auth/auth';
 import { loadSession } from './middleware/authenticate';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
@@ -46,7 +46,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', parseTrustProxy(ctx.config.TRUST_PROXY));
-  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(requestLogger(ctx.logger, ctx.config.LOG_FORMAT));
   app.use(securityHeaders(ctx.config, { dev: Boolean(options.vite) }));
   // gzip for HTML, JS, CSS and JSON on a phone's weak signal; images and PDFs are already compressed and pass as they are.
   app.use(compression());

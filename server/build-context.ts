@@ -7,7 +7,7 @@ import { createObjectStorage } from './lib/object-storage';
 import { createMailer } from './lib/mailer';
 
 export function buildContext(config: AppConfig, overrides: Partial<AppContext> = {}): AppContext {
-  const logger = overrides.logger ?? createLogger(config.LOG_LEVEL);
+  const logger = overrides.logger ?? createLogger(config.LOG_LEVEL, config.LOG_FORMAT);
   const { db, pool } = createDb(config.DATABASE_URL, { onConnectionError: (err) => logger.warn({ err }, 'database connection lost') });
   const storage = overrides.storage ?? createObjectStorage(config);
   const mailer = overrides.mailer ?? createMailer(config);

@@ -11,6 +11,8 @@ export const envSchema = z
     DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }),
     BETTER_AUTH_SECRET: z.string().min(32, 'must be at least 32 characters'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    /** Defaults to json in production (a log collector reads it), else pretty; npm start and npm run dev pick pretty. */
+    LOG_FORMAT: z.enum(['json', 'pretty']).optional(),
     TLS_CERT: optionalString,
     TLS_KEY: optionalString,
     S3_ENDPOINT: z.url().optional(),
@@ -36,7 +38,11 @@ export const envSchema = z
   })
   .transform((env) => {
     const scheme = env.TLS_CERT ? 'https' : 'http';
-    return { ...env, BASE_URL: (env.BASE_URL ?? `${scheme}://${env.HOST}:${env.PORT}`).replace(/\/$/, '') };
+    return {
+      ...env,
+      BASE_URL: (env.BASE_URL ?? `${scheme}://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
+      LOG_FORMAT: env.LOG_FORMAT ?? (env.NODE_ENV === 'production' ? 'json' : 'pretty'),
+    };
   });
 
 export type AppConfig = z.infer<typeof envSchema>;

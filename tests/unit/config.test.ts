@@ -26,4 +26,13 @@ describe('parseConfig', () => {
   it('refuses a certificate without its key', () => {
     expect(() => parseConfig({ ...base, TLS_CERT: '/c.pem' })).toThrow(/TLS_KEY: TLS_CERT and TLS_KEY must be given together/);
   });
+
+  it('logs JSON in production and short readable lines elsewhere, unless LOG_FORMAT says otherwise', () => {
+    expect(parseConfig({ ...base, NODE_ENV: 'production' }).LOG_FORMAT).toBe('json');
+    expect(parseConfig({ ...base, NODE_ENV: 'development' }).LOG_FORMAT).toBe('pretty');
+    expect(parseConfig(base).LOG_FORMAT).toBe('pretty');
+    expect(parseConfig({ ...base, NODE_ENV: 'production', LOG_FORMAT: 'pretty' }).LOG_FORMAT).toBe('pretty');
+    expect(parseConfig({ ...base, NODE_ENV: 'development', LOG_FORMAT: 'json' }).LOG_FORMAT).toBe('json');
+    expect(() => parseConfig({ ...base, LOG_FORMAT: 'yaml' })).toThrow(/LOG_FORMAT: /);
+  });
 });
