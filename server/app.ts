@@ -30,6 +30,7 @@ import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 import { invitationRoutes } from './modules/invitations/invitations.routes';
 import { serveClient } from './spa/serve-client';
+import { robotsTxt } from './spa/robots';
 import { remindersRoutes } from './modules/reminders/reminders.routes';
 import { outboxRoutes } from './modules/reminders/outbox.routes';
 import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.routes';
@@ -90,6 +91,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(notFoundApi);
   app.use('/api', api);
 
+  // Before the client, whose fallback would answer index.html for it.
+  app.get('/robots.txt', robotsTxt);
   if (options.vite) {
     app.use(options.vite.middlewares);
   } else if (options.clientDir && fs.existsSync(path.join(options.clientDir, 'index.html'))) {
