@@ -152,14 +152,38 @@ describe('team invitations', () => {
     expect((await as.manager.post(`/api/team/invitations/${byOwner.body.id}/resend`)).status).toBe(403);
   });
 
-  it('answers 409 with a field error for someone already on a team, here or at another company', async () => {
+  it('answers 409 with a field error for someone already on this team', async () => {
     const ours = await as.manager.post('/api/team/invitations').send({ email: t.technician.user.email, role: 'manager' });
     expect(ours.status).toBe(409);
     expect(ours.body.error.details.email[0]).toMatch(/already on your team/);
-    const theirs = await as.manager.post('/api/team/invitations').send({ email: other.manager.user.email, role: 'technician' });
-    expect(theirs.status).toBe(409);
-    expect(theirs.body.error.details.email[0]).toMatch(/another company/);
-    expect(mailTo(other.manager.user.email)).toHaveLength(0);
+    expect(mailTo(t.technician.user.email)).toHaveLength(0);
+  });
+
+  it('invites someone on another company\'s team like any address, and only they learn, on accepting, that it cannot be', async () => {
+    const elsewhere = await createTenant(ctx.db);
+    const address = elsewhere.technician.user.email;
+    const stranger = await as.manager.post('/api/team/invitations').send({ email: newAddress(), role: 'technician' });
+    const res = await as.manager.post('/api/team/invitations').send({ email: address, role: 'technician' });
+    expect(res.status).toBe(stranger.status);
+    expect(Object.keys(res.body).sort()).toEqual(Object.keys(stranger.body).sort());
+    expect(res.body).toMatchObject({ kind: 'member', email: address, role: 'technician', status: 'open' });
+    const resent = await as.manager.post(`/api/team/invitations/${res.body.id}/resend`);
+    expect(resent.status).toBe(200);
+    expect(resent.body.status).toBe('open');
+    expect(mailTo(address)).toHaveLength(2);
+
+    const { agent, location } = await follow(linkIn((await simpleParser(mailTo(address)[0].raw)).text));
+    expect(location).toBe(`http://127.0.0.1:3999/welcome/${res.body.id}`);
+    const refused = await agent.post(`/api/invitations/${res.body.id}/accept`).send({});
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(/already belong to another company's team/);
+    const theirMemberships = await ctx.db.select().from(memberships).where(eq(memberships.userId, elsewhere.technician.user.id));
+    expect(theirMemberships).toEqual([expect.objectContaining({ companyId: elsewhere.company.id, role: 'technician' })]);
+    // To the office it stays an open invitation, like one nobody has answered.
+    const [stored] = await ctx.db.select().from(invitations).where(eq(invitations.id, res.body.id));
+    expect(stored.acceptedAt).toBeNull();
+    const listed = (await as.manager.get('/api/team/invitations')).body.find((i: { id: string }) => i.id === res.body.id);
+    expect(listed.status).toBe('open');
   });
 
   it('answers 409 while an invitation to the same address is open', async () => {
@@ -283,6 +307,24 @@ describe('homeowner invitations', () => {
     expect(given.status).toBe(201);
     expect(given.body.email).toBe(email);
     expect(mailTo(email)).toHaveLength(1);
+  });
+
+  it('refuses the address of a member of this team; another company\'s member is invited like anyone and refused on accepting', async () => {
+    const customer = await insertCustomer(ctx.db, { companyId: t.company.id, email: null });
+    const ours = await as.manager.post(`/api/customers/${customer.id}/homeowner-invitation`).send({ email: t.technician.user.email });
+    expect(ours.status).toBe(409);
+    expect(ours.body.error.details.email[0]).toMatch(/member of your team/);
+
+    const elsewhere = await createTenant(ctx.db);
+    const address = elsewhere.manager.user.email;
+    const res = await as.manager.post(`/api/customers/${customer.id}/homeowner-invitation`).send({ email: address });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ kind: 'homeowner', email: address, customerId: customer.id, status: 'open' });
+    const { agent } = await follow(linkIn((await onlyMailTo(address)).text));
+    const refused = await agent.post(`/api/invitations/${res.body.id}/accept`).send({});
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(/already belong to another company's team/);
+    expect(await ctx.db.select().from(homeownerAccounts).where(eq(homeownerAccounts.userId, elsewhere.manager.user.id))).toHaveLength(0);
   });
 
   it('answers 401 signed out, 403 to a homeowner, 404 for another company\'s customer', async () => {

@@ -32,14 +32,19 @@ export function invitationsService(ctx: AppContext) {
     }
   }
 
-  async function refuseIfOnATeam(companyId: string, email: string) {
+  /**
+   * Someone on another company's team is invited like any other address: answering differently would tell any
+   * manager who works where. Their acceptance is refused instead (acceptance.service.ts), to them alone.
+   */
+  async function findOurMember(companyId: string, email: string) {
     const user = await repo.findUserByEmail(ctx.db, email);
     const membership = user && (await repo.findMembership(ctx.db, user.id));
-    if (!membership) return;
-    const message =
-      membership.companyId === companyId
-        ? 'This person is already on your team.'
-        : 'This address already belongs to another company\'s team on Lifeplate. Ask them for a different address.';
+    return membership?.companyId === companyId ? membership : null;
+  }
+
+  async function refuseIfOnOurTeam(companyId: string, email: string) {
+    if (!(await findOurMember(companyId, email))) return;
+    const message = 'This person is already on your team.';
     throw conflict(message, { email: [message] });
   }
 
@@ -74,7 +79,7 @@ export function invitationsService(ctx: AppContext) {
       if (!canManageMemberRole(actor, input.role, input.role)) {
         throw forbidden('Only an owner can invite an owner.');
       }
-      await refuseIfOnATeam(actor.companyId, input.email);
+      await refuseIfOnOurTeam(actor.companyId, input.email);
       if (await repo.findOpenMemberInvitation(ctx.db, actor.companyId, input.email)) {
         const message = 'An invitation to this address is already open. Use "Send again" in the list below.';
         throw conflict(message, { email: [message] });
@@ -104,7 +109,7 @@ export function invitationsService(ctx: AppContext) {
       const { invitation, invitedByName } = await findManageable(actor, id);
       const status = invitationStatus(invitation);
       if (status === 'accepted' || status === 'revoked') throw gone(`This invitation was ${status}; invite the person again instead.`);
-      await refuseIfOnATeam(actor.companyId, invitation.email);
+      await refuseIfOnOurTeam(actor.companyId, invitation.email);
       const row = await ctx.db.transaction(async (tx) => {
         const updated = await repo.update(tx, actor.companyId, id, { expiresAt: expiryFromNow() });
         await recordAudit(tx, { companyId: actor.companyId, actorId: actor.userId, action: 'resend', entity: 'invitation', entityId: id });
@@ -122,9 +127,8 @@ export function invitationsService(ctx: AppContext) {
         const message = 'This customer has no e-mail address. Type the address to send the invitation to.';
         throw badRequest(message, { email: [message] });
       }
-      const user = await repo.findUserByEmail(ctx.db, email);
-      if (user && (await repo.findMembership(ctx.db, user.id))) {
-        const message = 'This address belongs to a team member on Lifeplate. Use the homeowner\'s own address.';
+      if (await findOurMember(actor.companyId, email)) {
+        const message = 'This address belongs to a member of your team. Use the homeowner\'s own address.';
         throw conflict(message, { email: [message] });
       }
       const row = await create(actor, { kind: 'homeowner', email, customerId });
