@@ -23,9 +23,11 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
     session: {
       expiresIn: 60 * 60 * 24 * 14,
       updateAge: 60 * 60 * 24,
-      // The session is read from a signed cookie for up to a minute instead of two queries per request. A session
-      // deleted elsewhere (sign-out on another device) so lasts up to a minute longer; a deactivated member is still
-      // refused at once, because the membership is read on every request (server/middleware/authenticate.ts).
+      // The session is read from a signed cookie for up to a minute instead of two queries per request. Our API still
+      // refuses a session the moment it is signed out, deleted elsewhere or its member deactivated: the session row
+      // is checked in the query that reads the membership on every request (server/auth/principal-repository.ts).
+      // better-auth's own endpoints outside its sensitive ones (/get-session, /update-user) still trust the cookie
+      // for that minute; the app calls neither from the browser.
       cookieCache: { enabled: true, maxAge: 60 },
     },
     rateLimit: {

@@ -24,8 +24,8 @@ export function loadSession(ctx: AppContext): RequestHandler {
       // When the session cookie cache is refreshed, the new cookie goes back to the browser.
       for (const cookie of headers.getSetCookie()) res.append('Set-Cookie', cookie);
       if (session) {
-        const principal = await findPrincipal(ctx.db, session.user.id);
-        if (principal !== 'deactivated') {
+        const principal = await findPrincipal(ctx.db, { id: session.session.id, userId: session.user.id });
+        if (principal !== 'ended') {
           res.locals.session = { userId: session.user.id, name: session.user.name, email: session.user.email };
           res.locals.principal = principal;
         }

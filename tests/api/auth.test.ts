@@ -1,8 +1,10 @@
 import request from 'supertest';
+import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../support/context';
 import { createTenant, signIn, type Tenant } from '../support/tenant';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
+import { sessions } from '../../server/db/schema/index';
 
 const { app, ctx } = testApp();
 let t: Tenant;
@@ -41,6 +43,47 @@ describe('sign-in and sign-out', () => {
     expect((await agent.post('/api/auth/sign-out').send({})).status).toBe(200);
     expect((await agent.get('/api/me')).body).toEqual({ user: null });
     expect((await agent.get('/api/company')).status).toBe(401);
+  });
+});
+
+/** Signs in with a plain request and returns the cookies as a browser would send them, to be copied elsewhere. */
+async function signInCookies(email: string) {
+  const res = await request(app).post('/api/auth/sign-in/email').send({ email, password: DEFAULT_TEST_PASSWORD });
+  expect(res.status).toBe(200);
+  const setCookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+  return setCookies.map((c) => c.split(';')[0]).join('; ');
+}
+
+/** The session token inside better-auth's signed session cookie (`<token>.<signature>`). */
+const sessionToken = (cookie: string) => decodeURIComponent(/session_token=([^;]+)/.exec(cookie)![1]).split('.')[0];
+
+describe('a session ended while its cookie still caches it (better-auth keeps it in the cookie for up to 60 s)', () => {
+  it('refuses a copied cookie at once after sign-out', async () => {
+    const cookie = await signInCookies(t.manager.user.email);
+    // The cookie carries the cached session, so these requests do not read it from the session table...
+    expect(cookie).toMatch(/session_data=/);
+    expect((await request(app).get('/api/company').set('Cookie', cookie)).status).toBe(200);
+
+    expect((await request(app).post('/api/auth/sign-out').set('Cookie', cookie).send({})).status).toBe(200);
+    // ...yet the same cookie, replayed after sign-out, is refused at once.
+    expect((await request(app).get('/api/company').set('Cookie', cookie)).status).toBe(401);
+    expect((await request(app).get('/api/me').set('Cookie', cookie)).body).toEqual({ user: null });
+  });
+
+  it('refuses a session deleted elsewhere (signed out on another device) at once, and keeps the others', async () => {
+    const phone = await signInCookies(t.technician.user.email);
+    const desk = await signInCookies(t.technician.user.email);
+    expect((await request(app).get('/api/company').set('Cookie', phone)).status).toBe(200);
+    const deleted = await ctx.db.delete(sessions).where(eq(sessions.token, sessionToken(phone))).returning();
+    expect(deleted).toHaveLength(1);
+    expect((await request(app).get('/api/company').set('Cookie', phone)).status).toBe(401);
+    expect((await request(app).get('/api/company').set('Cookie', desk)).status).toBe(200);
+  });
+
+  it('refuses an expired session though its cached copy has not expired', async () => {
+    const cookie = await signInCookies(t.owner.user.email);
+    await ctx.db.update(sessions).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(sessions.userId, t.owner.user.id));
+    expect((await request(app).get('/api/company').set('Cookie', cookie)).status).toBe(401);
   });
 });
 
