@@ -16,14 +16,15 @@ const mount = () =>
     </StrictMode>,
   );
 
-// The server rendered this page's first screen: it stays until the page's own chunk has loaded, then React replaces it
-// with the same markup in one commit (rendering at once would blank it while the chunk loads).
-if (container.hasChildNodes() && !router.state.initialized) {
+// React mounts once the router has loaded the page's lazy chunk, so its first render is the page itself. Rendering
+// earlier would render the router's hydration fallback (nothing, with a console warning when a route has none) and,
+// where the server rendered the first screen into the HTML, blank that screen while the chunk loads.
+if (router.state.initialized) {
+  mount();
+} else {
   const unsubscribe = router.subscribe((state) => {
     if (!state.initialized) return;
     unsubscribe();
     mount();
   });
-} else {
-  mount();
 }

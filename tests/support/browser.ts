@@ -2,9 +2,9 @@ import fs from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
 import { execFileSync } from 'node:child_process';
-import { chromium, type Browser, type BrowserContextOptions, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
-import { afterAll, beforeAll, inject } from 'vitest';
+import { afterAll, afterEach, beforeAll, inject } from 'vitest';
 import { buildClientIfStale } from '../../scripts/lib/client-build';
 import { PROJECT_ROOT } from '../../scripts/lib/paths';
 import { closeContext } from '../../server/build-context';
@@ -32,9 +32,41 @@ export function ensureChromium() {
   execFileSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
 }
 
+/** What the pages of the running test wrote to the console as errors or warnings, and what they threw. */
+const consoleProblems: string[] = [];
+
+// Chromium logs each refused request (a 401 before sign-in, a 404 the page expects) or one cut off (offline) as a
+// failed resource; the app's own handling of those is asserted by the tests. A 5xx still counts as a problem.
+const expectedFailedResource = /^Failed to load resource: (the server responded with a status of 4\d\d|net::)/;
+
+function watchConsole(context: BrowserContext) {
+  context.on('console', (m) => {
+    const type = m.type();
+    if ((type === 'error' || type === 'warning') && !expectedFailedResource.test(m.text())) {
+      consoleProblems.push(`console.${type}: ${m.text()} (${m.location().url})`);
+    }
+  });
+  context.on('weberror', (e) => consoleProblems.push(`uncaught: ${e.error().message}`));
+}
+
+// Registered by every browser test file that imports this module: a console error or warning fails the test.
+afterEach(() => {
+  const found = consoleProblems.splice(0);
+  if (found.length) throw new Error(`The browser console had errors or warnings:\n${found.join('\n')}`);
+});
+
+/** Every context (and so every page) of this browser is watched by the rule above. */
 export async function launchBrowser(extraArgs: string[] = []): Promise<Browser> {
   ensureChromium();
-  return chromium.launch({ executablePath: CHROMIUM, args: [...CHROMIUM_FLAGS, ...extraArgs] });
+  const browser = await chromium.launch({ executablePath: CHROMIUM, args: [...CHROMIUM_FLAGS, ...extraArgs] });
+  const newContext = browser.newContext.bind(browser);
+  // browser.newPage() makes its context through newContext too.
+  browser.newContext = async (options?: BrowserContextOptions) => {
+    const context = await newContext(options);
+    watchConsole(context);
+    return context;
+  };
+  return browser;
 }
 
 export const PHONE: BrowserContextOptions = { viewport: { width: 360, height: 740 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
