@@ -60,9 +60,10 @@ async function main() {
   });
 
   try {
+    // Someone at a terminal reads this output (ours and the app child's): short lines, unless LOG_FORMAT=json is asked for.
+    process.env.LOG_FORMAT ??= 'pretty';
     Object.assign(process.env, services.env);
-    // Someone at a terminal reads this output: short lines, unless LOG_FORMAT=json is asked for.
-    const config = parseConfig({ NODE_ENV: dev ? 'development' : 'production', LOG_FORMAT: 'pretty', ...process.env });
+    const config = parseConfig({ NODE_ENV: dev ? 'development' : 'production', ...process.env });
     await runMigrations(config.DATABASE_URL);
     const { db, pool } = createDb(config.DATABASE_URL, { max: 2 });
     const { seeded } = await seedDemo(db);
