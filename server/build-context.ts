@@ -5,13 +5,15 @@ import { createDb } from './db/client';
 import { createLogger } from './logger';
 import { createObjectStorage } from './lib/object-storage';
 import { createMailer } from './lib/mailer';
+import { createMailQueue } from './modules/mail/mail-queue';
 
 export function buildContext(config: AppConfig, overrides: Partial<AppContext> = {}): AppContext {
   const logger = overrides.logger ?? createLogger(config.LOG_LEVEL, config.LOG_FORMAT);
   const { db, pool } = createDb(config.DATABASE_URL, { onConnectionError: (err) => logger.warn({ err }, 'database connection lost') });
   const storage = overrides.storage ?? createObjectStorage(config);
   const mailer = overrides.mailer ?? createMailer(config);
-  return { config, db, pool, auth: createAuth(db, config, { mailer, logger }), logger, storage, mailer, ...overrides };
+  const mail = overrides.mail ?? createMailQueue({ db, mailer, logger, secret: config.BETTER_AUTH_SECRET });
+  return { config, db, pool, auth: createAuth(db, config, { mail, logger }), logger, storage, mailer, mail, ...overrides };
 }
 
 export async function closeContext(ctx: AppContext) {

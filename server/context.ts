@@ -5,6 +5,7 @@ import type { AppConfig } from './config';
 import type { Db } from './db/client';
 import type { ObjectStorage } from './lib/object-storage';
 import type { Mailer } from './lib/mailer';
+import type { MailQueue } from './modules/mail/mail-queue';
 
 /** Everything a request handler may need, built once at boot and passed down explicitly (no module singletons). */
 export type AppContext = {
@@ -17,4 +18,6 @@ export type AppContext = {
   storage: ObjectStorage;
   /** Outgoing mail over SMTP (the local fake in development and tests). */
   mailer: Mailer;
+  /** Every e-mail goes through this durable queue (server/modules/mail/), never straight to `mailer`. */
+  mail: MailQueue;
 };

@@ -3,12 +3,12 @@ import { createAuthMiddleware } from 'better-auth/api';
 import { magicLink } from 'better-auth/plugins';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
-import type { Mailer } from '../lib/mailer';
+import type { MailQueue } from '../modules/mail/mail-queue';
 import { invitationsRepository as repo } from '../modules/invitations/invitations.repository';
 import { invitationMail, signInMail } from '../modules/invitations/invitation-mail';
 import { SIGN_IN_LINK_HOURS } from '../../shared/schemas/invitations';
 
-export type MagicLinkDeps = { mailer: Pick<Mailer, 'send'>; logger: Pick<Logger, 'error'> };
+export type MagicLinkDeps = { mail: Pick<MailQueue, 'send'>; logger: Pick<Logger, 'error'> };
 
 const SIGN_IN_PATH = '/sign-in/magic-link';
 const VERIFY_PATH = '/magic-link/verify';
@@ -22,22 +22,24 @@ const requestBody = z.object({ email: z.email() });
 export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
   const mayReceiveLink = async (email: string) => (await repo.hasOpenInvitation(db, email)) || repo.isKnownPerson(db, email);
 
-  async function mailFor(email: string, url: string, invitationId: unknown) {
+  /** Queued as the invitation's mail (replacing a link of it still waiting) or as a plain sign-in link. */
+  async function queueMail(email: string, url: string, invitationId: unknown) {
     const invited = typeof invitationId === 'string' && z.uuid().safeParse(invitationId).success ? await repo.findOpenForMail(db, invitationId, email) : null;
-    if (!invited) return signInMail(email, url);
+    if (!invited) return deps.mail.send(signInMail(email, url), { kind: 'sign_in', companyId: null });
     const { invitation, companyName, invitedByName } = invited;
-    return invitationMail(email, url, { companyId: invitation.companyId, kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
+    const mail = invitationMail(email, url, { companyId: invitation.companyId, kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
+    return deps.mail.send(mail, { kind: 'invitation', companyId: invitation.companyId, refId: invitation.id, replacesQueued: true });
   }
 
   const plugin = magicLink({
     expiresIn: SIGN_IN_LINK_HOURS * 60 * 60,
     storeToken: 'hashed',
     async sendMagicLink({ email, url, metadata }, ctx) {
-      const send = async () => deps.mailer.send(await mailFor(email, url, metadata?.invitationId));
+      const send = () => queueMail(email, url, metadata?.invitationId);
       // From the browser the answer must not wait on the mail, or its timing would tell who may receive one.
-      // A server-side call (an invitation being sent) waits, so the office learns if the mail failed.
+      // A server-side call (an invitation being sent) waits, so the office learns whether it went or is queued.
       if (ctx?.request) {
-        send().catch((err: unknown) => deps.logger.error({ err }, 'sign-in link mail failed'));
+        send().catch((err: unknown) => deps.logger.error({ err }, 'sign-in link mail could not be queued'));
         return;
       }
       await send();

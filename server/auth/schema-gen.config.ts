@@ -7,5 +7,5 @@ const config = parseConfig({
   DATABASE_URL: 'postgres://generator@127.0.0.1:1/generator',
   BETTER_AUTH_SECRET: 'schema-generator-only-secret-0000000000',
 });
-const noMail = { send: async () => ({ messageId: '', accepted: [] }), close: () => {} };
-export const auth = createAuth(drizzle(config.DATABASE_URL), config, { mailer: noMail, logger: console });
+const noMail = { send: async () => 'sent' as const };
+export const auth = createAuth(drizzle(config.DATABASE_URL), config, { mail: noMail, logger: console });

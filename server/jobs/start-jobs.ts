@@ -2,6 +2,7 @@ import PgBoss from 'pg-boss';
 import type { AppContext } from '../context';
 import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE, photoSweepJob } from './photo-sweep-job';
 import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
+import { MAIL_CRON, MAIL_QUEUE, mailJob } from './mail-job';
 
 export const JOBS_SCHEMA = 'pgboss';
 
@@ -9,12 +10,14 @@ type Job = {
   queue: string;
   cron: string;
   /** How long one run may take before pg-boss counts it as failed, and how often a failed run is tried again. */
-  options: { expireInSeconds: number; retryLimit: number; retryDelay: number };
+  options: { expireInSeconds: number; retryLimit: number; retryDelay: number; retryBackoff?: boolean };
   run: (ctx: AppContext, data: unknown) => Promise<unknown>;
 };
 const JOBS: Job[] = [
   // A retry is safe: the unique key keeps a reminder from being recorded (and so sent) twice.
   { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, options: { expireInSeconds: 4 * 3600, retryLimit: 2, retryDelay: 600 }, run: remindersJob },
+  // Each message keeps its own tries and backoff in outgoing_mail; this retries a run that failed as a whole (database away).
+  { queue: MAIL_QUEUE, cron: MAIL_CRON, options: { expireInSeconds: 15 * 60, retryLimit: 3, retryDelay: 30, retryBackoff: true }, run: mailJob },
   { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, options: { expireInSeconds: 3600, retryLimit: 1, retryDelay: 600 }, run: (ctx) => photoSweepJob(ctx) },
 ];
 

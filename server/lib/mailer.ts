@@ -15,6 +15,10 @@ export function createMailer(config: Pick<AppConfig, 'SMTP_HOST' | 'SMTP_PORT' |
     secure: config.SMTP_SECURE,
     // The loopback fake's certificate has expired, so no STARTTLS there; real servers negotiate TLS as usual.
     ignoreTLS: loopback,
+    // A mail server that accepts the connection but never answers must not hold a request (or a queue run) for minutes.
+    connectionTimeout: 10_000,
+    greetingTimeout: 10_000,
+    socketTimeout: 30_000,
     auth: config.SMTP_USER ? { user: config.SMTP_USER, pass: config.SMTP_PASS ?? '' } : undefined,
   });
   return {

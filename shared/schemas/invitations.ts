@@ -2,7 +2,7 @@
  * Invitations by e-mail with a one-time sign-in link: team members (technician, manager) and homeowners (linked to a customer).
  * Routes (all under /api):
  *
- *   POST /team/invitations                     InvitationDto          team:manage   (201; sends the e-mail; 409 if the address is already on a team)
+ *   POST /team/invitations                     InvitationDto          team:manage   (201; sends or queues the e-mail, see `mail`; 409 if the address is already on a team)
  *   GET  /team/invitations                     InvitationDto[]        team:manage   (member invitations neither accepted nor revoked, newest first)
  *   POST /team/invitations/:id/revoke          InvitationDto          team:manage
  *   POST /team/invitations/:id/resend          InvitationDto          team:manage   (a fresh link; renews the 7 days)
@@ -15,6 +15,7 @@
  *   GET  /auth/magic-link/verify?token=&callbackURL=     signs in (a new user only for an invited address) and redirects
  */
 import { z } from 'zod';
+import type { MailDelivery } from './mail';
 import { MEMBER_ROLES, type MemberRole } from './roles';
 
 export const INVITATION_KINDS = ['member', 'homeowner'] as const;
@@ -70,6 +71,8 @@ export type InvitationDto = {
   invitedByName: string | null;
   createdAt: string;
   expiresAt: string;
+  /** The latest invitation e-mail: `queued` until the mail server has taken it (null if none was written). */
+  mail: MailDelivery | null;
 };
 
 /** What the invited person sees on the welcome page. */

@@ -8,6 +8,7 @@
  *
  * The office hears by e-mail (owners and managers); a failed e-mail never loses the request, it stays in the list.
  */
+import type { MailDelivery } from './mail';
 import { z } from 'zod';
 import { optionalText } from './common';
 import { CONTACT_NEEDED_MESSAGE, NAME_NEEDED_MESSAGE, SERVICE_REQUEST_LIMITS as MAX } from './service-request-limits';
@@ -67,6 +68,8 @@ export type ServiceRequestDto = {
   preferredTimes: string | null;
   message: string | null;
   officeNotifiedAt: string | null;
+  /** The e-mail to the office: `queued` while the mail server is away; null when there was nobody to tell. */
+  officeMail: MailDelivery | null;
   handledAt: string | null;
   handledByName: string | null;
   customerName: string | null;

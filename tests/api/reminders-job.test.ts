@@ -6,6 +6,7 @@ import { insertAppliance, insertCustomer, insertSite } from '../../server/db/fac
 import { startJobs, type Jobs } from '../../server/jobs/start-jobs';
 import { REMINDERS_CRON, REMINDERS_QUEUE } from '../../server/jobs/reminders-job';
 import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE } from '../../server/jobs/photo-sweep-job';
+import { MAIL_CRON, MAIL_QUEUE } from '../../server/jobs/mail-job';
 import { todayInTimeZone } from '../../shared/dates';
 import { addMonths } from '../../shared/trade/iso-date';
 import { closeContext } from '../../server/build-context';
@@ -25,12 +26,13 @@ afterAll(async () => {
 });
 
 describe('the reminders job on pg-boss', () => {
-  it('registers the daily reminder run and the photo sweep as cron schedules', async () => {
+  it('registers the daily reminder run, the queued-mail sweep and the photo sweep as cron schedules', async () => {
     const schedules = await jobs.boss.getSchedules();
     expect(schedules).toEqual(
       expect.arrayContaining([
         expect.objectContaining({ name: REMINDERS_QUEUE, cron: REMINDERS_CRON }),
         expect.objectContaining({ name: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON }),
+        expect.objectContaining({ name: MAIL_QUEUE, cron: MAIL_CRON }),
       ]),
     );
   });

@@ -9,3 +9,5 @@ export * from './share-links';
 export * from './reminders';
 export * from './service-requests';
 export * from './invitations';
+export * from './outgoing-mail';
+export * from './sign-in-throttle';

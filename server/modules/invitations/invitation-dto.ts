@@ -1,4 +1,5 @@
 import type { InvitationDto, InvitationStatus } from '../../../shared/schemas/invitations';
+import { mailDelivery, type MailStatus } from '../../../shared/schemas/mail';
 import type { InvitationRow } from './invitations.repository';
 
 export function invitationStatus(r: InvitationRow, now = new Date()): InvitationStatus {
@@ -7,7 +8,7 @@ export function invitationStatus(r: InvitationRow, now = new Date()): Invitation
   return r.expiresAt <= now ? 'expired' : 'open';
 }
 
-export const toInvitationDto = (r: InvitationRow, invitedByName: string | null): InvitationDto => ({
+export const toInvitationDto = (r: InvitationRow, invitedByName: string | null, mail?: MailStatus | null): InvitationDto => ({
   id: r.id,
   kind: r.kind,
   email: r.email,
@@ -17,4 +18,5 @@ export const toInvitationDto = (r: InvitationRow, invitedByName: string | null):
   invitedByName,
   createdAt: r.createdAt.toISOString(),
   expiresAt: r.expiresAt.toISOString(),
+  mail: mail ? mailDelivery(mail) : null,
 });

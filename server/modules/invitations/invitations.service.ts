@@ -10,6 +10,7 @@ import {
   type MemberInvitationInput,
 } from '../../../shared/schemas/invitations';
 import { recordAudit } from '../audit/audit.repository';
+import { outgoingMailRepository } from '../mail/outgoing-mail.repository';
 import { invitationsRepository as repo, type InvitationRow } from './invitations.repository';
 import { invitationStatus, toInvitationDto } from './invitation-dto';
 
@@ -19,7 +20,10 @@ const expiryFromNow = () => new Date(Date.now() + INVITATION_DAYS * 86_400_000);
 
 /** The office's side: invite team members and homeowners, list, revoke and resend. */
 export function invitationsService(ctx: AppContext) {
-  /** The e-mail with a one-time sign-in link whose landing page is the invitation's welcome page. */
+  /**
+   * The e-mail with a one-time sign-in link whose landing page is the invitation's welcome page. It is queued and tried
+   * at once; while the mail server is away it stays queued and is retried (server/modules/mail/). Answers its status.
+   */
   async function sendLink(row: InvitationRow) {
     try {
       await ctx.auth.api.signInMagicLink({
@@ -27,9 +31,10 @@ export function invitationsService(ctx: AppContext) {
         headers: new Headers(),
       });
     } catch (err) {
-      ctx.logger.error({ err, invitationId: row.id }, 'invitation mail failed');
-      throw new HttpError(502, 'mail_failed', 'The invitation is saved, but the e-mail could not be sent. Try "Send again" in a minute.');
+      ctx.logger.error({ err, invitationId: row.id }, 'invitation mail could not be queued');
+      throw new HttpError(502, 'mail_failed', 'The invitation is saved, but its e-mail could not be queued. Try "Send again" in a minute.');
     }
+    return (await outgoingMailRepository.latestStatuses(ctx.db, 'invitation', [row.id])).get(row.id) ?? null;
   }
 
   /**
@@ -68,8 +73,7 @@ export function invitationsService(ctx: AppContext) {
       });
       return inserted;
     });
-    await sendLink(row);
-    return row;
+    return { row, mail: await sendLink(row) };
   }
 
   const inviterName = async (actor: Member) => (await repo.findUser(ctx.db, actor.userId))?.name ?? null;
@@ -84,12 +88,14 @@ export function invitationsService(ctx: AppContext) {
         const message = 'An invitation to this address is already open. Use "Send again" in the list below.';
         throw conflict(message, { email: [message] });
       }
-      const row = await create(actor, { kind: 'member', email: input.email, role: input.role });
-      return toInvitationDto(row, await inviterName(actor));
+      const { row, mail } = await create(actor, { kind: 'member', email: input.email, role: input.role });
+      return toInvitationDto(row, await inviterName(actor), mail);
     },
 
     async listPending(actor: Member): Promise<InvitationDto[]> {
-      return (await repo.listPendingMembers(ctx.db, actor.companyId)).map((r) => toInvitationDto(r.invitation, r.invitedByName));
+      const rows = await repo.listPendingMembers(ctx.db, actor.companyId);
+      const mail = await outgoingMailRepository.latestStatuses(ctx.db, 'invitation', rows.map((r) => r.invitation.id));
+      return rows.map((r) => toInvitationDto(r.invitation, r.invitedByName, mail.get(r.invitation.id)));
     },
 
     async revoke(actor: Member, id: string): Promise<InvitationDto> {
@@ -115,8 +121,7 @@ export function invitationsService(ctx: AppContext) {
         await recordAudit(tx, { companyId: actor.companyId, actorId: actor.userId, action: 'resend', entity: 'invitation', entityId: id });
         return updated;
       });
-      await sendLink(row);
-      return toInvitationDto(row, invitedByName);
+      return toInvitationDto(row, invitedByName, await sendLink(row));
     },
 
     async inviteHomeowner(actor: Member, customerId: string, input: HomeownerInvitationInput): Promise<InvitationDto> {
@@ -131,8 +136,8 @@ export function invitationsService(ctx: AppContext) {
         const message = 'This address belongs to a member of your team. Use the homeowner\'s own address.';
         throw conflict(message, { email: [message] });
       }
-      const row = await create(actor, { kind: 'homeowner', email, customerId });
-      return toInvitationDto(row, await inviterName(actor));
+      const { row, mail } = await create(actor, { kind: 'homeowner', email, customerId });
+      return toInvitationDto(row, await inviterName(actor), mail);
     },
   };
 }

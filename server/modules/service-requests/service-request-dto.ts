@@ -1,5 +1,6 @@
 import { LABELS } from '../../../shared/schemas/enums';
 import type { ServiceRequestDto } from '../../../shared/schemas/service-requests';
+import { mailDelivery } from '../../../shared/schemas/mail';
 import { validationFailed } from '../../lib/http-error';
 import type { ListedServiceRequest } from './service-requests.repository';
 
@@ -16,6 +17,7 @@ export function serviceRequestDto(r: ListedServiceRequest): ServiceRequestDto {
     preferredTimes: q.preferredTimes,
     message: q.message,
     officeNotifiedAt: q.officeNotifiedAt?.toISOString() ?? null,
+    officeMail: r.officeMailStatus ? mailDelivery(r.officeMailStatus) : null,
     handledAt: q.handledAt?.toISOString() ?? null,
     handledByName: r.handledByName,
     customerName: r.customerName,

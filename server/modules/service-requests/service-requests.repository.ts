@@ -1,6 +1,6 @@
 import { and, count, desc, eq, gte, inArray, isNull, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { appliances, customers, memberships, serviceRequests, sites, users } from '../../db/schema/index';
+import { appliances, customers, memberships, outgoingMail, serviceRequests, sites, users } from '../../db/schema/index';
 import type { ServiceRequestStatus } from '../../../shared/schemas/service-requests';
 
 export type ServiceRequestRow = typeof serviceRequests.$inferSelect;
@@ -15,7 +15,10 @@ const listColumns = {
   applianceFuel: appliances.fuel,
   street: sites.street,
   town: sites.town,
+  officeMailStatus: outgoingMail.status,
 };
+/** The office's e-mail about the request (one per request). */
+const officeMail = and(eq(outgoingMail.kind, 'service_request'), eq(outgoingMail.refId, serviceRequests.id));
 
 export const serviceRequestsRepository = {
   /** The appliance with its address and customer, within the company. */
@@ -60,9 +63,6 @@ export const serviceRequestsRepository = {
       .orderBy(users.email);
     return rows.map((r) => r.email);
   },
-  async markNotified(db: DbOrTx, id: string, at: Date) {
-    await db.update(serviceRequests).set({ officeNotifiedAt: at }).where(eq(serviceRequests.id, id));
-  },
   /** Newest first, keyset on (created_at, id). */
   list(db: DbOrTx, companyId: string, q: { status?: ServiceRequestStatus; after?: { createdAt: string; id: string }; limit: number }) {
     return db
@@ -72,6 +72,7 @@ export const serviceRequestsRepository = {
       .innerJoin(sites, eq(sites.id, appliances.siteId))
       .leftJoin(customers, eq(customers.id, serviceRequests.customerId))
       .leftJoin(users, eq(users.id, serviceRequests.handledBy))
+      .leftJoin(outgoingMail, officeMail)
       .where(
         and(
           eq(serviceRequests.companyId, companyId),
@@ -90,6 +91,7 @@ export const serviceRequestsRepository = {
       .innerJoin(sites, eq(sites.id, appliances.siteId))
       .leftJoin(customers, eq(customers.id, serviceRequests.customerId))
       .leftJoin(users, eq(users.id, serviceRequests.handledBy))
+      .leftJoin(outgoingMail, officeMail)
       .where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.id, id)));
     return row ?? null;
   },

@@ -1,4 +1,5 @@
 import type { AppContext } from '../../context';
+import type { Tx } from '../../db/client';
 import { HttpError, notFound } from '../../lib/http-error';
 import { SHARE_LINK_REQUESTS_PER_DAY } from '../../../shared/schemas/service-request-limits';
 import type {
@@ -26,25 +27,31 @@ const DAY_MS = 86_400_000;
 const VIA_SUMMARY: Record<ServiceRequestVia, string> = { share_link: 'through the share link', homeowner_account: 'from their sign-in' };
 
 export function serviceRequestsService(ctx: AppContext) {
-  /** After the request is safely stored: a failed e-mail is logged and leaves office_notified_at empty, the row stays. */
-  async function notifyOffice(row: Awaited<ReturnType<typeof repo.insert>>, appliance: NonNullable<Awaited<ReturnType<typeof repo.applianceContext>>>) {
+  /** Written in the request's own transaction, so a request is never stored without its e-mail to the office. */
+  async function queueOfficeMail(tx: Tx, row: Awaited<ReturnType<typeof repo.insert>>, appliance: NonNullable<Awaited<ReturnType<typeof repo.applianceContext>>>) {
+    const recipients = await repo.officeRecipients(tx, row.companyId);
+    if (!recipients.length) {
+      ctx.logger.warn({ serviceRequestId: row.id }, 'no active owner or manager to tell about a service request');
+      return null;
+    }
+    const mail = { to: recipients.join(', '), ...serviceRequestMail(ctx.config.BASE_URL, row, appliance) };
+    return ctx.mail.enqueue(tx, mail, { kind: 'service_request', companyId: row.companyId, refId: row.id });
+  }
+
+  /** Tried at once after the commit; the mail queue marks office_notified_at when the server takes it, now or later. */
+  async function tryOfficeMail(mailId: string | null, serviceRequestId: string) {
+    if (!mailId) return;
     try {
-      const recipients = await repo.officeRecipients(ctx.db, row.companyId);
-      if (!recipients.length) {
-        ctx.logger.warn({ serviceRequestId: row.id }, 'no active owner or manager to tell about a service request');
-        return;
-      }
-      await ctx.mailer.send({ to: recipients.join(', '), ...serviceRequestMail(ctx.config.BASE_URL, row, appliance) });
-      await repo.markNotified(ctx.db, row.id, new Date());
+      await ctx.mail.deliver(mailId);
     } catch (err) {
-      ctx.logger.error({ err, serviceRequestId: row.id }, 'could not e-mail the office about a service request; it is kept in the list');
+      ctx.logger.error({ err, serviceRequestId }, 'the e-mail to the office stays queued; the request is kept in the list');
     }
   }
 
   return {
     async create(source: Source, input: Input): Promise<ServiceRequestCreatedDto> {
       const company = await homeownerRepository.company(ctx.db, source.companyId);
-      const { row, appliance } = await ctx.db.transaction(async (tx) => {
+      const { row, mailId } = await ctx.db.transaction(async (tx) => {
         const appliance = await repo.applianceContext(tx, source.companyId, source.applianceId);
         if (!appliance) throw notFound('Appliance');
         const who = source.via === 'share_link' ? { shareLinkId: source.shareLinkId } : { requesterUserId: source.requesterUserId };
@@ -89,9 +96,9 @@ export function serviceRequestsService(ctx: AppContext) {
           entityId: row.id,
           changes: { via: source.via, applianceId: source.applianceId, shareLinkId: row.shareLinkId },
         });
-        return { row, appliance };
+        return { row, mailId: await queueOfficeMail(tx, row, appliance) };
       });
-      await notifyOffice(row, appliance);
+      await tryOfficeMail(mailId, row.id);
       return { id: row.id, company: { name: company.name, phone: company.phone } };
     },
 

@@ -3,8 +3,9 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { invitationMailNotice } from '@/lib/mail-delivery';
 import { useValidatedSubmit } from '@/lib/use-validated-submit';
-import { homeownerInvitationInput } from '@shared/schemas/invitations';
+import { homeownerInvitationInput, type InvitationDto } from '@shared/schemas/invitations';
 import type { CustomerDto } from '@shared/schemas/records';
 import { useInviteHomeowner } from '../api/invite-homeowner';
 
@@ -12,18 +13,18 @@ import { useInviteHomeowner } from '../api/invite-homeowner';
 export function InviteHomeowner({ customer }: { customer: CustomerDto }) {
   const [open, setOpen] = useState(false);
   const [email, setEmail] = useState(customer.email ?? '');
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [sent, setSent] = useState<InvitationDto | null>(null);
   const invite = useInviteHomeowner();
   const { errors, failure, saving, formRef, submit } = useValidatedSubmit(homeownerInvitationInput, async (body) => {
-    const sent = await invite.mutateAsync({ customerId: customer.id, body });
-    setSentTo(sent.email);
+    setSent(await invite.mutateAsync({ customerId: customer.id, body }));
     setOpen(false);
   });
 
+  const notice = sent && invitationMailNotice(sent.mail, sent.email);
   if (!open) {
     return (
       <div className="flex flex-col gap-2">
-        {sentTo && <Notice title="Invitation sent">{`An e-mail with a sign-in link is on its way to ${sentTo}.`}</Notice>}
+        {notice && <Notice kind={sent?.mail === 'sent' ? 'info' : 'caution'} title={notice.title}>{notice.text}</Notice>}
         <div>
           <Button
             variant="secondary"

@@ -51,7 +51,13 @@ export function ServiceRequestCard({
       </p>
       {r.preferredTimes && <p>Preferred times: {r.preferredTimes}</p>}
       {r.message && <p className="whitespace-pre-wrap">{r.message}</p>}
-      {!r.officeNotifiedAt && <p className="text-sm text-iron-muted">The e-mail about this request was not sent; it is only in this list.</p>}
+      {!r.officeNotifiedAt && (
+        <p className="text-sm text-iron-muted">
+          {r.officeMail === 'queued'
+            ? 'The e-mail about this request is queued: the mail server did not answer, and it goes out by itself as soon as it does.'
+            : 'The e-mail about this request was not sent; it is only in this list.'}
+        </p>
+      )}
       {r.handledAt && (
         <p className="text-sm text-iron-muted">
           Marked {SERVICE_REQUEST_STATUS_LABELS[r.status].toLowerCase()} {when(r.handledAt)}

@@ -3,9 +3,10 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { invitationMailNotice } from '@/lib/mail-delivery';
 import { useValidatedSubmit } from '@/lib/use-validated-submit';
 import { canManageMemberRole } from '@shared/policy';
-import { memberInvitationInput } from '@shared/schemas/invitations';
+import { memberInvitationInput, type InvitationDto } from '@shared/schemas/invitations';
 import { MEMBER_ROLES, ROLE_LABELS, type MemberRole, type Principal } from '@shared/schemas/roles';
 import { useInviteMember } from '../api/invite-member';
 
@@ -14,13 +15,13 @@ export function InviteForm({ principal }: { principal: Principal }) {
   const invite = useInviteMember();
   const [email, setEmail] = useState('');
   const [role, setRole] = useState<MemberRole>('technician');
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const [sent, setSent] = useState<InvitationDto | null>(null);
   const { errors, failure, saving, formRef, submit } = useValidatedSubmit(memberInvitationInput, async (body) => {
-    setSentTo(null);
-    const sent = await invite.mutateAsync(body);
-    setSentTo(sent.email);
+    setSent(null);
+    setSent(await invite.mutateAsync(body));
     setEmail('');
   });
+  const notice = sent && invitationMailNotice(sent.mail, sent.email);
   const roles = MEMBER_ROLES.filter((r) => canManageMemberRole(principal, r, r)).reverse();
 
   return (
@@ -38,7 +39,7 @@ export function InviteForm({ principal }: { principal: Principal }) {
           They get an e-mail from Lifeplate with a sign-in link that works once, for 24 hours. The invitation stays open for 7 days.
         </p>
         {failure && <Notice kind="danger" title="Not sent">{failure}</Notice>}
-        {sentTo && <Notice title="Invitation sent">An e-mail is on its way to {sentTo}.</Notice>}
+        {notice && <Notice kind={sent?.mail === 'sent' ? 'info' : 'caution'} title={notice.title}>{notice.text}</Notice>}
         <div className="grid gap-3 sm:grid-cols-[2fr_1fr_auto] sm:items-end">
           <TextField label="E-mail" type="email" autoComplete="off" value={email} onChange={(e) => setEmail(e.target.value)} error={errors.email} />
           <SelectField label="Role" value={role} onChange={(e) => setRole(e.target.value as MemberRole)} error={errors.role}>

@@ -18,7 +18,12 @@ export function PendingInvitations({ principal }: { principal: Principal }) {
   return (
     <Card title="Waiting to join">
       {error && <Notice kind="danger" title="Not changed">{error.message}</Notice>}
-      {resend.isSuccess && <Notice title="Sent again">A fresh link is on its way to {resend.data.email}.</Notice>}
+      {resend.isSuccess &&
+        (resend.data.mail === 'sent' ? (
+          <Notice title="Sent again">A fresh link is on its way to {resend.data.email}.</Notice>
+        ) : (
+          <Notice kind="caution" title="Fresh link queued">{`The mail server did not answer. The e-mail to ${resend.data.email} goes out by itself as soon as it does.`}</Notice>
+        ))}
       <ul className="divide-y divide-plate-line">
         {invitations.data.map((i) => (
           <li key={i.id} className="flex flex-wrap items-center gap-3 py-3">
@@ -34,6 +39,8 @@ export function PendingInvitations({ principal }: { principal: Principal }) {
             ) : (
               <StatusBadge status="info">Expired</StatusBadge>
             )}
+            {i.mail === 'queued' && <StatusBadge status="soon">E-mail queued</StatusBadge>}
+            {i.mail === 'failed' && <StatusBadge status="due">E-mail not sent</StatusBadge>}
             {canManageMemberRole(principal, i.role ?? 'technician') && (
               <>
                 <Button variant="secondary" disabled={resend.isPending} onClick={() => resend.mutate(i.id)}>
