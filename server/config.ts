@@ -28,7 +28,15 @@ export const envSchema = z
     MAIL_FROM: z.string().default('Lifeplate <no-reply@lifeplate.test>'),
     /** The local SMTP fake's folder, shown on the development outbox page; never set in production. */
     FAKE_SMTP_OUTBOX: optionalString,
-    TRUST_PROXY: z.string().default('loopback'),
+    /**
+     * The proxy in front of the app whose X-Forwarded-For is believed (Express `trust proxy`): its address or subnet,
+     * `loopback` for one on the same machine, or a number of hops. Unset, no forwarded address is believed.
+     */
+    TRUST_PROXY: z
+      .string()
+      .trim()
+      .default('false')
+      .refine((v) => v !== 'true', 'name the proxy (its address, subnet or `loopback`) or the number of proxies: `true` would believe any client\'s X-Forwarded-For'),
     SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   })
   .superRefine((env, ctx) => {

@@ -1,14 +1,18 @@
 import { betterAuth } from 'better-auth';
+import { createAuthMiddleware } from 'better-auth/api';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import type { NodePgDatabase } from 'drizzle-orm/node-postgres';
 import * as schema from '../db/schema/index';
 import type { AppConfig } from '../config';
 import { magicLinkAuth, type MagicLinkDeps } from './magic-link';
+import { passwordGuards } from './password-guards';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from './password-policy';
 
 export const CLIENT_IP_HEADER = 'x-lifeplate-client-ip';
 
 export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig, deps: MagicLinkDeps) {
   const links = magicLinkAuth(db, deps);
+  const passwords = passwordGuards(db, config.BETTER_AUTH_SECRET);
   return betterAuth({
     appName: 'Lifeplate',
     baseURL: config.BASE_URL,
@@ -16,9 +20,14 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
     secret: config.BETTER_AUTH_SECRET,
     trustedOrigins: [config.BASE_URL],
     database: drizzleAdapter(db, { provider: 'pg', usePlural: true, schema }),
-    emailAndPassword: { enabled: true, minPasswordLength: 10, autoSignIn: true },
+    // Accounts come only from invitations and homeowner links (server-side), so open sign-up is off: it answers the
+    // same 400 for every address instead of telling which ones exist.
+    emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: PASSWORD_MIN_LENGTH, maxPasswordLength: PASSWORD_MAX_LENGTH, autoSignIn: true },
     plugins: [links.plugin],
-    hooks: { before: links.beforeHook },
+    hooks: {
+      before: createAuthMiddleware(async (ctx) => (await passwords.before(ctx)) ?? links.beforeHook(ctx)),
+      after: createAuthMiddleware(async (ctx) => passwords.after(ctx)),
+    },
     databaseHooks: links.databaseHooks,
     session: {
       expiresIn: 60 * 60 * 24 * 14,

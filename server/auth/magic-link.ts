@@ -1,5 +1,4 @@
 import { z } from 'zod';
-import { createAuthMiddleware } from 'better-auth/api';
 import { magicLink } from 'better-auth/plugins';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
@@ -46,13 +45,14 @@ export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
     },
   });
 
-  const beforeHook = createAuthMiddleware(async (ctx) => {
+  /** Run from auth.ts's `hooks.before`. */
+  const beforeHook = async (ctx: { path?: string; body?: unknown; json: (body: { status: boolean }) => unknown }) => {
     if (ctx.path !== SIGN_IN_PATH) return;
     const parsed = requestBody.safeParse(ctx.body);
     if (!parsed.success) return; // the endpoint itself answers 400
     if (await mayReceiveLink(parsed.data.email)) return;
     return ctx.json({ status: true });
-  });
+  };
 
   const databaseHooks = {
     user: {

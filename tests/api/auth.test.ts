@@ -1,10 +1,12 @@
-import request from 'supertest';
 import { eq } from 'drizzle-orm';
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../support/context';
+import { uniqueEmail } from '../support/outbox';
 import { createTenant, signIn, type Tenant } from '../support/tenant';
-import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
-import { sessions } from '../../server/db/schema/index';
+import { DEFAULT_TEST_PASSWORD, insertMember } from '../../server/db/factories/users';
+import { sessions, signInThrottle, users } from '../../server/db/schema/index';
+import { createSignInThrottle } from '../../server/auth/sign-in-throttle';
 
 const { app, ctx } = testApp();
 let t: Tenant;
@@ -89,7 +91,7 @@ describe('a session ended while its cookie still caches it (better-auth keeps it
 
 describe('sign-in rate limit', () => {
   it('answers 429 once an address passes the limit, counting in the database', async () => {
-    const limited = testApp({ SIGN_IN_RATE_LIMIT: '3', TRUST_PROXY: 'true' });
+    const limited = testApp({ SIGN_IN_RATE_LIMIT: '3', TRUST_PROXY: 'loopback' });
     try {
       // A client address of its own, so other test files' sign-ins do not count against it.
       const ip = `203.0.113.${Math.floor(Math.random() * 200) + 1}`;
@@ -108,3 +110,103 @@ describe('sign-in rate limit', () => {
     }
   });
 });
+
+describe('open sign-up', () => {
+  it('is off, and answers the same for a known and a new address, creating nobody', async () => {
+    const fresh = uniqueEmail();
+    const answers = [];
+    for (const email of [t.owner.user.email, fresh]) {
+      const res = await request(app).post('/api/auth/sign-up/email').send({ email, password: 'brass valve under the stairs', name: 'Someone' });
+      answers.push({ status: res.status, body: res.body });
+    }
+    expect(answers[0]).toEqual(answers[1]);
+    expect(answers[0].status).toBe(400);
+    expect(answers[0].body.code).toBe('EMAIL_PASSWORD_SIGN_UP_DISABLED');
+    expect(await ctx.db.select().from(users).where(eq(users.email, fresh))).toHaveLength(0);
+  });
+});
+
+describe('per-address sign-in limit', () => {
+  // Forged X-Forwarded-For addresses, believed here (TRUST_PROXY=loopback), so the per-client limit never bites.
+  const proxied = testApp({ TRUST_PROXY: 'loopback' });
+  afterAll(() => proxied.ctx.pool.end());
+  const forged = (i: number) => `198.51.100.${i + 1}`;
+
+  async function thirtyWrongThenRight(email: string, password: string) {
+    const statuses: number[] = [];
+    for (let i = 0; i < 30; i++) {
+      const res = await request(proxied.app).post('/api/auth/sign-in/email').set('X-Forwarded-For', forged(i)).send({ email, password: `wrong-password-${i}` });
+      statuses.push(res.status);
+    }
+    const right = await request(proxied.app).post('/api/auth/sign-in/email').set('X-Forwarded-For', forged(30)).send({ email, password });
+    return { statuses, right };
+  }
+
+  it('refuses the right password after 30 wrong ones from 30 addresses, and says when to try again', async () => {
+    const { user } = await insertMember(ctx.db, { companyId: t.company.id, role: 'technician' });
+    const { statuses, right } = await thirtyWrongThenRight(user.email, DEFAULT_TEST_PASSWORD);
+    expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
+    expect(new Set(statuses.slice(5))).toEqual(new Set([429]));
+    expect(right.status).toBe(429);
+    expect(right.body).toMatchObject({ code: 'too_many_attempts', message: expect.stringMatching(/Try again in a minute, or e-mail yourself a sign-in link/) });
+    expect(Number(right.headers['retry-after'])).toBeGreaterThan(0);
+    expect(Number(right.headers['retry-after'])).toBeLessThanOrEqual(60);
+    expect(right.headers['set-cookie']).toBeUndefined();
+  });
+
+  it('answers an address nobody has exactly as a real one', async () => {
+    const { statuses, right } = await thirtyWrongThenRight(uniqueEmail(), DEFAULT_TEST_PASSWORD);
+    expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
+    expect(new Set(statuses.slice(5))).toEqual(new Set([429]));
+    expect(right.status).toBe(429);
+  });
+
+  it('lets the right password in once the lock is over, and a sign-in clears the count', async () => {
+    const { user } = await insertMember(ctx.db, { companyId: t.company.id, role: 'technician' });
+    await thirtyWrongThenRight(user.email, DEFAULT_TEST_PASSWORD);
+    const key = createSignInThrottle(ctx.db, ctx.config.BETTER_AUTH_SECRET).keyOf(user.email);
+    // The lock's minute has passed.
+    await ctx.db.update(signInThrottle).set({ lockedUntil: new Date(Date.now() - 1000) }).where(eq(signInThrottle.key, key));
+    const res = await request(proxied.app).post('/api/auth/sign-in/email').send({ email: user.email.toUpperCase(), password: DEFAULT_TEST_PASSWORD });
+    expect(res.status).toBe(200);
+    expect(await ctx.db.select().from(signInThrottle).where(eq(signInThrottle.key, key))).toHaveLength(0);
+  });
+});
+
+describe('forwarded client addresses', () => {
+  it('are not believed unless TRUST_PROXY names a proxy', async () => {
+    const { user } = await insertMember(ctx.db, { companyId: t.company.id, role: 'technician' });
+    await request(app).post('/api/auth/sign-in/email').set('X-Forwarded-For', '203.0.113.77').send({ email: user.email, password: DEFAULT_TEST_PASSWORD }).expect(200);
+    const proxied = testApp({ TRUST_PROXY: 'loopback' });
+    try {
+      await request(proxied.app).post('/api/auth/sign-in/email').set('X-Forwarded-For', '203.0.113.78').send({ email: user.email, password: DEFAULT_TEST_PASSWORD }).expect(200);
+    } finally {
+      await proxied.ctx.pool.end();
+    }
+    const seen = (await ctx.db.select({ ip: sessions.ipAddress }).from(sessions).where(eq(sessions.userId, user.id))).map((s) => s.ip);
+    expect(seen).toHaveLength(2);
+    expect(seen).toContain('203.0.113.78');
+    expect(seen).not.toContain('203.0.113.77');
+  });
+});
+
+describe('new passwords', () => {
+  it('refuses a short or common one with a field error, and takes a long uncommon one', async () => {
+    const { user } = await insertMember(ctx.db, { companyId: t.company.id, role: 'technician' });
+    const agent = await signIn(app, user.email);
+    for (const [newPassword, why] of [
+      ['1234567890', /at least 12 characters/],
+      ['password1234', /most common passwords/],
+    ] as const) {
+      const res = await agent.post('/api/auth/change-password').send({ currentPassword: DEFAULT_TEST_PASSWORD, newPassword });
+      expect(res.status).toBe(400);
+      expect(res.body.details.newPassword[0]).toMatch(why);
+    }
+    // Still the old password.
+    await signIn(app, user.email);
+    const ok = await agent.post('/api/auth/change-password').send({ currentPassword: DEFAULT_TEST_PASSWORD, newPassword: 'brass valve under the stairs' });
+    expect(ok.status).toBe(200);
+    await signIn(app, user.email, 'brass valve under the stairs');
+  });
+});
+

@@ -35,4 +35,10 @@ describe('parseConfig', () => {
     expect(parseConfig({ ...base, NODE_ENV: 'development', LOG_FORMAT: 'json' }).LOG_FORMAT).toBe('json');
     expect(() => parseConfig({ ...base, LOG_FORMAT: 'yaml' })).toThrow(/LOG_FORMAT: /);
   });
+
+  it('believes no X-Forwarded-For unless a proxy is named, and refuses `true`', () => {
+    expect(parseConfig(base).TRUST_PROXY).toBe('false');
+    expect(parseConfig({ ...base, TRUST_PROXY: '10.0.0.0/8' }).TRUST_PROXY).toBe('10.0.0.0/8');
+    expect(() => parseConfig({ ...base, TRUST_PROXY: 'true' })).toThrow(/TRUST_PROXY: name the proxy/);
+  });
 });

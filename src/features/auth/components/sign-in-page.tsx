@@ -36,7 +36,10 @@ export function SignInPage() {
     } catch (err) {
       const message =
         err instanceof ApiError && err.status === 429
-          ? 'Too many tries. Wait a minute, then try again.'
+          ? // The per-address lock says how long; the per-client limit does not.
+            err.code === 'too_many_attempts'
+            ? err.message
+            : 'Too many tries. Wait a minute, then try again.'
           : err instanceof ApiError && err.status === 401
             ? 'That e-mail and password do not match.'
             : err instanceof Error
