@@ -2,15 +2,20 @@ import type { IncomingMessage, ServerResponse } from 'node:http';
 import pino, { type DestinationStream, type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import pinoPretty from 'pino-pretty';
+import { errSerializer, redactUrl, reqSerializer, resSerializer } from './log-redaction';
 
 /** `json`: one object a line, for a log collector. `pretty`: short readable lines for a person at a terminal. */
 export type LogFormat = 'json' | 'pretty';
 
-const REDACT = ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'];
+const BASE = {
+  redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
+  // Failed queries are logged without the values they ran with (server/log-redaction.ts).
+  serializers: { err: errSerializer },
+};
 
 /** `destination` is stdout unless given (a test collects the lines). */
 export function createLogger(level: string, format: LogFormat = 'json', destination?: DestinationStream): Logger {
-  if (format === 'json') return destination ? pino({ level, redact: REDACT }, destination) : pino({ level, redact: REDACT });
+  if (format === 'json') return destination ? pino({ level, ...BASE }, destination) : pino({ level, ...BASE });
   const pretty = pinoPretty({
     destination: destination ?? 1,
     sync: true,
@@ -19,12 +24,12 @@ export function createLogger(level: string, format: LogFormat = 'json', destinat
     ignore: 'pid,hostname,reqId',
     singleLine: true,
   });
-  return pino({ level, redact: REDACT }, pretty);
+  return pino({ level, ...BASE }, pretty);
 }
 
 const failed = (res: ServerResponse, err?: Error) => Boolean(err) || res.statusCode >= 500;
 const requestLine = (req: IncomingMessage, res: ServerResponse, ms?: number) =>
-  `${req.method} ${(req as IncomingMessage & { originalUrl?: string }).originalUrl ?? req.url} ${res.statusCode}${ms === undefined ? '' : ` ${ms} ms`}`;
+  `${req.method} ${redactUrl((req as IncomingMessage & { originalUrl?: string }).originalUrl ?? req.url ?? '')} ${res.statusCode}${ms === undefined ? '' : ` ${ms} ms`}`;
 
 /**
  * One log entry per request; a failed one (5xx) at error level. In JSON, at info with the request and response
@@ -33,12 +38,23 @@ const requestLine = (req: IncomingMessage, res: ServerResponse, ms?: number) =>
  */
 export function requestLogger(logger: Logger, format: LogFormat) {
   const ignore = (req: IncomingMessage) => req.url === '/api/health';
-  if (format === 'json') {
-    return pinoHttp({ logger, autoLogging: { ignore }, customLogLevel: (_req, res, err) => (failed(res, err) ? 'error' : 'info') });
-  }
-  return pinoHttp({
+  const common = {
     logger,
     autoLogging: { ignore },
+    // Unwrapped, so each serializer gets the raw object: a wrapped error serializer would see it already serialized.
+    wrapSerializers: false,
+    // Capability tokens are redacted from the URLs, Referer and Location (server/log-redaction.ts).
+    serializers: {
+      req: (req: IncomingMessage) => reqSerializer(pino.stdSerializers.req(req)),
+      res: (res: ServerResponse) => resSerializer(pino.stdSerializers.res(res)),
+      err: errSerializer,
+    },
+  };
+  if (format === 'json') {
+    return pinoHttp({ ...common, customLogLevel: (_req, res, err) => (failed(res, err) ? 'error' : 'info') });
+  }
+  return pinoHttp({
+    ...common,
     quietReqLogger: true,
     quietResLogger: true,
     customLogLevel: (_req, res, err) => (failed(res, err) ? 'error' : 'debug'),

@@ -61,7 +61,11 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
     // answers 503 for an outage; without this the router answered a bare 500 and wrote to console.error.
     onAPIError: { throw: true },
     telemetry: { enabled: false },
-    logger: { disabled: config.LOG_LEVEL === 'silent' },
+    logger: {
+      disabled: config.LOG_LEVEL === 'silent',
+      // Into the app's own log, where an error loses the values its query ran with (server/log-redaction.ts).
+      log: (level, message, ...args) => deps.logger[level]({ err: args.find((a) => a instanceof Error) }, message),
+    },
   });
 }
 

@@ -7,7 +7,7 @@ import { invitationsRepository as repo } from '../modules/invitations/invitation
 import { invitationMail, signInMail } from '../modules/invitations/invitation-mail';
 import { SIGN_IN_LINK_HOURS } from '../../shared/schemas/invitations';
 
-export type MagicLinkDeps = { mail: Pick<MailQueue, 'send'>; logger: Pick<Logger, 'error'> };
+export type MagicLinkDeps = { mail: Pick<MailQueue, 'send'>; logger: Pick<Logger, 'debug' | 'info' | 'warn' | 'error'> };
 
 const SIGN_IN_PATH = '/sign-in/magic-link';
 const VERIFY_PATH = '/magic-link/verify';
