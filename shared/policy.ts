@@ -13,6 +13,8 @@ export const PERMISSIONS = {
   'reminders:send': ['owner', 'manager'],
   'team:manage': ['owner', 'manager'],
   'company:settings': ['owner'],
+  // The development outbox holds other people's sign-in and invitation links: whoever opens one is signed in as them.
+  'dev:outbox': ['owner'],
 } as const satisfies Record<string, readonly MemberRole[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

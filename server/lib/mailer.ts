@@ -7,8 +7,10 @@ export const COMPANY_MAIL_HEADER = 'X-Lifeplate-Company';
 export type Mail = { to: string; subject: string; text: string; html: string; headers?: Record<string, string> };
 
 /** Mail over real SMTP; in development and tests the host is the local fake, which offers no TLS. */
+export const isLoopbackHost = (host: string) => ['127.0.0.1', 'localhost', '::1'].includes(host);
+
 export function createMailer(config: Pick<AppConfig, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_USER' | 'SMTP_PASS' | 'SMTP_SECURE' | 'MAIL_FROM'>) {
-  const loopback = ['127.0.0.1', 'localhost', '::1'].includes(config.SMTP_HOST);
+  const loopback = isLoopbackHost(config.SMTP_HOST);
   const transport = nodemailer.createTransport({
     host: config.SMTP_HOST,
     port: config.SMTP_PORT,

@@ -22,8 +22,8 @@ export function AppShell() {
   const navigate = useNavigate();
   const [dim, setDim] = useDimMode();
   const principal = me.data?.principal;
-  // The development outbox exists only beside the local mail fake; /me says so.
-  const outbox = Boolean(me.data?.devOutbox) && can(principal, 'reminders:send');
+  // The development outbox exists only beside the local mail fake, for the owner; /me says so.
+  const outbox = Boolean(me.data?.devOutbox) && can(principal, 'dev:outbox');
   const newRequests = useNewServiceRequestCount(can(principal, 'records:read')).data ?? 0;
   const nav = [...navFor(principal), ...(outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [])];
   const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';

@@ -123,7 +123,7 @@ export function createAppRouter() {
         guardedPage('scan', 'records:read', async () => (await import('@/features/tags/components/scan-page')).ScanPage),
         guardedPage('tags', 'catalog:manage', async () => (await import('@/features/tags/components/tag-batches-page')).TagBatchesPage),
         guardedPage('service-requests', 'records:read', async () => (await import('@/features/service-requests/components/service-requests-page')).ServiceRequestsPage),
-        guardedPage('outbox', 'reminders:send', async () => (await import('@/features/reminders/components/outbox-page')).OutboxPage),
+        guardedPage('outbox', 'dev:outbox', async () => (await import('@/features/reminders/components/outbox-page')).OutboxPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         {
           path: 'my/:id',

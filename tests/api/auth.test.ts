@@ -22,8 +22,9 @@ describe('sign-in and sign-out', () => {
     expect(me.status).toBe(200);
     expect(me.body.principal).toEqual({ kind: 'member', userId: t.technician.user.id, companyId: t.company.id, role: 'technician' });
     expect(me.body.company.id).toBe(t.company.id);
-    // Tests run beside the SMTP fake, so members may open the development outbox.
-    expect(me.body.devOutbox).toBe(true);
+    // Tests run beside the SMTP fake, but only an owner may open the development outbox.
+    expect(me.body.devOutbox).toBe(false);
+    expect((await (await signIn(app, t.owner.user.email)).get('/api/me')).body.devOutbox).toBe(true);
   });
 
   it('knows a homeowner by their customer records, not as a member', async () => {

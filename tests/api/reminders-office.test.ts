@@ -128,20 +128,33 @@ describe('GET /api/reminders', () => {
 });
 
 describe('GET /api/dev/outbox', () => {
-  it('shows the company its own sent mail, parsed, and nobody else’s', async () => {
-    const res = await as.manager.get('/api/dev/outbox?limit=200');
+  it('shows the owner the company’s own sent mail, parsed, and nobody else’s', async () => {
+    const res = await as.owner.get('/api/dev/outbox?limit=200');
     expect(res.status).toBe(200);
     const ours = res.body.find((m: { to: string[] }) => m.to.includes(emails.lapsed));
     expect(ours).toMatchObject({ subject: expect.stringContaining(t.company.name), text: expect.stringContaining('yearly service') });
     expect(ours.html).toContain('Stop reminder e-mails');
     expect(res.body.some((m: { to: string[] }) => m.to.includes(emails.elsewhere))).toBe(false);
+    // Its invitation and sign-in links would sign a manager in as the invitee.
+    expect((await as.manager.get('/api/dev/outbox')).status).toBe(403);
     expect((await as.technician.get('/api/dev/outbox')).status).toBe(403);
+    expect((await as.homeowner.get('/api/dev/outbox')).status).toBe(403);
     expect((await as.anonymous.get('/api/dev/outbox')).status).toBe(401);
+    expect((await as.owner.get('/api/me')).body.devOutbox).toBe(true);
+    expect((await as.manager.get('/api/me')).body.devOutbox).toBe(false);
   });
 
   it('does not exist without the local SMTP fake', async () => {
     const plain = createApp({ ...ctx, config: { ...ctx.config, FAKE_SMTP_OUTBOX: undefined } });
-    const manager = await signIn(plain, t.manager.user.email);
-    expect((await manager.get('/api/dev/outbox')).status).toBe(404);
+    const owner = await signIn(plain, t.owner.user.email);
+    expect((await owner.get('/api/dev/outbox')).status).toBe(404);
+    expect((await owner.get('/api/me')).body.devOutbox).toBe(false);
+  });
+
+  it('does not exist when mail goes to a real server, even with the fake’s folder set', async () => {
+    const real = createApp({ ...ctx, config: { ...ctx.config, SMTP_HOST: 'mail.example.test' } });
+    const owner = await signIn(real, t.owner.user.email);
+    expect((await owner.get('/api/dev/outbox')).status).toBe(404);
+    expect((await owner.get('/api/me')).body.devOutbox).toBe(false);
   });
 });

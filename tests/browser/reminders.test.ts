@@ -20,7 +20,8 @@ describe('reminder e-mails on screen', () => {
 
     const office = await fx.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await office.newPage();
-    await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
+    // The owner: only they may open the development outbox.
+    await signInAsMember(page, fx.server.baseUrl, fx.t.owner.user.email);
     await page.goto(`${fx.server.baseUrl}/due`);
     const row = page.locator('tr', { hasText: owner.name }).first();
     await row.getByRole('button', { name: 'Send reminder' }).click();
@@ -31,6 +32,7 @@ describe('reminder e-mails on screen', () => {
 
     await page.getByRole('link', { name: 'Outbox (dev)' }).click();
     await page.getByRole('heading', { name: 'Outbox (development)' }).waitFor();
+    await page.getByText('These links sign you in as someone else').waitFor();
     const message = page.locator('section', { hasText: owner.email! }).first();
     await message.getByText('yearly service was due', { exact: false }).first().waitFor({ state: 'attached' });
     const frame = message.locator('iframe');

@@ -2,6 +2,8 @@ import type { Response } from 'express';
 import type { AppContext } from '../../context';
 import { companyRepository } from '../company/company.repository';
 import type { MeDto } from '../../../shared/schemas/me';
+import { can } from '../../../shared/policy';
+import { devOutboxEnabled } from '../reminders/outbox.routes';
 
 /** Who the request's session is, as GET /api/me answers it (also embedded in the HTML of the record). */
 export async function describeMe(ctx: AppContext, res: Response): Promise<MeDto | { user: null }> {
@@ -15,6 +17,6 @@ export async function describeMe(ctx: AppContext, res: Response): Promise<MeDto 
     company: company
       ? { id: company.id, name: company.name, phone: company.phone, timeZone: company.timeZone, underFiringTolerancePct: company.underFiringTolerancePct }
       : null,
-    devOutbox: Boolean(ctx.config.FAKE_SMTP_OUTBOX) && Boolean(principal && principal.kind === 'member'),
+    devOutbox: devOutboxEnabled(ctx.config) && can(principal, 'dev:outbox'),
   };
 }

@@ -8,6 +8,10 @@ export function OutboxPage() {
   const outbox = useOutbox();
   return (
     <Page title="Outbox (development)" subtitle="E-mail caught by the local mail fake. Nothing here reached a real inbox.">
+      <Notice kind="danger" title="These links sign you in as someone else">
+        Invitation and sign-in e-mails here carry one-time links. Opening one signs this browser in as the person it was sent to and uses up their
+        link. Use them only to try out demo accounts.
+      </Notice>
       {outbox.isPending ? (
         <Spinner />
       ) : outbox.error ? (
