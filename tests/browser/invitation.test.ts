@@ -28,7 +28,7 @@ describe('invitation by e-mail', () => {
     await desk.getByLabel('E-mail').fill(email);
     await desk.getByLabel('Role', { exact: true }).selectOption('technician');
     await desk.getByRole('button', { name: 'Send invitation' }).click();
-    await desk.getByText(`An e-mail is on its way to ${email}.`).waitFor();
+    await desk.getByText(`An e-mail with a sign-in link is on its way to ${email}.`).waitFor();
     await desk.getByRole('heading', { name: 'Waiting to join' }).waitFor();
     await desk.getByText(email, { exact: true }).waitFor();
     await desk.screenshot({ path: path.join(screenshotDir(), 'team-invitations.png'), fullPage: true });
