@@ -24,7 +24,7 @@ const sink = new Writable({
   },
 });
 const logger = createLogger('info', 'json', sink);
-const ctx = buildContext(testConfig({ LOG_LEVEL: 'info' }), { logger });
+const ctx = buildContext(testConfig({ LOG_LEVEL: 'info', LOG_FORMAT: 'json' }), { logger });
 const app = createApp(ctx);
 const log = () => lines.join('');
 
