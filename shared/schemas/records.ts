@@ -25,6 +25,7 @@
 import { z } from 'zod';
 import * as E from './enums';
 import { isoDate, optionalText, requiredText } from './common';
+import { READING_KEYS } from './visits';
 
 const optionalInt = (label: string, min: number, max: number) =>
   z.coerce
@@ -242,9 +243,12 @@ export const checklistItemTemplate = z.object({
   caution: optionalText(500).transform((v) => v ?? undefined),
   readings: z.array(z.string().max(60)).max(20).optional(),
 });
+/** Per visit type, readings a visit must record or skip with a reason; each must be one an item records. Kept when not sent. */
+export const requiredReadingsInput = z.partialRecord(z.enum(E.VISIT_TYPES), z.array(z.enum(READING_KEYS, 'Not a reading of this form.')).max(20));
 export const checklistTemplateInput = z.object({
   name: requiredText('Name', 120),
   items: z.array(checklistItemTemplate).min(1, 'A checklist needs at least one item.').max(120),
+  requiredReadings: requiredReadingsInput.optional(),
 });
 export type ChecklistTemplateDto = {
   id: string;
@@ -252,5 +256,6 @@ export type ChecklistTemplateDto = {
   applianceKind: E.ApplianceKind;
   fuel: E.Fuel | null;
   items: z.output<typeof checklistItemTemplate>[];
+  requiredReadings: z.output<typeof requiredReadingsInput>;
   updatedAt: string;
 };

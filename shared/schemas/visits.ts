@@ -5,7 +5,7 @@
  *   GET  /visits/:id                    VisitDto  records:read
  *   PUT  /visits/:id/draft              VisitDto  visits:record  (autosave; 409 once completed)
  *   POST /visits/:id/swaps              VisitDto  visits:record  (part swap: old component removed today, new one installed)
- *   POST /visits/:id/complete           VisitDto  visits:record  (400 with details.outcome when an outcome is required)
+ *   POST /visits/:id/complete           VisitDto  visits:record  (400 with details per missing thing: shared/visits/completion-requirements.ts)
  *   POST /visits/:id/amendments         VisitDto  visits:amend-any, or visits:amend-own for the visit's own technician
  *
  * Readings are stored in one canonical unit each (°F, in. w.c., psi, mV, ppm, %); the client converts at the edge.
@@ -14,19 +14,31 @@
 import { z } from 'zod';
 import * as E from './enums';
 import { isoDate, optionalText } from './common';
+import { FLUE_TEMP_PLAUSIBLE_F, FLUE_TEMP_RANGE_MESSAGE, flueBelowAirMessage, isFlueBelowCombustionAir } from '../trade/plausible-readings';
 
 const n = (label: string, min: number, max: number) =>
   z.number(`${label} must be a number.`).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`);
 
-export const combustionReadings = z.object({
+const combustionFields = z.object({
   o2Pct: n('O2', 0, 20.8),
   coPpm: n('CO', 0, 100_000),
-  flueTempF: n('Flue temperature', -40, 1500),
+  flueTempF: z.number('Flue temperature must be a number.').min(FLUE_TEMP_PLAUSIBLE_F.min, FLUE_TEMP_RANGE_MESSAGE).max(FLUE_TEMP_PLAUSIBLE_F.max, FLUE_TEMP_RANGE_MESSAGE),
   airTempF: n('Combustion-air temperature', -40, 200),
   draftInWc: n('Draft', -2, 2).nullish(),
   ambientCoPpm: n('Ambient CO', 0, 10_000).nullish(),
   spillageSeconds: n('Spillage time', 0, 3600).nullish(),
   steadyFiringMinutes: n('Minutes of steady firing', 0, 240).nullish(),
+});
+
+/** Refused as impossible, not just unusual: see shared/trade/plausible-readings.ts. */
+const flueInRange = (f: number) => f >= FLUE_TEMP_PLAUSIBLE_F.min && f <= FLUE_TEMP_PLAUSIBLE_F.max;
+// An out-of-range flue already has its message; comparing it with the air would only add a second one.
+export const combustionReadings = combustionFields.refine((c) => !flueInRange(c.flueTempF) || !isFlueBelowCombustionAir(c.flueTempF, c.airTempF), {
+  path: ['flueTempF'],
+  error: (issue) => {
+    const c = issue.input as { flueTempF: number; airTempF: number };
+    return flueBelowAirMessage(c.flueTempF, c.airTempF);
+  },
 });
 
 export const readingsInput = z
@@ -43,7 +55,7 @@ export const readingsInput = z
     gaugeGlassLevel: z.string().trim().max(20).nullish(),
     lowWaterCutoff: z
       .object({
-        type: z.enum(['float', 'probe']),
+        type: z.enum(['float', 'probe'], 'Say whether the cutoff is a float or a probe type.'),
         trippedAtLevel: z.string().trim().max(20).nullish(),
         burnerStopped: z.boolean('Say whether the burner stopped.'),
       })
@@ -67,6 +79,12 @@ export const readingsInput = z
   })
   .strict();
 export type ReadingsInput = z.infer<typeof readingsInput>;
+export type ReadingKey = keyof ReadingsInput;
+export const READING_KEYS = Object.keys(readingsInput.shape) as [ReadingKey, ...ReadingKey[]];
+
+/** Required readings not taken, each with the reason ('' until one is typed; completing then asks for it). */
+export const readingSkipsInput = z.partialRecord(z.enum(READING_KEYS, 'Not a reading of this form.'), z.string().trim().max(500, 'At most 500 characters.'));
+export type ReadingSkips = z.infer<typeof readingSkipsInput>;
 
 export const checklistEntryInput = z.object({
   key: z.string().max(60),
@@ -94,6 +112,8 @@ export const visitDraftInput = z
     revision: z.number().int().min(0),
     checklist: z.array(checklistEntryInput).max(200).optional(),
     readings: readingsInput.optional(),
+    /** Replaces the stored skips when sent. */
+    readingSkips: readingSkipsInput.optional(),
     findings: z.string().max(8000).optional(),
     recommendations: z.string().max(8000).optional(),
     internalNotes: z.string().max(8000).optional(),
@@ -138,6 +158,9 @@ export type VisitDto = {
   departedAt: string | null;
   checklist: ChecklistItemDto[];
   readings: ReadingsInput;
+  /** Readings the checklist template requires on this type of visit, copied when the visit started. */
+  requiredReadings: ReadingKey[];
+  readingSkips: ReadingSkips;
   /** Computed by the server from shared/trade; never trusted from the client. */
   results: Record<string, unknown>;
   /** True when a failed low-water cutoff test or a stop flag means an outcome must be chosen before completing. */

@@ -9,6 +9,8 @@ export * from './siegert';
 export * from './combustion-flags';
 export * from './combustion';
 export * from './gas-input';
+export * from './gas-input-rating-flag';
+export * from './plausible-readings';
 export * from './makeup-water';
 export * from './gauge-glass';
 export * from './thermocouple';

@@ -184,6 +184,9 @@ export type ChecklistItemTemplate = {
   readings?: string[];
 };
 
+/** Per visit type, the readings a visit must have (or skip with a reason) before it is completed. */
+export type RequiredReadingsByVisitType = Partial<Record<E.VisitType, string[]>>;
+
 export type ChecklistItemRecord = ChecklistItemTemplate & {
   mark: E.CheckMark | null;
   note: string;
@@ -198,6 +201,7 @@ export const checklistTemplates = pgTable(
     applianceKind: applianceKind('appliance_kind').notNull(),
     fuel: fuel('fuel'),
     items: jsonb('items').$type<ChecklistItemTemplate[]>().notNull(),
+    requiredReadings: jsonb('required_readings').$type<RequiredReadingsByVisitType>().notNull().default({}),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     updatedBy: updatedBy(),
@@ -221,6 +225,9 @@ export const visits = pgTable(
     departedAt: timestamp('departed_at', { withTimezone: true }),
     checklist: jsonb('checklist').$type<ChecklistItemRecord[]>().notNull().default([]),
     readings: jsonb('readings').$type<Record<string, unknown>>().notNull().default({}),
+    /** Copied from the template when the visit starts, like the checklist, so a later template edit changes no visit. */
+    requiredReadings: jsonb('required_readings').$type<string[]>().notNull().default([]),
+    readingSkips: jsonb('reading_skips').$type<Record<string, string>>().notNull().default({}),
     results: jsonb('results').$type<Record<string, unknown>>().notNull().default({}),
     findings: text('findings').notNull().default(''),
     recommendations: text('recommendations').notNull().default(''),

@@ -1,6 +1,6 @@
 import { and, asc, eq, isNull, or, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { checklistTemplates, type ChecklistItemTemplate } from '../../db/schema/index';
+import { checklistTemplates, type ChecklistItemTemplate, type RequiredReadingsByVisitType } from '../../db/schema/index';
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 
 export type ChecklistTemplateRow = typeof checklistTemplates.$inferSelect;
@@ -30,7 +30,7 @@ export const checklistsRepository = {
       .where(eq(checklistTemplates.companyId, companyId))
       .orderBy(asc(checklistTemplates.applianceKind), sql`${checklistTemplates.fuel} nulls first`, asc(checklistTemplates.name));
   },
-  async update(db: DbOrTx, companyId: string, id: string, values: { name: string; items: ChecklistItemTemplate[]; updatedBy: string }) {
+  async update(db: DbOrTx, companyId: string, id: string, values: { name: string; items: ChecklistItemTemplate[]; requiredReadings?: RequiredReadingsByVisitType; updatedBy: string }) {
     const [row] = await db
       .update(checklistTemplates)
       .set(values)

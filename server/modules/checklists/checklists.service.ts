@@ -4,6 +4,7 @@ import { notFound, validationFailed } from '../../lib/http-error';
 import type { checklistTemplateInput, ChecklistTemplateDto } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
 import { readingsInput } from '../../../shared/schemas/visits';
+import { READING_LABELS } from '../../../shared/visits/reading-labels';
 import { recordAudit } from '../audit/audit.repository';
 import { checklistsRepository, type ChecklistTemplateRow } from './checklists.repository';
 
@@ -18,6 +19,7 @@ export const toChecklistTemplateDto = (r: ChecklistTemplateRow): ChecklistTempla
   applianceKind: r.applianceKind,
   fuel: r.fuel,
   items: r.items.map((i) => ({ ...i, caution: i.caution })),
+  requiredReadings: r.requiredReadings as ChecklistTemplateDto['requiredReadings'],
   updatedAt: r.updatedAt.toISOString(),
 });
 
@@ -31,6 +33,13 @@ function checkItems(input: TemplateInput) {
     const unknown = (item.readings ?? []).filter((r) => !READING_KEYS.has(r));
     if (unknown.length) errors[`items.${i}.readings`] = [`Unknown reading: ${unknown.join(', ')}.`];
   });
+  const recorded = new Set(input.items.flatMap((i) => i.readings ?? []));
+  for (const [type, keys] of Object.entries(input.requiredReadings ?? {})) {
+    const unrecorded = (keys ?? []).filter((k) => !recorded.has(k));
+    if (unrecorded.length) {
+      errors[`requiredReadings.${type}`] = [`No item records ${unrecorded.map((k) => READING_LABELS[k].toLowerCase()).join(', ')}: add it to an item's readings first.`];
+    }
+  }
   if (Object.keys(errors).length) throw validationFailed(errors);
 }
 
@@ -47,7 +56,12 @@ export function checklistsService(ctx: AppContext) {
           ...(caution ? { caution } : {}),
           ...(readings?.length ? { readings } : {}),
         }));
-        const row = await checklistsRepository.update(tx, actor.companyId, id, { name: input.name, items, updatedBy: actor.userId });
+        const row = await checklistsRepository.update(tx, actor.companyId, id, {
+          name: input.name,
+          items,
+          ...(input.requiredReadings ? { requiredReadings: input.requiredReadings } : {}),
+          updatedBy: actor.userId,
+        });
         if (!row) throw notFound('Checklist');
         await recordAudit(tx, {
           companyId: actor.companyId,
@@ -55,7 +69,7 @@ export function checklistsService(ctx: AppContext) {
           action: 'update',
           entity: 'checklist_template',
           entityId: id,
-          changes: { name: input.name, itemKeys: items.map((i) => i.key) },
+          changes: { name: input.name, itemKeys: items.map((i) => i.key), ...(input.requiredReadings ? { requiredReadings: input.requiredReadings } : {}) },
         });
         return toChecklistTemplateDto(row);
       });

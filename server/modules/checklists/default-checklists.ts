@@ -1,4 +1,4 @@
-import type { ChecklistItemTemplate } from '../../db/schema/index';
+import type { ChecklistItemTemplate, RequiredReadingsByVisitType } from '../../db/schema/index';
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 
 /**
@@ -197,7 +197,14 @@ const oilBurner: Item[] = [
   },
 ];
 
-export type DefaultChecklist = { name: string; applianceKind: ApplianceKind; fuel: Fuel | null; items: Item[] };
+export type DefaultChecklist = { name: string; applianceKind: ApplianceKind; fuel: Fuel | null; items: Item[]; requiredReadings: RequiredReadingsByVisitType };
+
+/**
+ * common practice: an annual service of a fired boiler includes a combustion test with an analyzer, and a steam
+ * boiler's includes a test that the low-water cutoff stops the burner. A visit records them or says why not.
+ */
+const FIRED_ANNUAL: RequiredReadingsByVisitType = { annual_maintenance: ['combustion'] };
+const STEAM_ANNUAL: RequiredReadingsByVisitType = { annual_maintenance: ['combustion', 'lowWaterCutoff'] };
 
 /** Gas templates carry fuel null: they serve natural gas and propane; the oil-specific template wins for oil. */
 export const DEFAULT_CHECKLISTS: DefaultChecklist[] = [
@@ -206,24 +213,28 @@ export const DEFAULT_CHECKLISTS: DefaultChecklist[] = [
     applianceKind: 'steam_boiler',
     fuel: null,
     items: [...steamWaterSide, ...gasBurner, ...combustionAndVenting(GAS_VENT), ...steamSystem],
+    requiredReadings: STEAM_ANNUAL,
   },
   {
     name: 'Hot-water boiler, gas-fired: annual maintenance',
     applianceKind: 'hot_water_boiler',
     fuel: null,
     items: [...hotWaterSide, ...gasBurner, ...combustionAndVenting(GAS_VENT)],
+    requiredReadings: FIRED_ANNUAL,
   },
   {
     name: 'Steam boiler, oil-fired: annual maintenance',
     applianceKind: 'steam_boiler',
     fuel: 'oil_no2',
     items: [...steamWaterSide, ...oilBurner, ...combustionAndVenting(OIL_VENT), ...steamSystem],
+    requiredReadings: STEAM_ANNUAL,
   },
   {
     name: 'Hot-water boiler, oil-fired: annual maintenance',
     applianceKind: 'hot_water_boiler',
     fuel: 'oil_no2',
     items: [...hotWaterSide, ...oilBurner, ...combustionAndVenting(OIL_VENT)],
+    requiredReadings: FIRED_ANNUAL,
   },
 ];
 

@@ -7,8 +7,9 @@ import { recordAudit } from '../audit/audit.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
 import { companyToday } from '../due/company-today';
 import { recomputeDueForAppliance } from '../due/due.repository';
-import { mergeChecklist, mergeReadings, outcomeErrors } from './visit-draft';
-import { computeVisitResults, isOutcomeRequired } from './visit-results';
+import { alertsOf, outcomeRequirements, requirementDetails } from '../../../shared/visits/completion-requirements';
+import { mergeChecklist, mergeReadings } from './visit-draft';
+import { computeVisitResults, type VisitResults } from './visit-results';
 import type { Member } from './visit-lock';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
@@ -49,9 +50,10 @@ export async function amendVisit(tx: Tx, actor: Member, visitId: string, input: 
       outcomeReason: o.outcomeReason === undefined ? visit.outcomeReason : o.outcomeReason,
       outcomeToldWhom: o.outcomeToldWhom === undefined ? visit.outcomeToldWhom : o.outcomeToldWhom,
     };
-    const results = (changes.results ?? visit.results) as Parameters<typeof isOutcomeRequired>[0];
-    const errors = outcomeErrors(merged, isOutcomeRequired(results), 'outcome.');
-    if (Object.keys(errors).length) throw validationFailed(errors);
+    const results = (changes.results ?? visit.results) as Partial<VisitResults>;
+    const alerts = alertsOf({ flags: results.flags ?? [], lowWaterCutoffFailed: results.lowWaterCutoff?.passed === false });
+    const missing = outcomeRequirements(merged, alerts, 'outcome.');
+    if (missing.length) throw validationFailed(requirementDetails(missing));
   }
 
   if (swapCorrections?.length) changes.swaps = await correctSwaps(tx, actor, visit, swapCorrections);

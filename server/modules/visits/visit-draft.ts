@@ -60,6 +60,7 @@ export async function mergeDraft(
     if (input[key] !== undefined) patch[key] = input[key];
   }
   if (input.customerAckName !== undefined) patch.customerAckName = input.customerAckName;
+  if (input.readingSkips !== undefined) patch.readingSkips = input.readingSkips as Record<string, string>;
   if (input.departedAt !== undefined) patch.departedAt = input.departedAt ? new Date(input.departedAt) : null;
   if (input.outcome !== undefined) patch.outcome = input.outcome;
   if (input.outcomeReason !== undefined) patch.outcomeReason = input.outcomeReason;
@@ -68,23 +69,4 @@ export async function mergeDraft(
 
   const changedFields = Object.keys(input).filter((k) => k !== 'revision' && input[k as keyof DraftFields] !== undefined);
   return { patch, results, changedFields };
-}
-
-/** Outcome rules for signing off: a required outcome must be chosen, and "shut down as unsafe" says why and who was told. */
-export function outcomeErrors(
-  v: { outcome: VisitRow['outcome']; outcomeReason: string | null; outcomeToldWhom: string | null },
-  outcomeRequired: boolean,
-  prefix = '',
-): Record<string, string[]> {
-  const errors: Record<string, string[]> = {};
-  if (outcomeRequired && !v.outcome) {
-    errors[`${prefix}outcome`] = [
-      'Choose the outcome: the low-water cutoff did not stop the burner or a reading calls for a stop, so say whether the appliance was left operating or shut down as unsafe.',
-    ];
-  }
-  if (v.outcome === 'shut_down_unsafe') {
-    if (!v.outcomeReason) errors[`${prefix}outcomeReason`] = ['Say why the appliance was shut down.'];
-    if (!v.outcomeToldWhom) errors[`${prefix}outcomeToldWhom`] = ['Say who was told it is shut down.'];
-  }
-  return errors;
 }

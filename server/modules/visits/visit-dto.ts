@@ -1,5 +1,5 @@
 import type { DbOrTx } from '../../db/client';
-import type { ReadingsInput, VisitDto } from '../../../shared/schemas/visits';
+import type { ReadingKey, ReadingsInput, VisitDto } from '../../../shared/schemas/visits';
 import { typeLabelFor } from '../due/type-label';
 import { isOutcomeRequired, type VisitResults } from './visit-results';
 import { visitsRepository, type VisitRow } from './visits.repository';
@@ -26,6 +26,8 @@ export async function loadVisitDto(db: DbOrTx, companyId: string, visit: VisitRo
     departedAt: iso(visit.departedAt),
     checklist: visit.checklist,
     readings: visit.readings as ReadingsInput,
+    requiredReadings: visit.requiredReadings as ReadingKey[],
+    readingSkips: visit.readingSkips,
     results: visit.results,
     outcomeRequired: isOutcomeRequired(results),
     findings: visit.findings,

@@ -9,6 +9,7 @@ import {
   type RatingComparison,
   parseGaugeGlassLevel,
   TradeInputError,
+  gasInputRatingFlag,
   type CombustionAnalysis,
   type GaugeGlassAssessment,
   type ThermocoupleAssessment,
@@ -89,7 +90,7 @@ export function computeVisitResults(readings: ReadingsInput, appliance: Applianc
         underFiringTolerancePct: appliance.underFiringTolerancePct ?? 100,
       });
       results.gasInput = { ...clocked, rating };
-      const flag = ratingFlag(rating, appliance.inputBtuh, appliance.underFiringTolerancePct ?? null);
+      const flag = gasInputRatingFlag(rating, appliance.inputBtuh, appliance.underFiringTolerancePct ?? null);
       if (flag) results.flags.push(flag);
     }
   }
@@ -110,32 +111,6 @@ export function computeVisitResults(readings: ReadingsInput, appliance: Applianc
 }
 
 const isNumber = (v: unknown): v is number => typeof v === 'number';
-
-function ratingFlag(rating: RatingComparison, ratedBtuh: number, tolerancePct: number | null): TradeFlag | null {
-  if (rating.status === 'over_fired') {
-    return {
-      code: 'gas_input_over_fired',
-      severity: 'warning',
-      message: `Clocked input is ${rating.deviationPct.toFixed(1)} % above the nameplate rating of ${ratedBtuh.toLocaleString('en-US')} Btu/h: over-firing is prohibited. Adjust to the manufacturer's instructions.`,
-      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
-      threshold: Math.round(rating.allowedBtuPerHour),
-      unit: 'Btu/h',
-      source: rating.source,
-    };
-  }
-  if (rating.status === 'under_fired' && tolerancePct !== null) {
-    return {
-      code: 'gas_input_under_fired',
-      severity: 'info',
-      message: `Clocked input is ${Math.abs(rating.deviationPct).toFixed(1)} % below the nameplate rating, more than the company's ${tolerancePct} % tolerance.`,
-      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
-      threshold: Math.round(rating.allowedBtuPerHour * (1 - tolerancePct / 100)),
-      unit: 'Btu/h',
-      source: 'company policy',
-    };
-  }
-  return null;
-}
 
 /** An outcome must be chosen when the low-water cutoff failed or any result says stop. */
 export function isOutcomeRequired(results: Partial<VisitResults>): boolean {

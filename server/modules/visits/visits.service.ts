@@ -7,14 +7,15 @@ import { recordAudit } from '../audit/audit.repository';
 import { companyToday } from '../due/company-today';
 import { recomputeDueForAppliance } from '../due/due.repository';
 import { appendCompletionEvents, applyFindingsToComponents } from './visit-completion';
-import { mergeDraft, outcomeErrors, type DraftFields } from './visit-draft';
+import { mergeDraft, type DraftFields } from './visit-draft';
 import { loadVisitDto } from './visit-dto';
-import { isOutcomeRequired } from './visit-results';
+import { assertCompletable } from './visit-sign-off';
 import { amendVisit, type AmendmentFields } from './visit-amendments';
 import { swapPart, type SwapFields } from './visit-swaps';
 import { visitsRepository, type VisitRow } from './visits.repository';
 import { lockDraft, type Member } from './visit-lock';
 import { findTemplateFor } from '../checklists/checklists.repository';
+import { requiredReadingsFor } from '../checklists/required-readings';
 
 type StartFields = z.output<typeof visitStartInput>;
 
@@ -29,7 +30,7 @@ export function visitsService(ctx: AppContext) {
       });
     }
     const { patch, results, changedFields } = await mergeDraft(tx, actor.companyId, visit, input, appliance);
-    return { visit, patch: { ...patch, revision: visit.revision + 1, updatedBy: actor.userId }, results, changedFields };
+    return { visit, appliance, patch: { ...patch, revision: visit.revision + 1, updatedBy: actor.userId }, results, changedFields };
   }
 
   return {
@@ -59,6 +60,7 @@ export function visitsService(ctx: AppContext) {
           technicianIds: [actor.userId],
           arrivedAt: input.arrivedAt ? new Date(input.arrivedAt) : new Date(),
           checklist: (template?.items ?? []).map((item) => ({ ...item, mark: null, note: '' })),
+          requiredReadings: requiredReadingsFor(template, input.type),
           createdBy: actor.userId,
           updatedBy: actor.userId,
         });
@@ -68,7 +70,7 @@ export function visitsService(ctx: AppContext) {
           action: 'start',
           entity: 'visit',
           entityId: created.id,
-          changes: { applianceId: appliance.id, type: input.type, templateId: template?.id ?? null },
+          changes: { applianceId: appliance.id, type: input.type, templateId: template?.id ?? null, requiredReadings: created.requiredReadings },
         });
         return created;
       });
@@ -95,10 +97,9 @@ export function visitsService(ctx: AppContext) {
     /** Saves the final fields, signs off, and writes everything the visit changed, all in one transaction. */
     async complete(actor: Member, visitId: string, input: DraftFields): Promise<VisitDto> {
       const completed = await ctx.db.transaction(async (tx) => {
-        const { visit, patch, results, changedFields } = await saveDraftIn(tx, actor, visitId, input);
+        const { visit, appliance, patch, results, changedFields } = await saveDraftIn(tx, actor, visitId, input);
         const merged = { ...visit, ...patch };
-        const errors = outcomeErrors(merged, isOutcomeRequired(results));
-        if (Object.keys(errors).length) throw validationFailed(errors);
+        assertCompletable(merged, results, appliance);
 
         const now = new Date();
         const row = await visitsRepository.updateVisit(tx, actor.companyId, visitId, {

@@ -1,0 +1,29 @@
+import type { RatingComparison } from './gas-input';
+import type { TradeFlag } from './trade-flag';
+
+/** The flag a clocked gas input raises against the nameplate: over-firing always, under-firing past the company's tolerance. */
+export function gasInputRatingFlag(rating: RatingComparison, ratedBtuh: number, tolerancePct: number | null): TradeFlag | null {
+  if (rating.status === 'over_fired') {
+    return {
+      code: 'gas_input_over_fired',
+      severity: 'warning',
+      message: `Clocked input is ${rating.deviationPct.toFixed(1)} % above the nameplate rating of ${ratedBtuh.toLocaleString('en-US')} Btu/h: over-firing is prohibited. Adjust to the manufacturer's instructions.`,
+      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
+      threshold: Math.round(rating.allowedBtuPerHour),
+      unit: 'Btu/h',
+      source: rating.source,
+    };
+  }
+  if (rating.status === 'under_fired' && tolerancePct !== null) {
+    return {
+      code: 'gas_input_under_fired',
+      severity: 'info',
+      message: `Clocked input is ${Math.abs(rating.deviationPct).toFixed(1)} % below the nameplate rating, more than the company's ${tolerancePct} % tolerance.`,
+      value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
+      threshold: Math.round(rating.allowedBtuPerHour * (1 - tolerancePct / 100)),
+      unit: 'Btu/h',
+      source: 'company policy',
+    };
+  }
+  return null;
+}
