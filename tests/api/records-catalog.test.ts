@@ -105,6 +105,28 @@ describe('checklist templates', () => {
     expect(audits).toHaveLength(1);
   });
 
+  it('templates carry the readings a visit type requires; a manager may change them to readings an item records', async () => {
+    const list = (await as.manager.get('/api/checklist-templates')).body as (Template & { requiredReadings: Record<string, string[]> })[];
+    const steamOil = list.find((x) => x.applianceKind === 'steam_boiler' && x.fuel === 'oil_no2')!;
+    expect(steamOil.requiredReadings).toEqual({ annual_maintenance: ['combustion', 'lowWaterCutoff'] });
+    const hotWater = list.find((x) => x.applianceKind === 'hot_water_boiler' && x.fuel === null)!;
+    expect(hotWater.requiredReadings).toEqual({ annual_maintenance: ['combustion'] });
+
+    const body = { name: steamOil.name, items: steamOil.items };
+    const unrecorded = await as.manager.put(`/api/checklist-templates/${steamOil.id}`).send({ ...body, requiredReadings: { annual_maintenance: ['fillPressurePsi'] } });
+    expect(unrecorded.status).toBe(400);
+    expect(unrecorded.body.error.details).toEqual({ 'requiredReadings.annual_maintenance': ["No item records fill pressure: add it to an item's readings first."] });
+
+    const changed = await as.manager.put(`/api/checklist-templates/${steamOil.id}`).send({ ...body, requiredReadings: { annual_maintenance: ['combustion'], inspection: ['lowWaterCutoff'] } });
+    expect(changed.status).toBe(200);
+    expect(changed.body.requiredReadings).toEqual({ annual_maintenance: ['combustion'], inspection: ['lowWaterCutoff'] });
+    // Not sent: kept as stored.
+    const kept = await as.manager.put(`/api/checklist-templates/${steamOil.id}`).send(body);
+    expect(kept.body.requiredReadings).toEqual({ annual_maintenance: ['combustion'], inspection: ['lowWaterCutoff'] });
+    const [row] = await ctx.db.select().from(checklistTemplates).where(eq(checklistTemplates.id, steamOil.id));
+    expect(row.requiredReadings).toEqual({ annual_maintenance: ['combustion'], inspection: ['lowWaterCutoff'] });
+  });
+
   it('answers duplicate keys, unknown readings and empty lists with field errors', async () => {
     const [tpl] = (await as.owner.get('/api/checklist-templates')).body as Template[];
     const dup = await as.owner.put(`/api/checklist-templates/${tpl.id}`).send({
