@@ -4,6 +4,8 @@ import { appliances, companies, components, customers, partSwaps, sites, timelin
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { DEMO_COMPANY, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
 import { testApp } from '../support/context';
+import { completionRequirements } from '../../shared/visits/completion-requirements';
+import type { TradeFlag } from '../../shared/trade/trade-flag';
 
 const { ctx } = testApp();
 afterAll(() => ctx.pool.end());
@@ -61,5 +63,30 @@ describe('demo seed', () => {
     const removed = demoAppliances.filter((a) => a.status === 'removed');
     expect(removed).toHaveLength(1);
     expect(demoAppliances.some((a) => a.id === removed[0].replacedById)).toBe(true);
+  });
+
+  it('every demo visit is one the app would let a technician complete: steps marked, outcome set, readings taken, warnings told', async () => {
+    const [demo] = await ctx.db.select().from(companies).where(eq(companies.name, DEMO_COMPANY.name));
+    const rows = await ctx.db
+      .select({ visit: visits, construction: appliances.construction })
+      .from(visits)
+      .innerJoin(appliances, eq(appliances.id, visits.applianceId))
+      .where(eq(visits.companyId, demo.id));
+    expect(rows.length).toBeGreaterThan(100);
+    const refused = rows
+      .map(({ visit: v, construction }) => {
+        const results = v.results as { flags?: TradeFlag[]; lowWaterCutoff?: { passed: boolean } };
+        const missing = completionRequirements({
+          ...v,
+          flags: results.flags ?? [],
+          lowWaterCutoffFailed: results.lowWaterCutoff?.passed === false,
+          appliance: { construction },
+        });
+        return { visit: `${v.type} ${v.visitedOn}`, missing: missing.map((m) => `${m.field}: ${m.message}`) };
+      })
+      .filter((r) => r.missing.length);
+    expect(refused).toEqual([]);
+    expect(rows.every(({ visit }) => visit.status === 'completed')).toBe(true);
+    expect(rows.some(({ visit }) => visit.requiredReadings.includes('combustion'))).toBe(true);
   });
 });

@@ -7,6 +7,7 @@ import { addDays, addYears, daysBetween } from '../../../shared/trade/iso-date';
 import { COMPONENT_TYPES, formatSpec } from '../../../shared/trade/component-types';
 import { computeVisitResults, keyReadings } from '../../modules/visits/visit-results';
 import { findDefaultChecklist } from '../../modules/checklists/default-checklists';
+import { requiredReadingsFor } from '../../modules/checklists/required-readings';
 import { ATTENTION_NOTES, demoFindings, demoReadings } from './demo-readings';
 import { partSlotsFor, type DemoApplianceShape, type PartSlot } from './demo-parts';
 
@@ -165,6 +166,7 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan): DemoHistoryRo
       departedAt,
       checklist,
       readings,
+      requiredReadings: requiredReadingsFor(findDefaultChecklist(shape.kind, shape.fuel), type),
       results,
       findings: outcome === 'shut_down_unsafe' ? 'No heat. Found flame rolling out and soot at the draft hood; cracked section visible at the rear.' : demoFindings(f, shape),
       recommendations,
