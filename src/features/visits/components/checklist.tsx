@@ -4,7 +4,9 @@ import type { CheckMark } from '@shared/schemas/enums';
 import type { ChecklistItemDto } from '@shared/schemas/visits';
 import { ChoiceButtons, TextArea } from './inputs';
 import { useDraft } from './draft-context';
+import type { ReadingKey } from '@shared/schemas/visits';
 import { ReadingBlock } from './readings/reading-block';
+import { RequiredReading } from './readings/required-reading';
 import { isScalarReading } from './readings/simple-readings';
 
 const MARKS: { value: CheckMark; label: string; icon: string; tone: 'ok' | 'due' | 'plain' }[] = [
@@ -42,8 +44,9 @@ export function Checklist({ items }: { items: ChecklistItemDto[] }) {
 }
 
 function ChecklistItem({ item, firstItemFor }: { item: ChecklistItemDto; firstItemFor: Map<string, ChecklistItemDto> }) {
-  const { fields, edit } = useDraft();
+  const { fields, edit, completionTried } = useDraft();
   const entry = fields.checklist.find((c) => c.key === item.key);
+  const unmarked = completionTried && !entry?.mark;
   const [noteOpen, setNoteOpen] = useState(false);
   const showNote = noteOpen || Boolean(entry?.note) || entry?.mark === 'needs_attention';
   const update = (patch: Partial<{ mark: CheckMark | null; note: string }>) =>
@@ -55,7 +58,12 @@ function ChecklistItem({ item, firstItemFor }: { item: ChecklistItemDto; firstIt
     }));
 
   return (
-    <li id={`item-${item.key}`} className="flex scroll-mt-32 flex-col gap-2 rounded-plate border-2 border-plate-line bg-plate-deep p-3" data-item={item.key}>
+    <li
+      id={`item-${item.key}`}
+      className={`flex scroll-mt-32 flex-col gap-2 rounded-plate border-2 bg-plate-deep p-3 ${unmarked ? 'border-due' : 'border-plate-line'}`}
+      data-item={item.key}
+      data-field={`checklist.${item.key}`}
+    >
       <p className="font-semibold">{item.label}</p>
       {item.caution && (
         <Notice kind="caution" title="Caution">
@@ -63,6 +71,7 @@ function ChecklistItem({ item, firstItemFor }: { item: ChecklistItemDto; firstIt
         </Notice>
       )}
       <ChoiceButtons label={item.label} choices={MARKS} value={entry?.mark ?? null} onChange={(mark) => update({ mark })} clearable />
+      {unmarked && <p className="text-sm font-semibold text-due">⚠ Not marked yet: done, N/A or needs attention.</p>}
       <ItemReadings item={item} firstItemFor={firstItemFor} />
       {showNote ? (
         <TextArea label="Note" rows={2} maxLength={2000} value={entry?.note ?? ''} onChange={(note) => update({ note })} />
@@ -72,6 +81,17 @@ function ChecklistItem({ item, firstItemFor }: { item: ChecklistItemDto; firstIt
         </button>
       )}
     </li>
+  );
+}
+
+/** One reading's inputs, marked for jumping to, with the required-reading note when the template requires it. */
+function OwnReading({ readingKey }: { readingKey: string }) {
+  const { requiredReadings } = useDraft();
+  return (
+    <div className="flex flex-col gap-2" data-field={`readings.${readingKey}`}>
+      <ReadingBlock readingKey={readingKey} />
+      {requiredReadings.includes(readingKey) && <RequiredReading readingKey={readingKey as ReadingKey} />}
+    </div>
   );
 }
 
@@ -85,14 +105,14 @@ function ItemReadings({ item, firstItemFor }: { item: ChecklistItemDto; firstIte
       {scalars.length > 0 && (
         <div className="grid grid-cols-2 gap-2">
           {scalars.map((key) => (
-            <ReadingBlock key={key} readingKey={key} />
+            <OwnReading key={key} readingKey={key} />
           ))}
         </div>
       )}
       {own
         .filter((k) => !isScalarReading(k))
         .map((key) => (
-          <ReadingBlock key={key} readingKey={key} />
+          <OwnReading key={key} readingKey={key} />
         ))}
       {elsewhere.map((first) => (
         <a key={first.key} href={`#item-${first.key}`} className="flex min-h-tap items-center text-sm font-semibold underline">

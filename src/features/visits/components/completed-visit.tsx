@@ -5,7 +5,9 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { useMe } from '@/lib/auth';
 import { can } from '@shared/policy';
 import { LABELS } from '@shared/schemas/enums';
-import type { VisitDto } from '@shared/schemas/visits';
+import type { ReadingKey, VisitDto } from '@shared/schemas/visits';
+import { addYears } from '@shared/trade/iso-date';
+import { READING_LABELS } from '@shared/visits/reading-labels';
 import { AmendForm } from './amend-form';
 import { Panel } from './inputs';
 import { ServerResults } from './server-results';
@@ -20,12 +22,20 @@ function latest(visit: VisitDto, field: 'findings' | 'recommendations'): string 
   return visit.amendments.reduce<string>((v, a) => (typeof a.changes[field] === 'string' ? (a.changes[field] as string) : v), visit[field]);
 }
 
-export function CompletedVisit({ visit }: { visit: VisitDto }) {
+/** Required readings that were not taken, with the reason given at the time. */
+function skippedReadings(visit: VisitDto): { label: string; reason: string }[] {
+  return Object.entries(visit.readingSkips ?? {})
+    .filter(([key, reason]) => reason && visit.readings[key as ReadingKey] == null)
+    .map(([key, reason]) => ({ label: READING_LABELS[key as ReadingKey] ?? key, reason: reason! }));
+}
+
+export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitDto; justCompleted?: boolean }) {
   const me = useMe();
   const principal = me.data?.principal;
   const mayAmend =
     can(principal, 'visits:amend-any') || (can(principal, 'visits:amend-own') && visit.technicians.some((t) => t.id === principal?.userId));
   const sections = [...new Set(visit.checklist.map((i) => i.section))];
+  const skipped = skippedReadings(visit);
 
   return (
     <Page
@@ -36,6 +46,7 @@ export function CompletedVisit({ visit }: { visit: VisitDto }) {
         </Link>
       }
     >
+      {justCompleted && <JustCompleted visit={visit} mayAmend={mayAmend} />}
       <p className="flex flex-wrap items-center gap-2">
         <StatusBadge status="ok">Completed</StatusBadge>
         {visit.technicians.map((t) => t.name).join(', ')}
@@ -56,6 +67,9 @@ export function CompletedVisit({ visit }: { visit: VisitDto }) {
           <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${s.swappedOn})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
         )}
         <ServerResults results={visit.results} title="Results" />
+        {skipped.length > 0 && (
+          <Field label="Required readings not taken" value={skipped.map((s) => `${s.label}: ${s.reason}`).join('\n')} />
+        )}
         {sections.map((section) => (
           <div key={section}>
             <h3 className="font-bold">{section}</h3>
@@ -93,6 +107,33 @@ export function CompletedVisit({ visit }: { visit: VisitDto }) {
       )}
       {mayAmend && <AmendForm visit={visit} current={{ findings: latest(visit, 'findings'), recommendations: latest(visit, 'recommendations') }} />}
     </Page>
+  );
+}
+
+/** The confirmation right after signing off, with what the sign-off set in motion. */
+function JustCompleted({ visit, mayAmend }: { visit: VisitDto; mayAmend: boolean }) {
+  const nextAnnual = visit.type === 'annual_maintenance' ? dayFormat.format(new Date(`${addYears(visit.visitedOn, 1)}T00:00:00Z`)) : null;
+  return (
+    <Notice kind="done" title="Visit completed">
+      <ul className="mt-1 list-disc pl-5">
+        <li>
+          Signed off{visit.signedOffBy ? ` by ${visit.signedOffBy.name}` : ''}
+          {visit.signedOffAt ? ` at ${stampFormat.format(new Date(visit.signedOffAt))}` : ''}. It is on the appliance&apos;s life record now, and the homeowner
+          sees it through their share link or sign-in.
+        </li>
+        {visit.outcome === 'shut_down_unsafe' ? (
+          <li>The record shows the appliance shut down as unsafe until a later visit leaves it operating.</li>
+        ) : null}
+        {nextAnnual && <li>The next annual service is due {nextAnnual}; the due list counts from this visit.</li>}
+        {visit.swaps.length > 0 && <li>Parts swapped today are on the record with their new due dates.</li>}
+        {mayAmend && <li>Something wrong? Correct it below: the original stays on record beside the correction.</li>}
+      </ul>
+      <p className="mt-2">
+        <Link to={`/appliances/${visit.applianceId}`} className="font-semibold underline">
+          Back to the life record
+        </Link>
+      </p>
+    </Notice>
   );
 }
 

@@ -13,6 +13,12 @@ export type DraftEditor = {
   appliance: ApplianceDto | undefined;
   prefs: UnitPrefs;
   live: LiveResults;
+  /** Readings the template requires on this visit (each taken, or skipped with a reason). */
+  requiredReadings: readonly string[];
+  /** A number field holding text that is not a number says so here, so completing can refuse it (null: fixed). */
+  reportBadText: (path: string, text: string | null) => void;
+  /** "Complete visit" was pressed with things missing: unmarked steps are marked on the list too. */
+  completionTried: boolean;
 };
 
 export const DraftContext = createContext<DraftEditor | null>(null);
@@ -25,7 +31,7 @@ export function useDraft(): DraftEditor {
 
 /** Sets fields inside one reading block (combustion, gasInput…), or a plain reading when `patch` is not an object. */
 export function useReading<K extends ReadingKey>(key: K) {
-  const { fields, edit, errors } = useDraft();
+  const { fields, edit, errors, reportBadText } = useDraft();
   const value = fields.readings[key] as LocalReadings[K];
   const set = (patch: Partial<NonNullable<LocalReadings[K]>> | LocalReadings[K]) =>
     edit((f) => {
@@ -35,5 +41,10 @@ export function useReading<K extends ReadingKey>(key: K) {
       return { ...f, readings: { ...f.readings, [key]: next } };
     });
   const errorFor = (field?: string) => errors[field ? `readings.${key}.${field}` : `readings.${key}`];
-  return { value, set, errorFor };
+  /** The props a NumberField needs to show its errors, be jumped to and report unreadable text. */
+  const field = (name?: string) => {
+    const path = name ? `readings.${key}.${name}` : `readings.${key}`;
+    return { path, error: errors[path], onBadText: (text: string | null) => reportBadText(path, text) };
+  };
+  return { value, set, errorFor, field };
 }

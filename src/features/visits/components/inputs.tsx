@@ -1,4 +1,4 @@
-import { useId, useState, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import type { Converter } from '../lib/unit-prefs';
 
 const control = 'min-h-tap w-full rounded-plate border-2 border-plate-line bg-plate px-3 text-lg text-iron aria-[invalid=true]:border-due';
@@ -38,6 +38,8 @@ export function NumberField({
   error,
   hint,
   allowNegative = false,
+  path,
+  onBadText,
 }: {
   label: string;
   value: number | null | undefined;
@@ -46,8 +48,18 @@ export function NumberField({
   error?: string[];
   hint?: ReactNode;
   allowNegative?: boolean;
+  /** The field's path in the visit ("readings.combustion.coPpm"), for jumping to it from a list of what is missing. */
+  path?: string;
+  /** Told the text when it is not a number (null once it is), so nothing typed is dropped unnoticed. */
+  onBadText?: (text: string | null) => void;
 }) {
   const id = useId();
+  const reportRef = useRef(onBadText);
+  useEffect(() => {
+    reportRef.current = onBadText;
+  });
+  // Gone from the screen (a unit change re-creates the field), its text is gone too.
+  useEffect(() => () => reportRef.current?.(null), []);
   const [text, setText] = useState(() => show(value, converter));
   const [bad, setBad] = useState(false);
   const [seen, setSeen] = useState(value);
@@ -64,6 +76,7 @@ export function NumberField({
     setText(next);
     const parsed = parse(next);
     setBad(parsed === 'bad');
+    onBadText?.(parsed === 'bad' ? next : null);
     if (parsed !== 'bad') onChange(parsed === null ? null : converter.fromDisplay(parsed));
   }
 
@@ -83,6 +96,7 @@ export function NumberField({
           onChange={(e) => commit(e.target.value)}
           aria-invalid={Boolean(errors?.length)}
           aria-describedby={errors?.length ? `${id}-error` : undefined}
+          data-field={path}
           className={`${control} tabular`}
         />
         {allowNegative && (
@@ -107,28 +121,65 @@ export function TextInput({
   onChange,
   error,
   hint,
+  field,
   ...rest
-}: { label: string; value: string; onChange: (v: string) => void; error?: string[]; hint?: ReactNode; placeholder?: string; maxLength?: number; type?: string }) {
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  error?: string[];
+  hint?: ReactNode;
+  placeholder?: string;
+  maxLength?: number;
+  type?: string;
+  /** The field's path in the visit, for jumping to it. */
+  field?: string;
+}) {
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-semibold">
         {label}
       </label>
-      <input id={id} value={value} onChange={(e) => onChange(e.target.value)} aria-invalid={Boolean(error?.length)} className={control} {...rest} />
+      <input id={id} value={value} onChange={(e) => onChange(e.target.value)} aria-invalid={Boolean(error?.length)} data-field={field} className={control} {...rest} />
       <Messages id={id} error={error} hint={hint} />
     </div>
   );
 }
 
-export function TextArea({ label, value, onChange, error, rows = 3, maxLength = 8000 }: { label: string; value: string; onChange: (v: string) => void; error?: string[]; rows?: number; maxLength?: number }) {
+export function TextArea({
+  label,
+  value,
+  onChange,
+  error,
+  rows = 3,
+  maxLength = 8000,
+  field,
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  error?: string[];
+  rows?: number;
+  maxLength?: number;
+  field?: string;
+}) {
   const id = useId();
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-semibold">
         {label}
       </label>
-      <textarea id={id} rows={rows} maxLength={maxLength} value={value} onChange={(e) => onChange(e.target.value)} aria-invalid={Boolean(error?.length)} className={`${control} py-2`} />
+      <textarea
+        id={id}
+        rows={rows}
+        maxLength={maxLength}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-invalid={Boolean(error?.length)}
+        data-field={field}
+        className={`${control} py-2`}
+      />
       <Messages id={id} error={error} />
     </div>
   );

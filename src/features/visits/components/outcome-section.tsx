@@ -11,41 +11,64 @@ function toLocalInput(iso: string | null) {
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
 }
 
-export function OutcomeSection({ required, serverErrors }: { required: boolean; serverErrors: Record<string, string[]> }) {
+/**
+ * The outcome, and beside it what the occupant was told: always for "shut down as unsafe", and for any warning or stop
+ * found on the visit whichever outcome is chosen.
+ */
+export function OutcomeSection({ alerts, serverErrors }: { alerts: string[]; serverErrors: Record<string, string[]> }) {
   const { fields, edit } = useDraft();
   const set = (patch: Partial<typeof fields>) => edit((f) => ({ ...f, ...patch }));
+  const shutDown = fields.outcome === 'shut_down_unsafe';
+  const warned = alerts.length > 0;
+  const now = () => new Date().toISOString();
   return (
     <Panel title="Outcome" id="outcome">
-      {required && !fields.outcome && (
-        <Notice kind="danger" title="Choose an outcome">
-          A failed test or a stop reading is recorded on this visit. Say whether the appliance was left operating or shut down.
+      {warned && (
+        <Notice kind="danger" title={fields.outcome ? 'Tell the occupant' : 'Choose an outcome'}>
+          {alerts.join(' ')} Say whether the appliance was left operating or shut down, who was told and what they were told.
         </Notice>
       )}
-      <ChoiceButtons<VisitOutcome>
-        label="Outcome"
-        choices={[
-          { value: 'left_operating', label: 'Left operating', icon: '✓', tone: 'ok' },
-          { value: 'shut_down_unsafe', label: 'Shut down as unsafe', icon: '✖', tone: 'due' },
-        ]}
-        value={fields.outcome}
-        onChange={(outcome) =>
-          set({ outcome, outcomeToldAt: outcome === 'shut_down_unsafe' ? (fields.outcomeToldAt ?? new Date().toISOString()) : fields.outcomeToldAt })
-        }
-        clearable
-      />
+      <div data-field="outcome">
+        <ChoiceButtons<VisitOutcome>
+          label="Outcome"
+          choices={[
+            { value: 'left_operating', label: 'Left operating', icon: '✓', tone: 'ok' },
+            { value: 'shut_down_unsafe', label: 'Shut down as unsafe', icon: '✖', tone: 'due' },
+          ]}
+          value={fields.outcome}
+          onChange={(outcome) => set({ outcome, outcomeToldAt: outcome === 'shut_down_unsafe' || warned ? (fields.outcomeToldAt ?? now()) : fields.outcomeToldAt })}
+          clearable
+        />
+      </div>
       {serverErrors.outcome?.map((m) => (
         <p key={m} role="alert" className="text-sm font-semibold text-due">
           ⚠ {m}
         </p>
       ))}
-      {fields.outcome === 'shut_down_unsafe' && (
+      {shutDown && (
+        <Notice kind="caution" title="Make it safe">
+          Turn off and tag the gas or oil supply and the power, and tell the people in the building not to relight it. Follow the manufacturer&apos;s
+          instructions, local codes and licensed practice.
+        </Notice>
+      )}
+      {(shutDown || warned) && (
         <>
-          <Notice kind="caution" title="Make it safe">
-            Turn off and tag the gas or oil supply and the power, and tell the people in the building not to relight it. Follow the manufacturer&apos;s
-            instructions, local codes and licensed practice.
-          </Notice>
-          <TextArea label="Why it was shut down" value={fields.outcomeReason} onChange={(outcomeReason) => set({ outcomeReason })} maxLength={2000} error={serverErrors.outcomeReason} />
-          <TextInput label="Who was told" value={fields.outcomeToldWhom} onChange={(outcomeToldWhom) => set({ outcomeToldWhom })} maxLength={200} error={serverErrors.outcomeToldWhom} />
+          <TextArea
+            label={shutDown ? 'Why it was shut down' : 'What the occupant was told'}
+            value={fields.outcomeReason}
+            onChange={(outcomeReason) => set({ outcomeReason })}
+            maxLength={2000}
+            error={serverErrors.outcomeReason}
+            field="outcomeReason"
+          />
+          <TextInput
+            label="Who was told"
+            value={fields.outcomeToldWhom}
+            onChange={(outcomeToldWhom) => set({ outcomeToldWhom, outcomeToldAt: fields.outcomeToldAt ?? now() })}
+            maxLength={200}
+            error={serverErrors.outcomeToldWhom}
+            field="outcomeToldWhom"
+          />
           <TextInput
             label="When they were told"
             type="datetime-local"

@@ -1,20 +1,22 @@
-import { useMemo, useState, type ReactNode } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Page } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { LABELS } from '@shared/schemas/enums';
 import type { VisitDto } from '@shared/schemas/visits';
+import { alertsOf, requirementDetails, type Requirement } from '@shared/visits/completion-requirements';
 import { applianceQueryOptions, useAppliance } from '../api/get-appliance';
 import { readingErrors } from '../draft/draft-fields';
+import { jumpToField } from '../lib/jump-to-field';
+import { liveRequirements } from '../lib/live-requirements';
 import { computeLiveResults } from '../lib/live-results';
 import { useMe } from '@/lib/auth';
 import { useUnitPrefs } from '../lib/unit-prefs';
 import { Checklist } from './checklist';
 import { DraftContext, type DraftEditor } from './draft-context';
-import { Panel } from './inputs';
+import { FinishPanel } from './finish-panel';
 import { NotesSection, OutcomeSection } from './outcome-section';
 import { SaveStatus } from './save-status';
 import { ServerResults } from './server-results';
@@ -22,37 +24,95 @@ import { SwapParts } from './swap-parts';
 import { UnitToggle } from './unit-toggle';
 import { useDraftSync } from './use-draft-sync';
 
-export function VisitEditor({ initial, visit, photos }: { initial: VisitDto; visit: VisitDto; photos?: ReactNode }) {
+/** Server field errors the live rule did not name (it cannot know everything the server checks), for the list. */
+function serverOnly(error: unknown, live: Requirement[]): Requirement[] {
+  if (!(error instanceof ApiError) || error.status !== 400 || !error.details) return [];
+  const known = new Set(live.map((r) => r.field));
+  return Object.entries(error.details)
+    .filter(([field]) => !known.has(field))
+    .flatMap(([field, messages]) => messages.map((message) => ({ field, label: field === '_' ? 'Visit' : field, message })));
+}
+
+/** `onCompleting` names the visit being signed off from this screen (null if that failed), so the completed view can confirm it. */
+export function VisitEditor({
+  initial,
+  visit,
+  photos,
+  onCompleting,
+}: {
+  initial: VisitDto;
+  visit: VisitDto;
+  photos?: ReactNode;
+  onCompleting: (visitId: string | null) => void;
+}) {
   const { sync, snapshot } = useDraftSync(initial);
   const appliance = useAppliance(visit.applianceId);
   const [prefs] = useUnitPrefs();
   const tolerancePct = useMe().data?.company?.underFiringTolerancePct ?? null;
-  const navigate = useNavigate();
   const qc = useQueryClient();
   const [completing, setCompleting] = useState(false);
   const [completeError, setCompleteError] = useState<ApiError | Error | null>(null);
+  const [tried, setTried] = useState(false);
+  const [badText, setBadText] = useState<Record<string, string>>({});
   const { fields } = snapshot;
   const a = appliance.data?.appliance;
 
-  const live = useMemo(() => computeLiveResults(fields.readings, a, tolerancePct), [fields.readings, a, tolerancePct]);
-  const errors = useMemo(
-    () => ({ ...snapshot.errors, ...(completeError instanceof ApiError ? completeError.details : {}), ...readingErrors(fields.readings) }),
-    [snapshot.errors, completeError, fields.readings],
+  const reportBadText = useCallback(
+    (path: string, text: string | null) =>
+      setBadText((prev) => {
+        if ((prev[path] ?? null) === text) return prev;
+        const next = { ...prev };
+        if (text === null) delete next[path];
+        else next[path] = text;
+        return next;
+      }),
+    [],
   );
-  const ctx: DraftEditor = { visitId: visit.id, fields, edit: (c) => sync.edit(c), errors, appliance: a, prefs, live };
-  const outcomeNeeded = visit.outcomeRequired || live.stopFlags.length > 0 || live.lwcoFailed;
-  const blocked = outcomeNeeded && !fields.outcome;
+
+  const live = useMemo(() => computeLiveResults(fields.readings, a, tolerancePct), [fields.readings, a, tolerancePct]);
+  const liveList = useMemo(() => liveRequirements({ visit, fields, live, appliance: a, badText }), [visit, fields, live, a, badText]);
+  const requirements = useMemo(() => [...liveList, ...serverOnly(completeError, liveList)], [liveList, completeError]);
+  const errors = useMemo(
+    () => ({ ...snapshot.errors, ...(tried ? requirementDetails(requirements) : {}), ...readingErrors(fields.readings) }),
+    [snapshot.errors, tried, requirements, fields.readings],
+  );
+  const alerts = alertsOf({ flags: live.flags, lowWaterCutoffFailed: live.lwcoFailed });
+  const ctx: DraftEditor = {
+    visitId: visit.id,
+    fields,
+    edit: (c) => sync.edit(c),
+    errors,
+    appliance: a,
+    prefs,
+    live,
+    requiredReadings: visit.requiredReadings ?? [],
+    reportBadText,
+    completionTried: tried,
+  };
 
   async function complete() {
-    setCompleting(true);
     setCompleteError(null);
+    if (liveList.length) {
+      setTried(true);
+      jumpToField(liveList[0].field);
+      return;
+    }
+    setCompleting(true);
+    onCompleting(visit.id);
     try {
       const done = await sync.complete();
-      await qc.invalidateQueries({ queryKey: applianceQueryOptions(done.applianceId).queryKey });
-      navigate(`/appliances/${done.applianceId}`);
+      // The record behind the visit changed (parts, due dates, history); this screen now shows the completed visit.
+      void qc.invalidateQueries({ queryKey: applianceQueryOptions(done.applianceId).queryKey });
     } catch (e) {
-      setCompleteError(e instanceof Error ? e : new Error('Not completed.'));
+      onCompleting(null);
+      const err = e instanceof Error ? e : new Error('Not completed.');
+      setCompleteError(err);
       setCompleting(false);
+      if (err instanceof ApiError && err.status === 400 && err.details) {
+        setTried(true);
+        const first = Object.keys(err.details)[0];
+        if (first) requestAnimationFrame(() => jumpToField(first));
+      }
     }
   }
 
@@ -80,24 +140,8 @@ export function VisitEditor({ initial, visit, photos }: { initial: VisitDto; vis
         <SwapParts visit={visit} components={appliance.data?.components} onSwapped={(v) => sync.adopt(v)} />
         {photos}
         <NotesSection serverErrors={errors} />
-        <OutcomeSection required={outcomeNeeded} serverErrors={errors} />
-        <Panel title="Finish">
-          {completeError && (
-            <Notice kind="danger" title="Not completed">
-              {completeError instanceof ApiError && completeError.offline
-                ? 'No signal: completing needs the server. Everything is saved on this phone; try again when signal returns.'
-                : completeError.message}
-            </Notice>
-          )}
-          {blocked && (
-            <p className="font-semibold text-due" id="complete-blocked">
-              ⚠ Choose an outcome first: a stop reading or a failed low-water cutoff is recorded.
-            </p>
-          )}
-          <Button className="min-h-14 text-xl" disabled={blocked || completing} aria-describedby={blocked ? 'complete-blocked' : undefined} onClick={complete}>
-            {completing ? 'Completing…' : 'Complete visit'}
-          </Button>
-        </Panel>
+        <OutcomeSection alerts={alerts} serverErrors={errors} />
+        <FinishPanel requirements={requirements} tried={tried} completing={completing} completeError={completeError} onComplete={complete} onJump={jumpToField} />
         <SaveStatus status={snapshot.status} message={snapshot.message} onRetry={sync.retryNow} />
       </Page>
     </DraftContext.Provider>

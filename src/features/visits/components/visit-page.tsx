@@ -15,9 +15,11 @@ export type VisitSlots = { photos?: (applianceId: string, visitId: string) => Re
 export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   const { id = '' } = useParams();
   const visit = useVisit(id);
+  /** The visit this screen has just signed off, so the completed view can say so and what happens next. */
+  const [completedHere, setCompletedHere] = useState<string | null>(null);
   useEffect(() => {
     window.scrollTo(0, 0);
-  }, [id]);
+  }, [id, completedHere]);
   if (visit.isPending) return <Spinner label="Loading the visit…" />;
   if (visit.isError) {
     return (
@@ -30,12 +32,12 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
       </Page>
     );
   }
-  if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} />;
-  return <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} />;
+  if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} justCompleted={completedHere === visit.data.id} />;
+  return <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} onCompleting={setCompletedHere} />;
 }
 
 /** Holds on to the first server copy: the draft engine starts from it once, later copies only feed the display. */
-function DraftVisit({ visit, photos }: { visit: VisitDto; photos?: ReactNode }) {
+function DraftVisit({ visit, photos, onCompleting }: { visit: VisitDto; photos?: ReactNode; onCompleting: (visitId: string | null) => void }) {
   const [initial] = useState(visit);
-  return <VisitEditor initial={initial} visit={visit} photos={photos} />;
+  return <VisitEditor initial={initial} visit={visit} photos={photos} onCompleting={onCompleting} />;
 }

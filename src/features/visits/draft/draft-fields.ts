@@ -1,6 +1,6 @@
 import type { CheckMark, VisitOutcome } from '@shared/schemas/enums';
 import { analyzeCombustion, assessThermocoupleMillivolts, clockGasInput, parseGaugeGlassLevel, TradeInputError } from '@shared/trade/index';
-import { readingsInput, type ReadingsInput, type VisitDraftInput, type VisitDto } from '@shared/schemas/visits';
+import { readingsInput, type ReadingSkips, type ReadingsInput, type VisitDraftInput, type VisitDto } from '@shared/schemas/visits';
 
 type Loose<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
 /** Readings as typed so far: sub-objects may be incomplete; only complete, valid parts are sent. */
@@ -13,6 +13,8 @@ export type ChecklistEntry = { key: string; mark: CheckMark | null; note: string
 export type DraftFields = {
   checklist: ChecklistEntry[];
   readings: LocalReadings;
+  /** Required readings not taken, with the reason typed so far. */
+  readingSkips: ReadingSkips;
   findings: string;
   recommendations: string;
   internalNotes: string;
@@ -23,12 +25,13 @@ export type DraftFields = {
   outcomeToldAt: string | null;
 };
 
-const TEXT_FIELDS = ['findings', 'recommendations', 'internalNotes', 'customerAckName', 'outcome', 'outcomeReason', 'outcomeToldWhom', 'outcomeToldAt'] as const;
+const TEXT_FIELDS = ['findings', 'recommendations', 'internalNotes', 'customerAckName', 'outcome', 'outcomeReason', 'outcomeToldWhom', 'outcomeToldAt', 'readingSkips'] as const;
 
 export function fieldsFromVisit(v: VisitDto): DraftFields {
   return {
     checklist: v.checklist.map((c) => ({ key: c.key, mark: c.mark, note: c.note ?? '' })),
     readings: (v.readings ?? {}) as LocalReadings,
+    readingSkips: v.readingSkips ?? {},
     findings: v.findings ?? '',
     recommendations: v.recommendations ?? '',
     internalNotes: v.internalNotes ?? '',
@@ -112,6 +115,7 @@ export function toPayload(f: DraftFields, revision: number): VisitDraftInput {
     revision,
     checklist: f.checklist,
     readings: sendableReadings(f.readings),
+    readingSkips: f.readingSkips ?? {},
     findings: f.findings,
     recommendations: f.recommendations,
     internalNotes: f.internalNotes,
@@ -119,7 +123,8 @@ export function toPayload(f: DraftFields, revision: number): VisitDraftInput {
     outcome: f.outcome,
     outcomeReason: blankToNull(f.outcomeReason),
     outcomeToldWhom: blankToNull(f.outcomeToldWhom),
-    outcomeToldAt: f.outcome === 'shut_down_unsafe' ? f.outcomeToldAt : null,
+    // "When they were told" belongs with "who was told": a shut-down, or a warning left operating.
+    outcomeToldAt: f.outcomeToldWhom.trim() || f.outcome === 'shut_down_unsafe' ? f.outcomeToldAt : null,
   };
 }
 

@@ -18,7 +18,11 @@ export function loadDraft(visitId: string): StoredDraft | null {
   try {
     const raw = localStorage.getItem(draftStorageKey(visitId));
     const parsed = raw ? (JSON.parse(raw) as StoredDraft) : null;
-    return parsed?.v === 1 && parsed.fields && parsed.base ? parsed : null;
+    if (!(parsed?.v === 1 && parsed.fields && parsed.base)) return null;
+    // Drafts kept before reading skips existed.
+    parsed.fields.readingSkips ??= {};
+    parsed.base.readingSkips ??= {};
+    return parsed;
   } catch {
     return null;
   }

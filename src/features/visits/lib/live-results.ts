@@ -4,6 +4,7 @@ import {
   assessThermocoupleMillivolts,
   clockGasInput,
   compareInputToRating,
+  gasInputRatingFlag,
   parseGaugeGlassLevel,
   TradeInputError,
   type CombustionAnalysis,
@@ -34,6 +35,8 @@ export type LiveResults = {
   thermocouple: Result<ThermocoupleAssessment>;
   gaugeGlass: Result<GaugeGlassAssessment>;
   lwcoFailed: boolean;
+  /** Every flag the readings raise as typed, as the server's results would list them. */
+  flags: TradeFlag[];
   stopFlags: TradeFlag[];
 };
 
@@ -81,9 +84,8 @@ export function computeLiveResults(r: LocalReadings, a: ApplianceDto | undefined
   const gaugeGlass = level ? attempt(() => assessGaugeGlassLevel(parseGaugeGlassLevel(level))) : null;
 
   const lwcoFailed = r.lowWaterCutoff?.burnerStopped === false;
-  const stopFlags = [
-    ...(combustion?.ok ? combustion.value.flags : []),
-    ...(gaugeGlass?.ok ? gaugeGlass.value.flags : []),
-  ].filter((f) => f.severity === 'stop');
-  return { combustion, gasInput, thermocouple, gaugeGlass, lwcoFailed, stopFlags };
+  const rating = gasInput?.ok && gasInput.value.rating && a?.inputBtuh ? gasInputRatingFlag(gasInput.value.rating, a.inputBtuh, underFiringTolerancePct) : null;
+  const flags = [...(combustion?.ok ? combustion.value.flags : []), ...(rating ? [rating] : []), ...(gaugeGlass?.ok ? gaugeGlass.value.flags : [])];
+  const stopFlags = flags.filter((f) => f.severity === 'stop');
+  return { combustion, gasInput, thermocouple, gaugeGlass, lwcoFailed, flags, stopFlags };
 }

@@ -10,7 +10,7 @@ const fmt = (n: number, digits = 1) => n.toFixed(digits);
 
 export function CombustionReadings() {
   const { visitId, prefs } = useDraft();
-  const { value: c, set, errorFor } = useReading('combustion');
+  const { value: c, set, field } = useReading('combustion');
   const temp = temperature(prefs);
   const press = pressure(prefs);
   return (
@@ -21,10 +21,10 @@ export function CombustionReadings() {
       </Notice>
       <WarmUpTimer visitId={visitId} onStop={(minutes) => set({ steadyFiringMinutes: minutes })} />
       <div className="grid grid-cols-2 gap-2">
-        <NumberField label="O2" converter={plain('%', 1)} value={c?.o2Pct} onChange={(v) => set({ o2Pct: v })} error={errorFor('o2Pct')} />
-        <NumberField label="CO" converter={plain('ppm', 0)} value={c?.coPpm} onChange={(v) => set({ coPpm: v })} error={errorFor('coPpm')} />
-        <NumberField key={`flue-${temp.unit}`} label="Flue temp" converter={temp} value={c?.flueTempF} onChange={(v) => set({ flueTempF: v })} error={errorFor('flueTempF')} />
-        <NumberField key={`air-${temp.unit}`} label="Air temp" converter={temp} value={c?.airTempF} onChange={(v) => set({ airTempF: v })} error={errorFor('airTempF')} />
+        <NumberField label="O2" converter={plain('%', 1)} value={c?.o2Pct} onChange={(v) => set({ o2Pct: v })} {...field('o2Pct')} />
+        <NumberField label="CO" converter={plain('ppm', 0)} value={c?.coPpm} onChange={(v) => set({ coPpm: v })} {...field('coPpm')} />
+        <NumberField key={`flue-${temp.unit}`} label="Flue temp" converter={temp} value={c?.flueTempF} onChange={(v) => set({ flueTempF: v })} {...field('flueTempF')} />
+        <NumberField key={`air-${temp.unit}`} label="Air temp" converter={temp} value={c?.airTempF} onChange={(v) => set({ airTempF: v })} {...field('airTempF')} />
         <NumberField
           key={`draft-${press.unit}`}
           label="Draft"
@@ -32,16 +32,16 @@ export function CombustionReadings() {
           allowNegative
           value={c?.draftInWc}
           onChange={(v) => set({ draftInWc: v })}
-          error={errorFor('draftInWc')}
+          {...field('draftInWc')}
         />
-        <NumberField label="Ambient CO" converter={plain('ppm', 0)} value={c?.ambientCoPpm} onChange={(v) => set({ ambientCoPpm: v })} error={errorFor('ambientCoPpm')} />
-        <NumberField label="Spillage" converter={plain('s', 0)} value={c?.spillageSeconds} onChange={(v) => set({ spillageSeconds: v })} error={errorFor('spillageSeconds')} />
+        <NumberField label="Ambient CO" converter={plain('ppm', 0)} value={c?.ambientCoPpm} onChange={(v) => set({ ambientCoPpm: v })} {...field('ambientCoPpm')} />
+        <NumberField label="Spillage" converter={plain('s', 0)} value={c?.spillageSeconds} onChange={(v) => set({ spillageSeconds: v })} {...field('spillageSeconds')} />
         <NumberField
           label="Steady firing"
           converter={plain('min', 1)}
           value={c?.steadyFiringMinutes}
           onChange={(v) => set({ steadyFiringMinutes: v })}
-          error={errorFor('steadyFiringMinutes')}
+          {...field('steadyFiringMinutes')}
         />
       </div>
       <CombustionLive />

@@ -8,7 +8,7 @@ const DIALS = [0.5, 1, 2, 5];
 
 export function GasInputReadings() {
   const { appliance, live } = useDraft();
-  const { value: g, set, errorFor } = useReading('gasInput');
+  const { value: g, set, errorFor, field } = useReading('gasInput');
   const fuel = appliance?.fuel === 'propane' ? 'propane' : 'natural_gas';
   const defaultHv = DEFAULT_HEATING_VALUE_BTU_PER_FT3[fuel];
   // The heating value starts at the published default for the fuel; the technician may use the utility's figure.
@@ -28,13 +28,13 @@ export function GasInputReadings() {
         {errorFor('dialCubicFeet')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
       </div>
       <div className="grid grid-cols-2 gap-2">
-        <NumberField label="One revolution" converter={plain('s', 1)} value={g?.secondsPerRevolution} onChange={(v) => setWithDefault({ secondsPerRevolution: v })} error={errorFor('secondsPerRevolution')} />
+        <NumberField label="One revolution" converter={plain('s', 1)} value={g?.secondsPerRevolution} onChange={(v) => setWithDefault({ secondsPerRevolution: v })} {...field('secondsPerRevolution')} />
         <NumberField
           label="Heating value"
           converter={plain('Btu/ft³', 0)}
           value={g?.heatingValueBtuPerCubicFoot ?? defaultHv}
           onChange={(v) => set({ heatingValueBtuPerCubicFoot: v })}
-          error={errorFor('heatingValueBtuPerCubicFoot')}
+          {...field('heatingValueBtuPerCubicFoot')}
           hint={`Default ${defaultHv.toLocaleString('en-US')} for ${fuel === 'propane' ? 'propane' : 'natural gas'} (${HEATING_VALUE_SOURCE})`}
         />
       </div>

@@ -17,6 +17,7 @@ export function GaugeGlassReading() {
         onChange={(v) => set(v)}
         error={r && !r.ok ? [r.message] : errorFor()}
         hint="A fraction of the visible glass: 1/2, 5/8, empty, full."
+        field="readings.gaugeGlassLevel"
       />
       {r?.ok && (
         <div className="flex flex-col gap-2">

@@ -6,7 +6,7 @@ export function LowWaterCutoffReading() {
   const { value: w, set, errorFor } = useReading('lowWaterCutoff');
   return (
     <div className="flex flex-col gap-3">
-      <div className="flex flex-col gap-1">
+      <div className="flex flex-col gap-1" data-field="readings.lowWaterCutoff.type">
         <span className="text-sm font-semibold">Cutoff type</span>
         <ChoiceButtons
           label="Cutoff type"
@@ -17,6 +17,7 @@ export function LowWaterCutoffReading() {
           value={w?.type}
           onChange={(v) => set({ type: v })}
         />
+        {errorFor('type')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
       </div>
       <TextInput
         label="Level in the glass when it tripped"
@@ -25,8 +26,9 @@ export function LowWaterCutoffReading() {
         value={w?.trippedAtLevel ?? ''}
         onChange={(v) => set({ trippedAtLevel: v })}
         error={errorFor('trippedAtLevel')}
+        field="readings.lowWaterCutoff.trippedAtLevel"
       />
-      <div className="flex flex-col gap-1">
+      <div className="flex flex-col gap-1" data-field="readings.lowWaterCutoff.burnerStopped">
         <span className="text-sm font-semibold">Did the burner stop?</span>
         <ChoiceButtons
           label="Did the burner stop?"

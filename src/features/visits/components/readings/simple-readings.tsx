@@ -18,7 +18,7 @@ type ScalarKey = 'steamOperatingPsi' | 'pressureControlCutInPsi' | 'pressureCont
 
 export function ScalarReading({ readingKey }: { readingKey: ScalarKey }) {
   const { prefs } = useDraft();
-  const { value, set, errorFor } = useReading(readingKey);
+  const { value, set, field } = useReading(readingKey);
   const inWc = readingKey in IN_WC;
   const converter = inWc ? pressure(prefs) : plain('psi', 1);
   return (
@@ -28,31 +28,31 @@ export function ScalarReading({ readingKey }: { readingKey: ScalarKey }) {
       converter={converter}
       value={value as number | null | undefined}
       onChange={(v) => set(v)}
-      error={errorFor()}
+      {...field()}
     />
   );
 }
 
 export function OilReadings() {
   const { prefs } = useDraft();
-  const { value: o, set, errorFor } = useReading('oil');
+  const { value: o, set, field } = useReading('oil');
   const press = pressure(prefs);
   return (
     <div className="grid grid-cols-2 gap-2">
-      <NumberField label="Smoke spot" converter={plain('0–9', 0)} value={o?.smokeSpot} onChange={(v) => set({ smokeSpot: v })} error={errorFor('smokeSpot')} />
-      <NumberField label="Pump pressure" converter={plain('psi', 0)} value={o?.pumpPressurePsi} onChange={(v) => set({ pumpPressurePsi: v })} error={errorFor('pumpPressurePsi')} />
-      <NumberField key={`of-${press.unit}`} label="Over-fire draft" allowNegative converter={press} value={o?.overFireDraftInWc} onChange={(v) => set({ overFireDraftInWc: v })} error={errorFor('overFireDraftInWc')} />
-      <NumberField key={`br-${press.unit}`} label="Breech draft" allowNegative converter={press} value={o?.breechDraftInWc} onChange={(v) => set({ breechDraftInWc: v })} error={errorFor('breechDraftInWc')} />
+      <NumberField label="Smoke spot" converter={plain('0–9', 0)} value={o?.smokeSpot} onChange={(v) => set({ smokeSpot: v })} {...field('smokeSpot')} />
+      <NumberField label="Pump pressure" converter={plain('psi', 0)} value={o?.pumpPressurePsi} onChange={(v) => set({ pumpPressurePsi: v })} {...field('pumpPressurePsi')} />
+      <NumberField key={`of-${press.unit}`} label="Over-fire draft" allowNegative converter={press} value={o?.overFireDraftInWc} onChange={(v) => set({ overFireDraftInWc: v })} {...field('overFireDraftInWc')} />
+      <NumberField key={`br-${press.unit}`} label="Breech draft" allowNegative converter={press} value={o?.breechDraftInWc} onChange={(v) => set({ breechDraftInWc: v })} {...field('breechDraftInWc')} />
     </div>
   );
 }
 
 export function MakeupWaterReadings() {
-  const { value: m, set, errorFor } = useReading('makeupWater');
+  const { value: m, set, field } = useReading('makeupWater');
   return (
     <div className="grid grid-cols-2 gap-2">
-      <NumberField label="Feeder meter" converter={plain('gal', 1)} value={m?.meterGallons} onChange={(v) => set({ meterGallons: v })} error={errorFor('meterGallons')} />
-      <NumberField label="Added by hand" converter={plain('gal', 1)} value={m?.addedByHandGallons} onChange={(v) => set({ addedByHandGallons: v })} error={errorFor('addedByHandGallons')} />
+      <NumberField label="Feeder meter" converter={plain('gal', 1)} value={m?.meterGallons} onChange={(v) => set({ meterGallons: v })} {...field('meterGallons')} />
+      <NumberField label="Added by hand" converter={plain('gal', 1)} value={m?.addedByHandGallons} onChange={(v) => set({ addedByHandGallons: v })} {...field('addedByHandGallons')} />
     </div>
   );
 }

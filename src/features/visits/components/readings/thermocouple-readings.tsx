@@ -14,13 +14,13 @@ const LOOK: Record<ThermocoupleAssessment['status'], { status: Status; word: str
 
 export function ThermocoupleReadings() {
   const { live } = useDraft();
-  const { value: t, set, errorFor } = useReading('thermocouple');
+  const { value: t, set, field } = useReading('thermocouple');
   const r = live.thermocouple;
   return (
     <div className="flex flex-col gap-3">
       <div className="grid grid-cols-2 gap-2">
-        <NumberField label="Open circuit" converter={plain('mV', 1)} value={t?.openCircuitMv} onChange={(v) => set({ openCircuitMv: v })} error={errorFor('openCircuitMv')} />
-        <NumberField label="Closed circuit" converter={plain('mV', 1)} value={t?.closedCircuitMv} onChange={(v) => set({ closedCircuitMv: v })} error={errorFor('closedCircuitMv')} />
+        <NumberField label="Open circuit" converter={plain('mV', 1)} value={t?.openCircuitMv} onChange={(v) => set({ openCircuitMv: v })} {...field('openCircuitMv')} />
+        <NumberField label="Closed circuit" converter={plain('mV', 1)} value={t?.closedCircuitMv} onChange={(v) => set({ closedCircuitMv: v })} {...field('closedCircuitMv')} />
       </div>
       {r && !r.ok && <p role="alert" className="text-sm font-semibold text-due">⚠ {r.message}</p>}
       {r?.ok && (
