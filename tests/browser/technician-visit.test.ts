@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { BrowserContext, Page } from 'playwright-core';
-import { PHONE, signInAsMember, useBrowserFixture } from '../support/browser';
+import { PHONE, screenshotDir, signInAsMember, useBrowserFixture } from '../support/browser';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { components, visits } from '../../server/db/schema/index';
 import { todayInTimeZone } from '../../shared/dates';
@@ -104,7 +104,7 @@ describe('a technician on a phone', () => {
     await page.getByText('✓ thermocouple replaced · would not hold the pilot').waitFor();
 
     await page.getByRole('textbox', { name: 'Findings' }).fill('Cutoff tripped and stopped the burner. Pilot dropped out; thermocouple replaced.');
-    await page.getByRole('button', { name: 'Left operating' }).click();
+    await page.getByRole('button', { name: 'Left operating', exact: true }).click();
     await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
     // The server's own results come back with the save.
     const kept = page.getByRole('region', { name: 'Kept with the visit' });
@@ -112,6 +112,9 @@ describe('a technician on a phone', () => {
     expect(await kept.locator('[data-result="Efficiency (HHV)"]').textContent()).toBe(liveEfficiency);
 
     await page.getByRole('button', { name: 'Complete visit' }).click();
+    const confirmation = page.getByRole('status').filter({ hasText: 'Visit completed' });
+    await confirmation.waitFor();
+    await confirmation.getByRole('link', { name: 'Back to the life record' }).click();
     await page.waitForURL(`${fx.server.baseUrl}/appliances/${boiler.id}`);
 
     const history = page.getByRole('list', { name: 'History, newest first' });
@@ -138,6 +141,81 @@ describe('a technician on a phone', () => {
     expect(current.map((p) => p.installedOn)).toEqual([today]);
     expect(removed.map((p) => [p.removedOn, p.removalReason])).toEqual([[today, 'would not hold the pilot']]);
 
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('is stopped from completing an empty visit: the list shows at the button and the first missing step gets the focus; done properly it completes', async () => {
+    const boiler = await steamBoiler('14 Brackenfold');
+    const { context, page, errors } = await signInOnPhone();
+    await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
+    const visitId = await startVisitFromRecord(page);
+    const items = page.locator('li[data-item]');
+    await items.first().waitFor();
+    const count = await items.count();
+    const completes: number[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && r.url().endsWith(`/api/visits/${visitId}/complete`)) completes.push(1);
+    });
+
+    // The list is there before anything is pressed, and lists what an empty visit lacks.
+    const missing = page.getByRole('region', { name: 'Still needed before completing' });
+    await missing.getByText(`Checklist: ${count} steps not marked`).waitFor();
+    await missing.getByText('Combustion test:').waitFor();
+    await missing.getByText('Low-water cutoff test:').waitFor();
+    await missing.getByText('Outcome:').waitFor();
+
+    // What was on screen in the field: O2 25 % and "abc" typed into CO.
+    const combustion = page.locator('li[data-item="combustion_test"]');
+    await combustion.getByRole('textbox', { name: /^O2/ }).fill('25');
+    await combustion.getByRole('textbox', { name: /^CO\b/ }).fill('abc');
+    await missing.getByText('O2 must be at most 20.8.').waitFor();
+    await missing.getByText('Type a number, like 8.5.').waitFor();
+
+    await page.getByRole('button', { name: 'Complete visit' }).click();
+    await missing.getByRole('alert').filter({ hasText: 'Not completed yet' }).waitFor();
+    expect(await missing.textContent()).toContain(`Checklist: ${count} steps not marked`);
+    // The first missing thing, the first checklist step, has the focus, and the screen is still the editor.
+    const first = await items.first().getAttribute('data-item');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.closest('li[data-item]')?.getAttribute('data-item'))).toBe(first);
+    expect(page.url()).toBe(`${fx.server.baseUrl}/visits/${visitId}`);
+    await items.first().getByText('Not marked yet').waitFor();
+    expect(completes).toEqual([]);
+    const [draft] = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    expect(draft).toMatchObject({ status: 'draft', completedAt: null });
+
+    // Jumping from the list to the unreadable CO reading.
+    await missing.getByRole('button', { name: /Type a number/ }).click();
+    await expect.poll(() => page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.value)).toBe('abc');
+
+    // Now properly: every step, real readings, a required reading skipped with its reason, the outcome.
+    for (let i = 0; i < count; i++) await items.nth(i).getByRole('button', { name: 'Done', exact: true }).click();
+    await combustion.getByRole('textbox', { name: /^O2/ }).fill('7.5');
+    await combustion.getByRole('textbox', { name: /^CO\b/ }).fill('40');
+    await combustion.getByRole('textbox', { name: /^Flue temp/ }).fill('410');
+    await combustion.getByRole('textbox', { name: /^Air temp/ }).fill('66');
+    const lwco = page.locator('li[data-item="lwco_test"]');
+    await lwco.getByRole('button', { name: 'Could not take it? Say why' }).click();
+    await missing.getByText('Say why the low-water cutoff test was not taken.').waitFor();
+    await lwco.getByRole('textbox', { name: 'Why the low-water cutoff test was not taken' }).fill('Boiler cold for a gauge-glass repair; test booked for the return visit.');
+    await page.getByRole('button', { name: 'Left operating', exact: true }).click();
+    await page.getByText('Everything a completed visit needs is recorded.').waitFor();
+    await page.screenshot({ path: `${screenshotDir()}/visit-ready-to-complete-360.png`, fullPage: false });
+
+    await page.getByRole('button', { name: 'Complete visit' }).click();
+    const confirmation = page.getByRole('status').filter({ hasText: 'Visit completed' });
+    await confirmation.waitFor();
+    expect(await confirmation.textContent()).toMatch(/The next annual service is due \w{3} \d{1,2}, \d{4}/);
+    await page.getByText('Required readings not taken').waitFor();
+    await page.getByText('Low-water cutoff test: Boiler cold for a gauge-glass repair').waitFor();
+    expect(page.url()).toBe(`${fx.server.baseUrl}/visits/${visitId}`);
+    await page.screenshot({ path: `${screenshotDir()}/visit-completed-360.png`, fullPage: false });
+
+    const [row] = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
+    expect(row).toMatchObject({ status: 'completed', outcome: 'left_operating', readingSkips: { lowWaterCutoff: 'Boiler cold for a gauge-glass repair; test booked for the return visit.' } });
+    expect(row.checklist.every((c) => c.mark === 'done')).toBe(true);
+    expect(row.readings).toMatchObject({ combustion: { o2Pct: 7.5, coPpm: 40, flueTempF: 410, airTempF: 66 } });
+    expect(completes).toEqual([1]);
     expect(errors).toEqual([]);
     await context.close();
   });

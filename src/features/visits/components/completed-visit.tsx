@@ -118,7 +118,7 @@ function JustCompleted({ visit, mayAmend }: { visit: VisitDto; mayAmend: boolean
       <ul className="mt-1 list-disc pl-5">
         <li>
           Signed off{visit.signedOffBy ? ` by ${visit.signedOffBy.name}` : ''}
-          {visit.signedOffAt ? ` at ${stampFormat.format(new Date(visit.signedOffAt))}` : ''}. It is on the appliance&apos;s life record now, and the homeowner
+          {visit.signedOffAt ? ` on ${stampFormat.format(new Date(visit.signedOffAt))}` : ''}. It is on the appliance&apos;s life record now, and the homeowner
           sees it through their share link or sign-in.
         </li>
         {visit.outcome === 'shut_down_unsafe' ? (

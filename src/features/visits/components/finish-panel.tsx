@@ -45,14 +45,16 @@ export function FinishPanel({
       ) : (
         <div
           id="complete-missing"
-          role={tried ? 'alert' : 'region'}
+          role="region"
           aria-label="Still needed before completing"
           className={`flex flex-col gap-2 rounded-plate border-2 p-3 ${tried ? 'border-due bg-due-soft' : 'border-plate-line bg-plate'}`}
         >
-          <p className="font-bold">
-            {tried ? 'Not completed yet. ' : ''}
-            {count === 1 ? 'One thing is' : `${count} things are`} still needed:
-          </p>
+          {tried && (
+            <p role="alert" className="font-bold text-due">
+              Not completed yet: fix what is listed here first.
+            </p>
+          )}
+          <p className="font-bold">{count === 1 ? 'One thing is' : `${count} things are`} still needed:</p>
           <ul className="flex flex-col text-sm">
             {steps.length > 0 && (
               <li data-missing="checklist">

@@ -47,5 +47,7 @@ export function liveRequirements(input: {
     const own = block !== null && typeof block === 'object' && Object.hasOwn(block, r.field);
     refused[own ? `readings.${key}.${r.field}` : `readings.${key}`] = [r.message];
   }
-  return Object.keys(refused).length ? completionRequirements({ ...facts, readingErrors: { ...facts.readingErrors, ...refused } }) : first;
+  const all = Object.keys(refused).length ? completionRequirements({ ...facts, readingErrors: { ...facts.readingErrors, ...refused } }) : first;
+  // Text that is not a number leaves the value empty; "must be a number" beside "type a number" says it twice.
+  return all.filter((r) => !(r.field in badText) || r.message === NOT_A_NUMBER);
 }
