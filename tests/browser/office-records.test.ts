@@ -9,6 +9,7 @@ import type { ApplianceRecordDto, SiteDto } from '../../shared/schemas/records';
 import type { VisitDto } from '../../shared/schemas/visits';
 import type { DueRuleDto } from '../../shared/schemas/due';
 import { LABELS } from '../../shared/schemas/enums';
+import { fullCompletion } from '../support/visit-completion';
 
 const DESKTOP = { viewport: { width: 1280, height: 800 } };
 
@@ -246,7 +247,7 @@ describe('office screens for the life record (desktop)', () => {
       .expect(200);
     await tech
       .post(`/api/visits/${visit.id}/complete`)
-      .send({ revision: (saved.body as VisitDto).revision, outcome: 'left_operating' })
+      .send(fullCompletion(saved.body as VisitDto))
       .expect(200);
 
     const context = await fx.browser.newContext(DESKTOP);
