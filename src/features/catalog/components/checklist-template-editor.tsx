@@ -9,6 +9,8 @@ import { useSaveChecklistTemplate } from '../api/save-checklist-template';
 import { newItemDraft, toTemplateBody, toTemplateDraft, type ItemDraft, type TemplateDraft } from './checklist-draft';
 import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
 import { useFocusFirstError } from '@/lib/use-focus-first-error';
+import { LABELS, type VisitType } from '@shared/schemas/enums';
+import { READING_LABELS } from '@shared/visits/reading-labels';
 
 export function ChecklistTemplateEditor({ template, onClose }: { template: ChecklistTemplateDto; onClose: () => void }) {
   const save = useSaveChecklistTemplate();
@@ -64,6 +66,7 @@ export function ChecklistTemplateEditor({ template, onClose }: { template: Check
         </Notice>
       )}
       <TextField label="Checklist name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={errors.name} />
+      <RequiredReadingsNote requiredReadings={template.requiredReadings} />
       <Notice kind="caution" title="Cautions reach the technician">
         Where an item can hurt someone (gas, carbon monoxide, steam pressure, low water, hot surfaces), write the caution
         in one sentence and defer to the manufacturer&rsquo;s instructions, local codes and licensed practice.
@@ -135,5 +138,20 @@ export function ChecklistTemplateEditor({ template, onClose }: { template: Check
       </div>
       <FormActions saving={save.isPending} submitLabel="Save checklist" onCancel={onClose} />
     </form>
+  );
+}
+
+/** Which readings a visit from this template must record (or skip with a reason) before it can be completed. */
+function RequiredReadingsNote({ requiredReadings }: { requiredReadings: ChecklistTemplateDto['requiredReadings'] }) {
+  const entries = Object.entries(requiredReadings ?? {}).filter(([, keys]) => keys?.length);
+  if (!entries.length) return null;
+  return (
+    <Notice kind="info" title="Required before a visit is completed">
+      {entries.map(([type, keys]) => (
+        <p key={type}>
+          {LABELS.visitType[type as VisitType]}: {keys!.map((k) => READING_LABELS[k]).join(', ')}. The technician records each or says why it was not taken.
+        </p>
+      ))}
+    </Notice>
   );
 }
