@@ -7,18 +7,21 @@ export function todayInTimeZone(timeZone: string, now: Date = new Date()): strin
 
 const MS_PER_DAY = 86_400_000;
 
+const wallClocks = new Map<string, Intl.DateTimeFormat>();
+/** Building a formatter is slow next to using one, and the seed reads thousands of instants. */
+function wallClockFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = wallClocks.get(timeZone);
+  if (!format) {
+    const fields = { year: 'numeric', month: 'numeric', day: 'numeric', hour: 'numeric', minute: 'numeric', second: 'numeric' } as const;
+    format = new Intl.DateTimeFormat('en-US', { timeZone, hourCycle: 'h23', ...fields });
+    wallClocks.set(timeZone, format);
+  }
+  return format;
+}
+
 /** The wall-clock reading in `timeZone` at `instant`, as if it were UTC (milliseconds, whole seconds). */
 function wallClockMs(timeZone: string, instant: number): number {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-    second: 'numeric',
-  }).formatToParts(new Date(instant));
+  const parts = wallClockFormat(timeZone).formatToParts(new Date(instant));
   const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
   return Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second'));
 }

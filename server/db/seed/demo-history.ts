@@ -10,6 +10,7 @@ import { findDefaultChecklist } from '../../modules/checklists/default-checklist
 import { requiredReadingsFor } from '../../modules/checklists/required-readings';
 import { ATTENTION_NOTES, demoFindings, demoReadings } from './demo-readings';
 import { partSlotsFor, type DemoApplianceShape, type PartSlot } from './demo-parts';
+import type { DemoClock } from './demo-clock';
 
 type Appliance = typeof appliances.$inferInsert & { id: string; installedOn: string };
 type ComponentRow = typeof components.$inferInsert & { id: string };
@@ -28,7 +29,6 @@ export type DemoHistoryPlan = {
 };
 export type DemoHistoryRows = { components: ComponentRow[]; visits: VisitRow[]; swaps: SwapRow[]; events: EventRow[] };
 
-const noonUtc = (date: string) => new Date(`${date}T12:00:00Z`);
 const partLabel = (typeCode: string, specKey: string) => `${COMPONENT_TYPES[typeCode as keyof typeof COMPONENT_TYPES].label}${specKey ? ` (${specKey})` : ''}`;
 
 function visitDates(f: Faker, installedOn: string, lastDay: string): string[] {
@@ -40,6 +40,21 @@ function visitDates(f: Faker, installedOn: string, lastDay: string): string[] {
     d = addDays(d, -f.number.int({ min: 345, max: 385 }));
   }
   return dates;
+}
+
+/**
+ * When a visit on `plannedOn` took place, in the company's time: arriving between 08:00 and 14:00 and staying one to
+ * two and a half hours. A visit planned for today that would not have ended by now took place the day before.
+ */
+export function visitTimes(f: Faker, clock: DemoClock, plannedOn: string) {
+  const arriveHour = 7 + f.number.int({ min: 1, max: 7 });
+  const lengthMs = f.number.int({ min: 60, max: 150 }) * 60_000;
+  const on = (visitedOn: string) => {
+    const arrivedAt = clock.at(visitedOn, arriveHour);
+    return { visitedOn, arrivedAt, departedAt: new Date(arrivedAt.getTime() + lengthMs) };
+  };
+  const planned = on(plannedOn);
+  return planned.departedAt <= clock.now ? planned : on(addDays(plannedOn, -1));
 }
 
 function readingSummary(k: Record<string, number>): string {
@@ -64,13 +79,13 @@ function checklistFor(f: Faker, plan: DemoHistoryPlan): ChecklistItemRecord[] {
   });
 }
 
-/** Visits, part swaps, components and timeline events for one appliance's past, oldest first. */
-export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan): DemoHistoryRows {
+/** Visits, part swaps, components and timeline events for one appliance's past, oldest first, none after `clock.now`. */
+export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClock): DemoHistoryRows {
   const { appliance: a, shape, technicianId } = plan;
   const rows: DemoHistoryRows = { components: [], visits: [], swaps: [], events: [] };
   const base = { companyId: a.companyId, applianceId: a.id };
   const label = [a.manufacturer, a.model].filter(Boolean).join(' ');
-  rows.events.push({ ...base, occurredAt: noonUtc(a.installedOn), kind: 'install', summary: `Installed: ${label}, ${LABELS.applianceKind[shape.kind].toLowerCase()}.`, actorId: technicianId });
+  rows.events.push({ ...base, occurredAt: clock.at(a.installedOn, 12), kind: 'install', summary: `Installed: ${label}, ${LABELS.applianceKind[shape.kind].toLowerCase()}.`, actorId: technicianId });
 
   type Current = { row: ComponentRow; slot: PartSlot; nextSwap: string | null };
   const nextSwapAfter = (slot: PartSlot, from: string) => (slot.swapEveryYears ? addYears(from, f.number.int({ min: slot.swapEveryYears[0], max: slot.swapEveryYears[1] })) : null);
@@ -100,12 +115,11 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan): DemoHistoryRo
     return { row, slot, nextSwap };
   });
 
-  dates.forEach((visitedOn, index) => {
+  dates.forEach((plannedOn, index) => {
     const last = index === dates.length - 1;
-    const wear = Math.min(1, daysBetween(a.installedOn, visitedOn) / 365 / 40);
     const visitId = f.string.uuid();
-    const arrivedAt = new Date(noonUtc(visitedOn).getTime() + f.number.int({ min: 1, max: 7 }) * 3_600_000);
-    const departedAt = new Date(arrivedAt.getTime() + f.number.int({ min: 60, max: 150 }) * 60_000);
+    const { visitedOn, arrivedAt, departedAt } = visitTimes(f, clock, plannedOn);
+    const wear = Math.min(1, daysBetween(a.installedOn, visitedOn) / 365 / 40);
     let type: VisitType = 'annual_maintenance';
     let outcome: VisitOutcome = 'left_operating';
     let outcomeReason: string | null = null;

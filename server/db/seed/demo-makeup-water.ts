@@ -1,14 +1,18 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Tx } from '../client';
 import { appliances, makeupWaterEntries, sites, timelineEvents } from '../schema/index';
+import type { DemoClock } from './demo-clock';
 
 const day = (iso: string, plus: number) => new Date(Date.parse(`${iso}T00:00:00Z`) + plus * 86_400_000).toISOString().slice(0, 10);
+/** The meters are read first thing in the morning, company time. */
+const READ_AT_HOUR = 8;
 
 /**
  * Invented feeder-meter logs for two steam boilers over the past heating season: one steady (a few gallons a month),
  * one whose use jumps in the last month, as a new leak would show. They make the makeup-water flags visible in the demo.
+ * The last reading is this morning's, or yesterday's when the seed runs before the morning reading.
  */
-export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; homeownerCustomerId: string; today: string }) {
+export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; homeownerCustomerId: string; clock: DemoClock }) {
   const steam = await tx
     .select({ id: appliances.id, customerId: sites.customerId })
     .from(appliances)
@@ -17,7 +21,7 @@ export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; ho
     .orderBy(asc(appliances.createdAt), asc(appliances.id));
   const steady = steam.find((a) => a.customerId === input.homeownerCustomerId);
   const leaking = steam.find((a) => a.customerId !== input.homeownerCustomerId);
-  const start = day(input.today, -150);
+  const start = day(input.clock.lastDayAt(READ_AT_HOUR), -150);
   const rows: (typeof makeupWaterEntries.$inferInsert)[] = [];
   if (steady) {
     let meter = 412;
@@ -37,7 +41,7 @@ export async function seedDemoMakeupWater(tx: Tx, input: { companyId: string; ho
     inserted.map((r) => ({
       companyId: r.companyId,
       applianceId: r.applianceId,
-      occurredAt: new Date(`${r.recordedOn}T12:00:00Z`),
+      occurredAt: input.clock.at(r.recordedOn, READ_AT_HOUR),
       kind: 'makeup_water' as const,
       summary: `Makeup-water meter read ${r.gallons!.toLocaleString('en-US')} gal`,
       refId: r.id,

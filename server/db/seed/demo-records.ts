@@ -1,7 +1,6 @@
 import type { Faker } from '@faker-js/faker';
 import type { Tx } from '../client';
 import { appliances, components, customers, partSwaps, sites, timelineEvents, visits } from '../schema/index';
-import { todayInTimeZone } from '../../../shared/dates';
 import { addDays, addYears } from '../../../shared/trade/iso-date';
 import { recomputeDueForCompany } from '../../modules/due/due.repository';
 import { applianceLabel } from '../../modules/appliances/appliance-label';
@@ -11,6 +10,7 @@ import { bulkInsert } from './bulk-insert';
 import { DEMO_COMPANY, OTHER_COMPANY } from './demo-accounts';
 import { buildDemoHistory, type DemoHistoryPlan, type DemoHistoryRows } from './demo-history';
 import { planAppliance } from './demo-plan';
+import { demoClock, type DemoClock } from './demo-clock';
 
 type Ids = { demoCompanyId: string; otherCompanyId: string; homeownerCustomerId: string; userIds: Record<string, string> };
 type CustomerRow = typeof customers.$inferInsert & { id: string };
@@ -44,7 +44,7 @@ class Batch {
   }
 }
 
-function newCustomer(f: Faker, companyId: string, kind: CustomerRow['kind'], today: string): CustomerRow {
+function newCustomer(f: Faker, companyId: string, kind: CustomerRow['kind'], clock: DemoClock): CustomerRow {
   const first = f.person.firstName();
   const last = f.person.lastName();
   return {
@@ -55,7 +55,7 @@ function newCustomer(f: Faker, companyId: string, kind: CustomerRow['kind'], tod
     phone: `555-${f.string.numeric(4)}`,
     email: `${first}.${last}`.toLowerCase().replace(/[^a-z.]/g, '') + '@example.test',
     remindersOptOut: f.datatype.boolean({ probability: 0.1 }),
-    createdAt: new Date(`${addDays(today, -f.number.int({ min: 30, max: 3650 }))}T15:00:00Z`),
+    createdAt: clock.at(addDays(clock.today, -f.number.int({ min: 30, max: 3650 })), 10),
   };
 }
 
@@ -71,14 +71,14 @@ function newSite(f: Faker, companyId: string, customerId: string, technicianId: 
   };
 }
 
-function addBoiler(f: Faker, batch: Batch, plan: Omit<DemoHistoryPlan, 'lastDay'> & { lastDay?: string }, today: string) {
+function addBoiler(f: Faker, batch: Batch, plan: Omit<DemoHistoryPlan, 'lastDay'> & { lastDay?: string }, clock: DemoClock) {
   batch.appliances.push(plan.appliance);
-  batch.add(buildDemoHistory(f, { lastDay: today, ...plan }));
+  batch.add(buildDemoHistory(f, { lastDay: clock.today, ...plan }, clock));
 }
 
-function seedDemoCompany(f: Faker, batch: Batch, ids: Ids) {
+function seedDemoCompany(f: Faker, batch: Batch, ids: Ids, clock: DemoClock) {
   const companyId = ids.demoCompanyId;
-  const today = todayInTimeZone(DEMO_COMPANY.timeZone);
+  const today = clock.today;
   const techs = [ids.userIds['tech@demo.test'], ids.userIds['tech2@demo.test']];
   const owner = ids.userIds['owner@demo.test'];
 
@@ -89,11 +89,11 @@ function seedDemoCompany(f: Faker, batch: Batch, ids: Ids) {
   home.row.fuel = 'natural_gas';
   home.shape.fuel = 'natural_gas';
   home.shape.steamLwco = 'float';
-  addBoiler(f, batch, { appliance: home.row, shape: home.shape, technicianId: techs[0], customerName: 'Agnes Pell' }, today);
+  addBoiler(f, batch, { appliance: home.row, shape: home.shape, technicianId: techs[0], customerName: 'Agnes Pell' }, clock);
 
   const kinds: CustomerRow['kind'][] = [...Array(30).fill('homeowner'), 'landlord', 'landlord', 'landlord', 'property_manager', 'property_manager'];
   kinds.forEach((kind, i) => {
-    const customer = newCustomer(f, companyId, kind, today);
+    const customer = newCustomer(f, companyId, kind, clock);
     batch.customers.push(customer);
     const siteCount = kind === 'homeowner' ? 1 : f.number.int({ min: 2, max: 3 });
     for (let s = 0; s < siteCount; s++) {
@@ -105,10 +105,10 @@ function seedDemoCompany(f: Faker, batch: Batch, ids: Ids) {
       if (i === 3 && s === 0) {
         const b = planAppliance(f, { ...common, ageYears: 38, variant: 'steam_gas' });
         b.row.status = 'out_of_service';
-        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape, special: 'unsafe' }, today);
+        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape, special: 'unsafe' }, clock);
       } else if (i === 5 && s === 0) {
         const b = planAppliance(f, { ...common, ageYears: 16, variant: 'steam_gas' });
-        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape, special: 'thermocouple_due' }, today);
+        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape, special: 'thermocouple_due' }, clock);
       } else if (i === 8 && s === 0) {
         // A replaced boiler: the old oil-fired steam boiler stays on record, removed, linked to its successor.
         const removedOn = addDays(addYears(today, -3), -40);
@@ -117,12 +117,12 @@ function seedDemoCompany(f: Faker, batch: Batch, ids: Ids) {
         successor.row.installedOn = removedOn;
         old.row.status = 'removed';
         old.row.replacedById = successor.row.id;
-        addBoiler(f, batch, { ...base, appliance: old.row, shape: old.shape, lastDay: removedOn }, today);
+        addBoiler(f, batch, { ...base, appliance: old.row, shape: old.shape, lastDay: removedOn }, clock);
         for (const c of batch.history.components) {
           if (c.applianceId === old.row.id && !c.removedOn) Object.assign(c, { removedOn, removalReason: 'Removed with the appliance' });
         }
-        addBoiler(f, batch, { ...base, appliance: successor.row, shape: successor.shape }, today);
-        const occurredAt = new Date(`${removedOn}T16:00:00Z`);
+        addBoiler(f, batch, { ...base, appliance: successor.row, shape: successor.shape }, clock);
+        const occurredAt = clock.at(removedOn, 11);
         const reason = 'Heat exchanger rusted through; replaced with a gas-fired hot-water boiler.';
         batch.history.events.push(
           { companyId, applianceId: old.row.id, occurredAt, kind: 'status', refId: successor.row.id, summary: `Removed; replaced by ${applianceLabel(successor.row)}: ${reason}`, data: { from: 'in_service', to: 'removed', replacedById: successor.row.id, removedOn, reason }, actorId: technicianId },
@@ -130,38 +130,42 @@ function seedDemoCompany(f: Faker, batch: Batch, ids: Ids) {
         );
       } else {
         const b = planAppliance(f, { ...common, ageYears: f.number.int({ min: 2, max: 40 }) });
-        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape }, today);
+        addBoiler(f, batch, { ...base, appliance: b.row, shape: b.shape }, clock);
         // Some larger buildings run a second boiler.
         if (kind === 'property_manager' && s === 0) {
           const second = planAppliance(f, { ...common, ageYears: f.number.int({ min: 2, max: 25 }), location: 'Boiler room, east' });
-          addBoiler(f, batch, { ...base, appliance: second.row, shape: second.shape }, today);
+          addBoiler(f, batch, { ...base, appliance: second.row, shape: second.shape }, clock);
         }
       }
     }
   });
 }
 
-function seedOtherCompany(f: Faker, batch: Batch, ids: Ids) {
+function seedOtherCompany(f: Faker, batch: Batch, ids: Ids, clock: DemoClock) {
   const companyId = ids.otherCompanyId;
-  const today = todayInTimeZone(OTHER_COMPANY.timeZone);
+  const today = clock.today;
   const manager = ids.userIds['other-manager@demo.test'];
   for (let i = 0; i < 3; i++) {
-    const customer = newCustomer(f, companyId, 'homeowner', today);
+    const customer = newCustomer(f, companyId, 'homeowner', clock);
     batch.customers.push(customer);
     const site = { ...newSite(f, companyId, customer.id, manager), town: 'Ashby Hollow' };
     batch.sites.push(site);
     const b = planAppliance(f, { companyId, siteId: site.id, today, ageYears: f.number.int({ min: 6, max: 30 }), createdBy: manager });
-    addBoiler(f, batch, { appliance: b.row, shape: b.shape, technicianId: manager, customerName: customer.name }, today);
+    addBoiler(f, batch, { appliance: b.row, shape: b.shape, technicianId: manager, customerName: customer.name }, clock);
   }
 }
 
-/** The life-record part of the demo: invented customers in and around Wrenfield, their boilers and years of visits. */
-export async function seedDemoRecords(tx: Tx, ids: Ids) {
+/**
+ * The life-record part of the demo: invented customers in and around Wrenfield, their boilers and years of visits,
+ * all of it in the past at `now` on each company's own clocks.
+ */
+export async function seedDemoRecords(tx: Tx, ids: Ids, now: Date) {
   const f = fakerFor(20261201);
   const batch = new Batch();
-  seedDemoCompany(f, batch, ids);
-  seedOtherCompany(f, batch, ids);
+  seedDemoCompany(f, batch, ids, demoClock(now, DEMO_COMPANY.timeZone));
+  const otherClock = demoClock(now, OTHER_COMPANY.timeZone);
+  seedOtherCompany(f, batch, ids, otherClock);
   await batch.write(tx);
   // The demo company's due dates are worked out by seedDemo after its own policies are applied.
-  await recomputeDueForCompany(tx, ids.otherCompanyId);
+  await recomputeDueForCompany(tx, ids.otherCompanyId, { today: otherClock.today });
 }

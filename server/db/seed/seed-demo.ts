@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import type { Db } from '../client';
+import type { DbOrTx } from '../client';
 import { companies } from '../schema/index';
 import { insertCompany } from '../factories/companies';
 import { insertHomeowner, insertMember } from '../factories/users';
@@ -9,13 +9,18 @@ import { seedDemoRecords } from './demo-records';
 import { applyDemoCompanyPolicies } from './demo-company-policies';
 import { recomputeDueForCompany } from '../../modules/due/due.repository';
 import { seedDemoMakeupWater } from './demo-makeup-water';
-import { todayInTimeZone } from '../../../shared/dates';
+import { demoClock } from './demo-clock';
+import { addYears } from '../../../shared/trade/iso-date';
 
-/** Seeds the invented demo scenario once; a second run finds the demo company and does nothing. */
-export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
+/**
+ * Seeds the invented demo scenario once; a second run finds the demo company and does nothing. Its history ends at
+ * `now` (the real clock unless given) on each company's own clocks: nothing in it has not happened yet.
+ */
+export async function seedDemo(db: DbOrTx, { now = new Date() }: { now?: Date } = {}): Promise<{ seeded: boolean }> {
   const [existing] = await db.select({ id: companies.id }).from(companies).where(eq(companies.name, DEMO_COMPANY.name)).limit(1);
   if (existing) return { seeded: false };
 
+  const clock = demoClock(now, DEMO_COMPANY.timeZone);
   await db.transaction(async (tx) => {
     const demo = await insertCompany(tx, DEMO_COMPANY);
     const other = await insertCompany(tx, OTHER_COMPANY);
@@ -35,12 +40,13 @@ export async function seedDemo(db: Db): Promise<{ seeded: boolean }> {
       name: DEMO_HOMEOWNER.name,
       email: DEMO_HOMEOWNER.email,
       phone: '555-0110',
+      createdAt: clock.at(addYears(clock.today, -6), 10),
     });
     await insertHomeowner(tx, { companyId: demo.id, customerId: homeownerCustomer.id, ...DEMO_HOMEOWNER, password: DEMO_PASSWORD });
-    await seedDemoRecords(tx, { demoCompanyId: demo.id, otherCompanyId: other.id, homeownerCustomerId: homeownerCustomer.id, userIds });
-    await seedDemoMakeupWater(tx, { companyId: demo.id, homeownerCustomerId: homeownerCustomer.id, today: todayInTimeZone(DEMO_COMPANY.timeZone) });
+    await seedDemoRecords(tx, { demoCompanyId: demo.id, otherCompanyId: other.id, homeownerCustomerId: homeownerCustomer.id, userIds }, now);
+    await seedDemoMakeupWater(tx, { companyId: demo.id, homeownerCustomerId: homeownerCustomer.id, clock });
     await applyDemoCompanyPolicies(tx, demo.id);
-    await recomputeDueForCompany(tx, demo.id);
+    await recomputeDueForCompany(tx, demo.id, { today: clock.today });
   });
   return { seeded: true };
 }
