@@ -1,8 +1,22 @@
-import { and, count, eq, inArray, isNull, sql } from 'drizzle-orm';
-import { afterAll, describe, expect, it } from 'vitest';
-import { appliances, companies, components, customers, partSwaps, sites, timelineEvents, visits } from '../../server/db/schema/index';
+import { and, count, eq, inArray, isNull, sql, TransactionRollbackError } from 'drizzle-orm';
+import type { PgColumn, PgTable } from 'drizzle-orm/pg-core';
+import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
+import type { Tx } from '../../server/db/client';
+import {
+  appliances,
+  companies,
+  components,
+  customers,
+  makeupWaterEntries,
+  partSwaps,
+  sites,
+  timelineEvents,
+  visits,
+} from '../../server/db/schema/index';
 import { seedDemo } from '../../server/db/seed/seed-demo';
 import { DEMO_COMPANY, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
+import { todayInTimeZone } from '../../shared/dates';
+import { addDays } from '../../shared/trade/iso-date';
 import { testApp } from '../support/context';
 import { completionRequirements } from '../../shared/visits/completion-requirements';
 import type { TradeFlag } from '../../shared/trade/trade-flag';
@@ -10,9 +24,120 @@ import type { TradeFlag } from '../../shared/trade/trade-flag';
 const { ctx } = testApp();
 afterAll(() => ctx.pool.end());
 
+type Stamped = { table: PgTable & { companyId: PgColumn }; column: PgColumn; label: string };
+const stamp = <T extends PgTable & { companyId: PgColumn }>(table: T, label: string, column: (t: T) => PgColumn): Stamped => ({ table, label, column: column(table) });
+
+/** Every instant the seed works out itself (created_at and updated_at are the database's own clock at the write). */
+const INSTANTS: Stamped[] = [
+  stamp(timelineEvents, 'timeline_events.occurred_at', (t) => t.occurredAt),
+  stamp(visits, 'visits.arrived_at', (t) => t.arrivedAt),
+  stamp(visits, 'visits.departed_at', (t) => t.departedAt),
+  stamp(visits, 'visits.completed_at', (t) => t.completedAt),
+  stamp(visits, 'visits.signed_off_at', (t) => t.signedOffAt),
+  stamp(visits, 'visits.outcome_told_at', (t) => t.outcomeToldAt),
+  stamp(customers, 'customers.created_at', (t) => t.createdAt),
+];
+const DATES: Stamped[] = [
+  stamp(visits, 'visits.visited_on', (t) => t.visitedOn),
+  stamp(partSwaps, 'part_swaps.swapped_on', (t) => t.swappedOn),
+  stamp(appliances, 'appliances.installed_on', (t) => t.installedOn),
+  stamp(components, 'components.installed_on', (t) => t.installedOn),
+  stamp(components, 'components.last_inspected_on', (t) => t.lastInspectedOn),
+  stamp(components, 'components.removed_on', (t) => t.removedOn),
+  stamp(makeupWaterEntries, 'makeup_water_entries.recorded_on', (t) => t.recordedOn),
+];
+
+/** What a company's seeded rows hold after `bound` (an instant, or the company's date), and the latest of each. */
+async function laterThan(tx: Tx, companyId: string, stamps: Stamped[], bound: ReturnType<typeof sql>) {
+  const found: { label: string; latest: string | null; after: number }[] = [];
+  for (const s of stamps) {
+    const [row] = await tx
+      .select({ latest: sql<string | null>`max(${s.column})::text`, after: sql<number>`count(*) filter (where ${s.column} > ${bound})::int` })
+      .from(s.table)
+      .where(eq(s.table.companyId, companyId));
+    found.push({ label: s.label, ...row });
+  }
+  return found;
+}
+
+async function seededAt(tx: Tx, name: string, timeZone: string, now: Date) {
+  const [company] = await tx.select().from(companies).where(eq(companies.name, name));
+  expect(company.timeZone).toBe(timeZone);
+  const today = todayInTimeZone(timeZone, now);
+  const instants = await laterThan(tx, company.id, INSTANTS, sql`${now.toISOString()}::timestamptz`);
+  const dates = await laterThan(tx, company.id, DATES, sql`${today}::date`);
+  // A visit's date is the company's date when the technician arrived.
+  const [{ misdated }] = await tx
+    .select({ misdated: sql<number>`count(*) filter (where (${visits.arrivedAt} at time zone ${timeZone})::date <> ${visits.visitedOn} or ${visits.departedAt} < ${visits.arrivedAt})::int` })
+    .from(visits)
+    .where(eq(visits.companyId, company.id));
+  const failedParts = await tx
+    .select({ dueOn: components.dueOn })
+    .from(components)
+    .where(and(eq(components.companyId, company.id), eq(components.conditionFailed, true), isNull(components.removedOn)));
+  return { today, instants, dates, misdated, failedDueOn: failedParts.map((p) => p.dueOn) };
+}
+
+/** Seeds the whole demo inside a transaction that is then rolled back, so it can be seeded again at another time. */
+async function seedAndRollBack<T>(inspect: (tx: Tx) => Promise<T>): Promise<T> {
+  let result: T | undefined;
+  await ctx.db
+    .transaction(async (tx) => {
+      expect(await seedDemo(tx)).toEqual({ seeded: true });
+      result = await inspect(tx);
+      tx.rollback();
+    })
+    .catch((e) => {
+      if (!(e instanceof TransactionRollbackError)) throw e;
+    });
+  return result!;
+}
+
+// Source: 15 U.S.C. 260a: daylight time runs from 2:00 a.m. on the second Sunday of March to 2:00 a.m. on the first
+// Sunday of November (2026-03-08 and 2026-11-01); New York is UTC−5 in winter, UTC−4 in daylight time.
+const CLOCKS: [string, string][] = [
+  ['00:30 on a winter night', '2026-01-15T00:30:00-05:00'],
+  ['06:00 on a winter morning', '2026-01-15T06:00:00-05:00'],
+  ['12:00 in summer', '2026-07-15T12:00:00-04:00'],
+  ['23:30 in summer (already the next day in UTC)', '2026-07-15T23:30:00-04:00'],
+  ['03:30 just after the clocks went forward', '2026-03-08T03:30:00-04:00'],
+  ['01:30 in the repeated hour after the clocks went back', '2026-11-01T01:30:00-05:00'],
+];
+
 describe('demo seed', () => {
+  afterEach(() => vi.useRealTimers());
+
+  // These seed and roll back; they run before the demo below is seeded for good. A whole demo takes a few seconds,
+  // longer on a busy machine: the limit only stops a hung run.
+  it.each(CLOCKS)('writes nothing that has not happened yet when it runs at %s in the company’s zone', async (_label, at) => {
+    const now = new Date(at);
+    vi.setSystemTime(now);
+    const seen = await seedAndRollBack(async (tx) => ({
+      demo: await seededAt(tx, DEMO_COMPANY.name, DEMO_COMPANY.timeZone, now),
+      other: await seededAt(tx, OTHER_COMPANY.name, OTHER_COMPANY.timeZone, now),
+    }));
+    expect(seen.demo.today).toBe(at.slice(0, 10));
+    // The small company has no unsafe visit and no feeder meter; the demo company has every kind of stamp, so the
+    // check looked at real rows.
+    const unwritten = { demo: [], other: ['visits.outcome_told_at', 'makeup_water_entries.recorded_on'] };
+    for (const key of ['demo', 'other'] as const) {
+      const stamps = [...seen[key].instants, ...seen[key].dates];
+      expect(stamps.filter((s) => s.after > 0)).toEqual([]);
+      expect(stamps.filter((s) => s.latest === null).map((s) => s.label)).toEqual(unwritten[key]);
+      expect(seen[key].misdated).toBe(0);
+    }
+    // The feeder meters are read at 08:00: this morning's reading, or yesterday's before then.
+    const lastReading = seen.demo.dates.find((d) => d.label === 'makeup_water_entries.recorded_on')!.latest;
+    expect(lastReading).toBe(now.getTime() >= Date.parse(`${seen.demo.today}T08:00:00${at.slice(-6)}`) ? seen.demo.today : addDays(seen.demo.today, -1));
+    // A part failed on condition is due on the company's today, not the database server's.
+    expect(seen.demo.failedDueOn.length).toBeGreaterThanOrEqual(1);
+    expect(new Set(seen.demo.failedDueOn)).toEqual(new Set([seen.demo.today]));
+  }, 60_000);
+
+  const SEEDED_AT = new Date('2026-12-03T08:00:00-05:00');
+
   it('seeds once; a second run adds nothing', async () => {
-    await seedDemo(ctx.db);
+    await seedDemo(ctx.db, { now: SEEDED_AT });
     const again = await seedDemo(ctx.db);
     expect(again.seeded).toBe(false);
     const [{ n }] = await ctx.db.select({ n: count() }).from(companies).where(eq(companies.name, DEMO_COMPANY.name));
@@ -58,7 +183,10 @@ describe('demo seed', () => {
       .where(eq(timelineEvents.companyId, demo.id))
       .groupBy(timelineEvents.kind);
     expect(kinds.map((k) => k.kind).sort()).toEqual(['install', 'makeup_water', 'part_swap', 'reading', 'status', 'visit']);
-    const future = await ctx.db.select({ n: count() }).from(timelineEvents).where(and(eq(timelineEvents.companyId, demo.id), sql`${timelineEvents.occurredAt} > now()`));
+    const future = await ctx.db
+      .select({ n: count() })
+      .from(timelineEvents)
+      .where(and(eq(timelineEvents.companyId, demo.id), sql`${timelineEvents.occurredAt} > ${SEEDED_AT.toISOString()}::timestamptz`));
     expect(future[0].n).toBe(0);
     const removed = demoAppliances.filter((a) => a.status === 'removed');
     expect(removed).toHaveLength(1);
