@@ -7,9 +7,9 @@ import { sql, type SQL } from 'drizzle-orm';
  * due_reason holds the "why" part of computeComponentDue's reason (it does not go stale as days pass);
  * describeStoredDue (due-status.ts) rebuilds the full sentence for a given today.
  *
- * `today` defaults to the date in the company's time zone.
+ * `today` is the company's date, worked out by the caller.
  */
-export function recomputeDueStatement(scope: SQL, today: string | null): SQL {
+export function recomputeDueStatement(scope: SQL, today: string): SQL {
   return sql`
     with base as (
       select
@@ -24,10 +24,9 @@ export function recomputeDueStatement(scope: SQL, today: string | null): SQL {
           when a.installed_on is not null then 'original with the appliance, installed ' || to_char(a.installed_on, 'YYYY-MM-DD')
         end as installed_from,
         c.last_inspected_on as last_inspected,
-        coalesce(${today}::date, (now() at time zone co.time_zone)::date) as today
+        ${today}::date as today
       from components c
       join appliances a on a.id = c.appliance_id and a.company_id = c.company_id
-      join companies co on co.id = c.company_id
       left join lateral (
         select dr.replacement_policy, dr.replacement_age_years, dr.inspection_interval_months
         from due_rules dr

@@ -3,15 +3,20 @@ import type { DbOrTx } from '../../db/client';
 import { appliances, componentCatalog, components, customers, dueRules, sites, users } from '../../db/schema/index';
 import type { ApplianceKind } from '../../../shared/schemas/enums';
 import { recomputeDueStatement } from './due-recompute.sql';
+import { companyToday } from './company-today';
+
+// `today` defaults to the company's date by the app's clock (not the database server's), as every other date rule.
 
 /** Rewrites the due date of every present component of one appliance, in one statement. */
 export async function recomputeDueForAppliance(db: DbOrTx, companyId: string, applianceId: string, options: { today?: string } = {}): Promise<void> {
-  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId} and c.appliance_id = ${applianceId}`, options.today ?? null));
+  const today = options.today ?? (await companyToday(db, companyId));
+  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId} and c.appliance_id = ${applianceId}`, today));
 }
 
 /** Rewrites the due date of every present component of the company, in one statement (after a rule change). */
 export async function recomputeDueForCompany(db: DbOrTx, companyId: string, options: { today?: string } = {}): Promise<void> {
-  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId}`, options.today ?? null));
+  const today = options.today ?? (await companyToday(db, companyId));
+  await db.execute(recomputeDueStatement(sql`c.company_id = ${companyId}`, today));
 }
 
 export type DueRuleRow = typeof dueRules.$inferSelect;
