@@ -5,8 +5,11 @@ import { todayInTimeZone } from '../../shared/dates';
 import { addMonths } from '../../shared/trade/iso-date';
 import { testApp } from '../support/context';
 import { agentsFor, createTenant, type Tenant } from '../support/tenant';
+import { runFileAt } from '../support/clock';
 
 const { app, ctx } = testApp();
+// A Wednesday noon in the company's zone: "today" and every date worked out from it stay put while the file runs.
+runFileAt('2026-11-18T12:00:00-05:00');
 let t: Tenant;
 let other: Tenant;
 let as: Awaited<ReturnType<typeof agentsFor>>;

@@ -10,8 +10,11 @@ import { addDays, addMonths } from '../../shared/trade/index';
 import { testApp } from '../support/context';
 import { agentsFor, createTenant, signIn, type Agent, type Tenant } from '../support/tenant';
 import { fullCompletion, GOOD_COMBUSTION } from '../support/visit-completion';
+import { runFileAt } from '../support/clock';
 
 const { app, ctx } = testApp();
+// A Wednesday noon in the company's zone: "today" and every date worked out from it stay put while the file runs.
+runFileAt('2026-11-18T12:00:00-05:00');
 let t: Tenant;
 let other: Tenant;
 let as: Awaited<ReturnType<typeof agentsFor>>;
