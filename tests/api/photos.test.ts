@@ -228,11 +228,13 @@ describe('sweeping orphaned objects', () => {
     const stray = `${prefixOf(heaterId)}${crypto.randomUUID()}-display.jpg`;
     await ctx.storage.put(stray, await solidJpeg(9, 9, 9), 'image/jpeg');
     const prefix = `${t.company.id}/`;
-    expect(await sweepOrphanObjects(ctx, { olderThanHours: 24, prefix })).toEqual({ deleted: [] });
+    // Ages are read against the store's own time stamp, so the check holds whatever the two clocks say.
+    const [{ lastModified }] = await ctx.storage.list(prefixOf(heaterId));
+    const hoursAfterStoring = (h: number) => new Date(lastModified.getTime() + h * 3_600_000);
+    expect(await sweepOrphanObjects(ctx, { olderThanHours: 24, prefix, now: hoursAfterStoring(23) })).toEqual({ deleted: [] });
     expect((await ctx.storage.list(prefixOf(heaterId))).map((o) => o.key)).toEqual([stray]);
 
-    const tomorrow = new Date(Date.now() + 25 * 3_600_000);
-    expect(await sweepOrphanObjects(ctx, { olderThanHours: 24, prefix, now: tomorrow })).toEqual({ deleted: [stray] });
+    expect(await sweepOrphanObjects(ctx, { olderThanHours: 24, prefix, now: hoursAfterStoring(25) })).toEqual({ deleted: [stray] });
     expect(await ctx.storage.list(prefixOf(heaterId))).toHaveLength(0);
     // Every object of a stored photo is still there.
     const rows = await rowsFor(boiler.id);
