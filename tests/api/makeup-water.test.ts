@@ -4,8 +4,12 @@ import { makeupWaterEntries, timelineEvents } from '../../server/db/schema/index
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { testApp } from '../support/context';
 import { agentsFor, createTenant, type Tenant } from '../support/tenant';
+import { runFileAt } from '../support/clock';
 
 const { app, ctx } = testApp();
+// 06:30 in New York (the tenant's zone) is 11:30 UTC: today's noon UTC still lies ahead.
+const NOW = '2026-11-18T06:30:00-05:00';
+runFileAt(NOW);
 let t: Tenant;
 let other: Tenant;
 let as: Awaited<ReturnType<typeof agentsFor>>;
@@ -76,5 +80,22 @@ describe('makeup-water log', () => {
     expect((await as.manager.get(url(otherBoilerId))).status).toBe(404);
     expect((await as.manager.post(url(otherBoilerId)).send({ kind: 'added_by_hand', recordedOn: '2026-03-21' })).status).toBe(404);
     expect(await ctx.db.select().from(makeupWaterEntries).where(eq(makeupWaterEntries.applianceId, otherBoilerId))).toHaveLength(0);
+  });
+
+  it('dates a reading made today at the moment it is recorded, never ahead of it, and refuses a date after today', async () => {
+    const site = await insertSite(ctx.db, { companyId: t.company.id, customerId: t.customer.id });
+    const fresh = (await insertAppliance(ctx.db, { companyId: t.company.id, siteId: site.id })).id;
+    const before = Date.now();
+    const res = await as.technician.post(url(fresh)).send({ kind: 'meter_reading', recordedOn: '2026-11-18', gallons: 40 });
+    const after = Date.now();
+    expect(res.status).toBe(201);
+    const [event] = await ctx.db.select().from(timelineEvents).where(and(eq(timelineEvents.applianceId, fresh), eq(timelineEvents.kind, 'makeup_water')));
+    expect(event.occurredAt.getTime()).toBeGreaterThanOrEqual(before);
+    expect(event.occurredAt.getTime()).toBeLessThanOrEqual(after);
+
+    const tomorrow = await as.technician.post(url(fresh)).send({ kind: 'added_by_hand', recordedOn: '2026-11-19' });
+    expect(tomorrow.status).toBe(400);
+    expect(tomorrow.body.error.details).toEqual({ recordedOn: ['A reading cannot be dated in the future.'] });
+    expect(await ctx.db.select().from(makeupWaterEntries).where(eq(makeupWaterEntries.applianceId, fresh))).toHaveLength(1);
   });
 });

@@ -5,6 +5,8 @@ import { TradeInputError } from '../../../shared/trade/trade-input-error';
 import type { MakeupWaterDto, MakeupWaterEntryDto, MakeupWaterEntryInput } from '../../../shared/schemas/makeup-water';
 import { recordAudit } from '../audit/audit.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { companyToday } from '../due/company-today';
+import { occurredAtForDate } from '../appliances/occurred-at';
 import { makeupWaterRepository as repo } from './makeup-water.repository';
 
 const toTradeEntry = (e: MakeupWaterEntryDto): MakeupWaterEntry =>
@@ -25,6 +27,8 @@ export function makeupWaterService(ctx: AppContext) {
     async add(actor: { companyId: string; userId: string }, applianceId: string, input: MakeupWaterEntryInput): Promise<MakeupWaterDto> {
       return ctx.db.transaction(async (tx) => {
         if (!(await repo.findAppliance(tx, actor.companyId, applianceId))) throw notFound('Appliance');
+        const today = await companyToday(tx, actor.companyId);
+        if (input.recordedOn > today) throw validationFailed({ recordedOn: ['A reading cannot be dated in the future.'] });
         const existing = await repo.list(tx, actor.companyId, applianceId);
         const candidate: MakeupWaterEntryDto = { id: 'new', recordedOn: input.recordedOn, kind: input.kind, gallons: input.gallons ?? null, note: input.note ?? null };
         try {
@@ -42,7 +46,8 @@ export function makeupWaterService(ctx: AppContext) {
         await appendTimelineEvent(tx, {
           companyId: actor.companyId,
           applianceId,
-          occurredAt: new Date(`${input.recordedOn}T12:00:00Z`),
+          // Today's entry happened just now; noon UTC of today could still lie ahead.
+          occurredAt: occurredAtForDate(input.recordedOn, today),
           kind: 'makeup_water',
           summary,
           refId: row.id,
