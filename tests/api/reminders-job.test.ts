@@ -67,5 +67,6 @@ describe('the reminders job on pg-boss', () => {
     });
     expect(await ctx.db.select().from(reminders).where(eq(reminders.companyId, company.id))).toHaveLength(1);
     expect(mailTo(owner.email!)).toHaveLength(1);
-  });
+    // Room for both bounded waits (30 s each): the polls decide when to give up, not the default test limit.
+  }, 75_000);
 });
