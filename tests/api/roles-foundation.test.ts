@@ -50,6 +50,14 @@ describe('row: company settings (owner only)', () => {
     expect(audits.some((a) => a.action === 'update' && a.actorId === t.owner.user.id)).toBe(true);
   });
 
+  it('answers a change that names no field with the company as it is, writing nothing', async () => {
+    const before = await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, t.company.id));
+    const res = await as.owner.patch('/api/company').send({});
+    expect(res.status).toBe(200);
+    expect(res.body.id).toBe(t.company.id);
+    expect(await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, t.company.id))).toHaveLength(before.length);
+  });
+
   it('refuses manager, technician and homeowner with 403', async () => {
     for (const agent of [as.manager, as.technician, as.homeowner]) {
       expect((await agent.patch('/api/company').send({ phone: '555-0100' })).status).toBe(403);

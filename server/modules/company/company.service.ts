@@ -22,6 +22,8 @@ export function companyService(ctx: AppContext) {
       return toDto(company);
     },
     async update(companyId: string, actorId: string, input: CompanySettingsInput) {
+      // Nothing named, nothing to write (an UPDATE with no columns is an SQL error).
+      if (Object.values(input).every((v) => v === undefined)) return this.get(companyId);
       return ctx.db.transaction(async (tx) => {
         const company = await companyRepository.update(tx, companyId, input);
         if (!company) throw notFound('Company');
