@@ -7,6 +7,7 @@ import type { AppConfig } from '../config';
 import { magicLinkAuth, type MagicLinkDeps } from './magic-link';
 import { passwordGuards } from './password-guards';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from './password-policy';
+import { passwordChangeEndsOtherSessions } from './password-change';
 
 export const CLIENT_IP_HEADER = 'x-lifeplate-client-ip';
 
@@ -23,7 +24,7 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
     // Accounts come only from invitations and homeowner links (server-side), so open sign-up is off: it answers the
     // same 400 for every address instead of telling which ones exist.
     emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: PASSWORD_MIN_LENGTH, maxPasswordLength: PASSWORD_MAX_LENGTH, autoSignIn: true },
-    plugins: [links.plugin],
+    plugins: [links.plugin, passwordChangeEndsOtherSessions()],
     hooks: {
       before: createAuthMiddleware(async (ctx) => (await passwords.before(ctx)) ?? links.beforeHook(ctx)),
       after: createAuthMiddleware(async (ctx) => passwords.after(ctx)),
@@ -36,7 +37,8 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
       // refuses a session the moment it is signed out, deleted elsewhere or its member deactivated: the session row
       // is checked in the query that reads the membership on every request (server/auth/principal-repository.ts).
       // better-auth's own endpoints outside its sensitive ones (/get-session, /update-user) still trust the cookie
-      // for that minute; the app calls neither from the browser.
+      // for that minute; the app calls neither from the browser. A password change deletes the user's other sessions
+      // (./password-change.ts), so they are refused at once too.
       cookieCache: { enabled: true, maxAge: 60 },
     },
     rateLimit: {
