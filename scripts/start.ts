@@ -15,6 +15,7 @@ import { acquireLock, writeLock } from './lib/lock';
 import { CLIENT_DIST } from './lib/paths';
 import { localDataRoot, localPgPort } from './lib/local-cluster';
 import { supervise } from './lib/supervise';
+import { appDatabaseName } from './lib/settings';
 
 const dev = process.argv.includes('--dev');
 const log = (line: string) => console.log(`[lifeplate] ${line}`);
@@ -34,7 +35,7 @@ async function main() {
   const services = await startLocalServices({
     dataRoot,
     pgPort: localPgPort(),
-    database: 'lifeplate',
+    database: appDatabaseName(dataRoot),
     s3Port: Number(process.env.FAKE_S3_PORT ?? 4569),
     smtpPort: Number(process.env.FAKE_SMTP_PORT ?? 2525),
     env: process.env,
