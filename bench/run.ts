@@ -1,11 +1,11 @@
 /**
- * `npm run bench [-- --db lifeplate_bench_100k --growth-db lifeplate_bench_10k --quick --no-client]`: boots the
- * app on a bench database (see `npm run bench:data`), measures the figures in docs/performance.md, prints a
- * table and writes bench/results/<date>.json.
+ * `npm run bench [-- --db lifeplate_bench_100k --growth-db lifeplate_bench_10k --quick --no-client --crew 200
+ * --crew-seconds 60 --no-crew]`: boots the app on a bench database (see `npm run bench:data`), measures the
+ * figures in docs/performance.md and docs/reliability.md, prints a table and writes bench/results/<date>.json.
  */
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { parseArgs } from './lib/args';
+import { parseArgs, positiveInt } from './lib/args';
 import { benchDbName, databaseExists, databaseUrlOn, localBenchServer } from './lib/bench-db';
 import { runBench } from './server/run-bench';
 import { runMigrations } from '../server/db/migrate';
@@ -13,7 +13,16 @@ import { runMigrations } from '../server/db/migrate';
 const HERE = path.dirname(fileURLToPath(import.meta.url));
 
 async function main() {
-  const args = parseArgs(process.argv.slice(2), { db: 'string', 'growth-db': 'string', quick: 'boolean', 'no-client': 'boolean', out: 'string' });
+  const args = parseArgs(process.argv.slice(2), {
+    db: 'string',
+    'growth-db': 'string',
+    quick: 'boolean',
+    'no-client': 'boolean',
+    out: 'string',
+    crew: 'string',
+    'crew-seconds': 'string',
+    'no-crew': 'boolean',
+  });
   const log = (line: string) => console.log(`[bench] ${line}`);
   const database = typeof args.db === 'string' ? args.db : benchDbName(100_000);
   const growthName = typeof args['growth-db'] === 'string' ? args['growth-db'] : benchDbName(10_000);
@@ -29,6 +38,10 @@ async function main() {
       growthDatabaseUrl: growth,
       quick: Boolean(args.quick),
       client: !args['no-client'],
+      crew:
+        args['no-crew'] ? null
+        : args.crew || args['crew-seconds'] ? { technicians: positiveInt('crew', args.crew, 200), seconds: positiveInt('crew-seconds', args['crew-seconds'], 60) }
+        : undefined,
       outDir: typeof args.out === 'string' ? args.out : path.join(HERE, 'results'),
       log,
     });

@@ -21,6 +21,7 @@ import { timePhotoPipeline, twelveMegapixelJpeg } from './photo-pipeline';
 import { formatTable, machineFacts, writeResults } from './report';
 import { loadSamples } from './samples';
 import { measureClientHalf } from './client-half';
+import { crewRows, FULL_CREW, QUICK_CREW, type CrewScale } from './crew-figures';
 
 export type RunOptions = {
   databaseUrl: string;
@@ -33,6 +34,8 @@ export type RunOptions = {
   log: (line: string) => void;
   /** Where the table goes (default: stdout). */
   print?: (text: string) => void;
+  /** Concurrent technicians (default 200 for 60 s, quick 10 for 3 s); null skips them. */
+  crew?: CrewScale | null;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -96,6 +99,9 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
         met: p.usesIndexScan && !p.fullTableSort,
         note: `top node: ${p.topNode}; index scan on components: ${p.usesIndexScan ? 'yes' : 'no'}; full-table sort: ${p.fullTableSort ? 'yes' : 'no'}${p.seqScans.length ? `; seq scans: ${p.seqScans.join(', ')}` : ''}`,
       });
+
+      const crew = opts.crew === undefined ? (scale.quick ? QUICK_CREW : FULL_CREW) : opts.crew;
+      if (crew) figures.push(...(await crewRows(run, scale, crew, log)));
 
       if (opts.client) figures.push(...(await measureClientHalf(run, scale, log)));
     });

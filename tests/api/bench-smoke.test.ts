@@ -21,6 +21,9 @@ const SERVER_FIGURES = [
   'pgbench, the same timeline SQL',
   'Timeline throughput / pgbench',
   'Due query plan (EXPLAIN ANALYZE, first page)',
+  'Concurrent technicians: draft save p99',
+  'Concurrent technicians: errors',
+  'Concurrent technicians: visits lost or duplicated',
   'Photo: 12 MP JPEG → display image + thumbnail, both stored',
   'Growth, timeline: p50 ratio',
   'Growth, search: p50 ratio',
@@ -67,6 +70,9 @@ describe('bench smoke (1,000 appliances, --quick)', () => {
       expect(typeof row!.value, name).toBe('number');
       expect(Number.isFinite(row!.value), name).toBe(true);
     }
+    // Correctness, not speed: the concurrent technicians lose and duplicate nothing and get no error.
+    expect(byName.get('Concurrent technicians: errors')!.value).toBe(0);
+    expect(byName.get('Concurrent technicians: visits lost or duplicated')!.value).toBe(0);
     expect(path.dirname(file)).toBe(outDir);
     const written = JSON.parse(fs.readFileSync(file, 'utf8')) as { figures: BenchFigure[]; database: { appliances: number } };
     expect(written.figures.map((f) => f.figure)).toEqual(figures.map((f) => f.figure));
