@@ -33,10 +33,6 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
       return;
     }
   }
-  // A store that is down (storage_unavailable) comes back by itself: tell the client when to try again.
-  if (status === 503) {
-    res.setHeader('Retry-After', '30');
-    req.log?.warn({ err }, 'request failed: a service is unavailable');
-  } else if (status >= 500) req.log?.error({ err }, 'request failed');
+  if (status >= 500) req.log?.error({ err }, 'request failed');
   res.status(status).json({ error: body });
 };

@@ -65,7 +65,7 @@ describe('photo upload while the photo store is down', () => {
     await stopStore();
     const res = await upload(10);
     expect(res.status).toBe(503);
-    expect(res.body.error.code).toBe('storage_unavailable');
+    expect(res.body.error.code).toBe('unavailable');
     expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
     await nothingRecorded();
     await startStore();
@@ -81,7 +81,7 @@ describe('photo upload while the photo store is down', () => {
     });
     const res = await upload(20);
     expect(res.status).toBe(503);
-    expect(res.body.error.code).toBe('storage_unavailable');
+    expect(res.body.error.code).toBe('unavailable');
     await nothingRecorded();
 
     await startStore();
