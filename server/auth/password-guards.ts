@@ -43,9 +43,13 @@ export function passwordGuards(db: Db, secret: string) {
       if (problem) throw new APIError('BAD_REQUEST', { code: 'validation_failed', message: problem, details: { [name]: [problem] } });
     },
     async after(ctx: GuardContext) {
-      if (ctx.path !== SIGN_IN_PATH || isAPIError(ctx.context.returned)) return;
+      if (ctx.path !== SIGN_IN_PATH) return;
       const email = field(ctx.body, 'email');
-      if (email) await throttle.succeeded(email);
+      if (!email) return;
+      const returned = ctx.context.returned;
+      if (!isAPIError(returned)) await throttle.succeeded(email);
+      // A wrong password (401) and a lock (429) keep their count; any other failure never judged the password.
+      else if (returned.statusCode !== 401 && returned.statusCode !== 429) await throttle.refund(email).catch(() => {});
     },
   };
 }

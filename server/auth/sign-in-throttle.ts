@@ -49,6 +49,20 @@ export function createSignInThrottle(db: Db, secret: string) {
         return decision;
       });
     },
+    /** An attempt that never reached the password check (the sign-in failed for another reason) does not count. */
+    async refund(email: string) {
+      const key = keyOf(email);
+      await db.transaction(async (tx) => {
+        const [row] = await tx.select().from(signInThrottle).where(eq(signInThrottle.key, key)).for('update');
+        if (!row || row.attempts === 0) return;
+        const attempts = row.attempts - 1;
+        const lock = lockSecondsAfter(attempts);
+        await tx
+          .update(signInThrottle)
+          .set({ attempts, lockedUntil: lock ? new Date(row.lastAttemptAt.getTime() + lock * 1000) : null })
+          .where(eq(signInThrottle.key, key));
+      });
+    },
     async succeeded(email: string) {
       await db.delete(signInThrottle).where(eq(signInThrottle.key, keyOf(email)));
     },
