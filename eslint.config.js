@@ -18,6 +18,18 @@ export default tseslint.config(
     },
   },
   {
+    // Every string a request carries goes through storableText() (shared/schemas/common.ts), which refuses text
+    // PostgreSQL cannot store; a bare z.string() would reopen that hole.
+    files: ['shared/**/*.ts', 'server/**/*.ts'],
+    ignores: ['shared/schemas/common.ts', 'server/config.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        { selector: "MemberExpression[object.name='z'][property.name='string']", message: 'Use storableText() from shared/schemas/common.ts.' },
+      ],
+    },
+  },
+  {
     // Features never import each other (bulletproof-react); shared code lives in components/, lib/ and shared/.
     files: ['src/features/**/*.{ts,tsx}'],
     rules: {

@@ -8,6 +8,7 @@ import { magicLinkAuth, type MagicLinkDeps } from './magic-link';
 import { passwordGuards } from './password-guards';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from './password-policy';
 import { passwordChangeEndsOtherSessions } from './password-change';
+import { storableTextPlugin } from './storable-text-plugin';
 
 export const CLIENT_IP_HEADER = 'x-lifeplate-client-ip';
 
@@ -24,7 +25,7 @@ export function createAuth(db: NodePgDatabase<typeof schema>, config: AppConfig,
     // Accounts come only from invitations and homeowner links (server-side), so open sign-up is off: it answers the
     // same 400 for every address instead of telling which ones exist.
     emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: PASSWORD_MIN_LENGTH, maxPasswordLength: PASSWORD_MAX_LENGTH, autoSignIn: true },
-    plugins: [links.plugin, passwordChangeEndsOtherSessions()],
+    plugins: [storableTextPlugin, links.plugin, passwordChangeEndsOtherSessions()],
     hooks: {
       before: createAuthMiddleware(async (ctx) => (await passwords.before(ctx)) ?? links.beforeHook(ctx)),
       after: createAuthMiddleware(async (ctx) => passwords.after(ctx)),

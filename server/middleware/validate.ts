@@ -1,6 +1,8 @@
 import type { NextFunction, Request, Response } from 'express';
 import { z } from 'zod';
 import { validationFailed } from '../lib/http-error';
+import { unstorableTextPaths } from '../lib/storable-text';
+import { UNSTORABLE_TEXT_MESSAGE } from '../../shared/schemas/common';
 
 type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
 type Out<S, K extends keyof S> = S[K] extends z.ZodType ? z.output<S[K]> : undefined;
@@ -10,8 +12,10 @@ export type Valid<S extends Schemas> = { body: Out<S, 'body'>; query: Out<S, 'qu
 export function fieldErrors(error: z.ZodError): Record<string, string[]> {
   const out: Record<string, string[]> = {};
   for (const issue of error.issues) {
-    const key = issue.path.join('.') || '_';
-    (out[key] ??= []).push(issue.message);
+    // A refused record key is reported at its record, with the reason: the key itself may be the text we refuse.
+    const badKey = issue.code === 'invalid_key';
+    const key = (badKey ? issue.path.slice(0, -1) : issue.path).join('.') || '_';
+    (out[key] ??= []).push(badKey ? (issue.issues[0]?.message ?? issue.message) : issue.message);
   }
   return out;
 }
@@ -24,8 +28,12 @@ export function validate<S extends Schemas>(schemas: S) {
       const schema = schemas[part];
       if (!schema) continue;
       const result = schema.safeParse(req[part] ?? {});
-      if (result.success) valid[part] = result.data;
-      else Object.assign(errors, fieldErrors(result.error));
+      if (!result.success) {
+        Object.assign(errors, fieldErrors(result.error));
+        continue;
+      }
+      valid[part] = result.data;
+      for (const key of unstorableTextPaths(result.data)) (errors[key] ??= []).push(UNSTORABLE_TEXT_MESSAGE);
     }
     if (Object.keys(errors).length) return next(validationFailed(errors));
     res.locals.valid = valid;

@@ -1,24 +1,25 @@
 import { z } from 'zod';
-import { requiredText } from './common';
+import { nonEmptyPatch, requiredText, storableText } from './common';
 import { MEMBER_ROLES } from './roles';
 
 const timeZones = new Set(Intl.supportedValuesOf('timeZone'));
 
-export const companySettingsInput = z.object({
-  name: requiredText('Company name', 120).optional(),
-  phone: requiredText('Phone', 40).optional(),
-  timeZone: z
-    .string()
-    .refine((tz) => timeZones.has(tz) || tz === 'UTC', 'Pick a time zone from the list, e.g. America/New_York.')
-    .optional(),
-  underFiringTolerancePct: z
-    .number('Give a percentage.')
-    .int('Use a whole percentage.')
-    .min(1, 'At least 1 %.')
-    .max(50, 'At most 50 %.')
-    .nullable()
-    .optional(),
-});
+export const companySettingsInput = nonEmptyPatch(
+  z.object({
+    name: requiredText('Company name', 120).optional(),
+    phone: requiredText('Phone', 40).optional(),
+    timeZone: storableText()
+      .refine((tz) => timeZones.has(tz) || tz === 'UTC', 'Pick a time zone from the list, e.g. America/New_York.')
+      .optional(),
+    underFiringTolerancePct: z
+      .number('Give a percentage.')
+      .int('Use a whole percentage.')
+      .min(1, 'At least 1 %.')
+      .max(50, 'At most 50 %.')
+      .nullable()
+      .optional(),
+  }),
+);
 export type CompanySettingsInput = z.infer<typeof companySettingsInput>;
 
 export const memberRoleInput = z.object({ role: z.enum(MEMBER_ROLES, 'Choose owner, manager or technician.') });

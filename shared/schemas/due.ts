@@ -9,7 +9,7 @@
  */
 import { z } from 'zod';
 import * as E from './enums';
-import { requiredText } from './common';
+import { requiredText, storableText } from './common';
 import { DUE_RULE_BASES, REPLACEMENT_POLICIES } from '../trade/due-dates';
 
 const dueRuleFields = z.object({
@@ -58,11 +58,11 @@ const withinDays = z.coerce.number('Give a number of days.').int('Use whole days
 
 export const dueQuery = z.object({
   withinDays,
-  type: z.string().trim().max(60).optional(),
+  type: storableText().trim().max(60).optional(),
   applianceKind: z.enum(E.APPLIANCE_KINDS).optional(),
   technicianId: z.uuid('Not a valid technician.').optional(),
-  town: z.string().trim().max(120).optional(),
-  after: z.string().max(100).optional(),
+  town: storableText().trim().max(120).optional(),
+  after: storableText().max(100).optional(),
   limit: z.coerce.number().int().min(1).max(100).default(100),
 });
 export type DueQuery = z.input<typeof dueQuery>;

@@ -12,17 +12,17 @@
  *        variant: thumb | display; anything else, a hidden photo or another appliance's answers 404.
  */
 import { z } from 'zod';
-import { optionalText } from './common';
+import { optionalText, storableText } from './common';
 
 export const shareLinkInput = z.object({
   expiresInDays: z.number('Give a number of days.').int('Whole days.').min(1, 'At least 1 day.').max(1825, 'At most 5 years.').default(365),
   label: optionalText(120),
 });
 export type ShareLinkInput = z.input<typeof shareLinkInput>;
-export const shareTokenParam = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'Not a share link.') });
+export const shareTokenParam = z.object({ token: storableText().regex(/^[A-Za-z0-9_-]{43}$/, 'Not a share link.') });
 export const HOMEOWNER_PHOTO_VARIANTS = ['thumb', 'display'] as const;
 export type HomeownerPhotoVariant = (typeof HOMEOWNER_PHOTO_VARIANTS)[number];
-const photoParams = { photoId: z.uuid('Not a valid id.'), variant: z.string().max(20) };
+const photoParams = { photoId: z.uuid('Not a valid id.'), variant: storableText().max(20) };
 export const sharePhotoParams = shareTokenParam.extend(photoParams);
 export const homeownerPhotoParams = z.object({ id: z.uuid('Not a valid id.'), ...photoParams });
 

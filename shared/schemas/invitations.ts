@@ -16,6 +16,7 @@
  */
 import { z } from 'zod';
 import type { MailDelivery } from './mail';
+import { storableText } from './common';
 import { MEMBER_ROLES, type MemberRole } from './roles';
 
 export const INVITATION_KINDS = ['member', 'homeowner'] as const;
@@ -31,8 +32,7 @@ export const SIGN_IN_LINK_HOURS = 24;
 
 export const welcomePath = (invitationId: string) => `/welcome/${invitationId}`;
 
-const emailAddress = z
-  .string('Enter an e-mail address.')
+const emailAddress = storableText('Enter an e-mail address.')
   .trim()
   .toLowerCase()
   .min(1, 'Enter an e-mail address.')
@@ -55,7 +55,7 @@ export const acceptInvitationInput = z.object({
   /** Asked of new team members, whose account has no name yet. */
   name: z.preprocess(
     (v) => (typeof v === 'string' && v.trim() === '' ? undefined : v),
-    z.string('Enter your name.').trim().max(120, 'At most 120 characters.').optional(),
+    storableText('Enter your name.').trim().max(120, 'At most 120 characters.').optional(),
   ),
 });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationInput>;

@@ -11,7 +11,7 @@
  *   PATCH /photos/:id             PhotoDto                                                records:write
  */
 import { z } from 'zod';
-import { optionalText } from './common';
+import { nonEmptyPatch, optionalText } from './common';
 
 export const PHOTO_KINDS = ['nameplate', 'before', 'after', 'finding', 'other'] as const;
 export type PhotoKind = (typeof PHOTO_KINDS)[number];
@@ -40,10 +40,7 @@ export type PhotoUploadFields = z.output<typeof photoUploadFields>;
 
 export const photoListQuery = z.object({ applianceId: z.uuid('Pick an appliance.') });
 
-export const photoPatch = z
-  .object({ caption: optionalText(500), homeownerVisible: z.boolean('Use true or false.') })
-  .partial()
-  .refine((p) => p.caption !== undefined || p.homeownerVisible !== undefined, { message: 'Nothing to change.', path: ['caption'] });
+export const photoPatch = nonEmptyPatch(z.object({ caption: optionalText(500), homeownerVisible: z.boolean('Use true or false.') }).partial());
 
 export type PhotoDto = {
   id: string;

@@ -24,7 +24,7 @@
  */
 import { z } from 'zod';
 import * as E from './enums';
-import { isoDate, optionalText, requiredText } from './common';
+import { isoDate, nonEmptyPatch, optionalText, requiredText, storableText } from './common';
 import { READING_KEYS } from './visits';
 
 const optionalInt = (label: string, min: number, max: number) =>
@@ -36,8 +36,7 @@ const optionalInt = (label: string, min: number, max: number) =>
     .nullish();
 const optionalNumber = (label: string, min: number, max: number) =>
   z.coerce.number(`${label} must be a number.`).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`).nullish();
-const email = z
-  .string()
+const email = storableText()
   .trim()
   .transform((v) => (v === '' ? null : v.toLowerCase()))
   .pipe(z.email('Enter a valid e-mail address.').nullable())
@@ -52,7 +51,7 @@ export const customerInput = z.object({
   notes: optionalText(4000),
 });
 // Without the defaults, so a partial update never resets a field it did not name.
-export const customerPatch = customerInput.extend({ kind: z.enum(E.CUSTOMER_KINDS), remindersOptOut: z.boolean() }).partial();
+export const customerPatch = nonEmptyPatch(customerInput.extend({ kind: z.enum(E.CUSTOMER_KINDS), remindersOptOut: z.boolean() }).partial());
 export type CustomerInput = z.input<typeof customerInput>;
 
 export const siteInput = z.object({
@@ -63,14 +62,14 @@ export const siteInput = z.object({
   accessNotes: optionalText(2000),
   assignedTechnicianId: z.uuid().nullish(),
 });
-export const sitePatch = siteInput.omit({ customerId: true }).partial();
+export const sitePatch = nonEmptyPatch(siteInput.omit({ customerId: true }).partial());
 export type SiteInput = z.input<typeof siteInput>;
 
 export const componentInput = z
   .object({
     typeCode: requiredText('Part type', 60),
     description: optionalText(200),
-    spec: z.record(z.string(), z.union([z.string().max(60), z.number()])).default({}),
+    spec: z.record(storableText(), z.union([storableText().max(60), z.number()])).default({}),
     installedOn: isoDate.nullish(),
     originalWithAppliance: z.boolean().default(false),
     note: optionalText(2000),
@@ -102,7 +101,7 @@ export const applianceFields = z.object({
   ventType: z.enum(E.VENT_TYPES, 'Choose the vent type.'),
 });
 export const applianceInput = applianceFields.extend({ components: z.array(componentInput).max(60).default([]) });
-export const appliancePatch = applianceFields.omit({ siteId: true }).partial().extend({ status: z.enum(E.APPLIANCE_STATUSES).optional() });
+export const appliancePatch = nonEmptyPatch(applianceFields.omit({ siteId: true }).partial().extend({ status: z.enum(E.APPLIANCE_STATUSES).optional() }));
 export const replaceApplianceInput = z.object({
   newApplianceId: z.uuid('Pick the appliance that replaced it.'),
   removedOn: isoDate,
@@ -111,17 +110,17 @@ export const replaceApplianceInput = z.object({
 export type ApplianceInput = z.input<typeof applianceInput>;
 
 export const pageQuery = z.object({
-  after: z.string().max(300).optional(),
+  after: storableText().max(300).optional(),
   limit: z.coerce.number().int().min(1).max(100).default(50),
 });
 export const customerListQuery = pageQuery.extend({
-  q: z.string().trim().max(100).optional(),
+  q: storableText().trim().max(100).optional(),
   sort: z.enum(['name', 'town', 'created']).default('name'),
 });
-export const searchQuery = z.object({ q: z.string().trim().min(2, 'Type at least 2 characters.').max(100) });
+export const searchQuery = z.object({ q: storableText().trim().min(2, 'Type at least 2 characters.').max(100) });
 export const timelineQuery = z.object({
   kind: z.enum(E.TIMELINE_KINDS).optional(),
-  before: z.string().max(100).optional(),
+  before: storableText().max(100).optional(),
   limit: z.coerce.number().int().min(1).max(100).default(50),
 });
 
@@ -233,15 +232,15 @@ export type SearchHit = {
 };
 
 export type CatalogEntryDto = { code: string; group: string; label: string; specFields: unknown[]; active: boolean };
-export const catalogCodeParam = z.object({ code: z.string().regex(/^[a-z0-9_]{1,60}$/, 'Not a valid part type code.') });
-export const catalogPatch = z.object({ label: requiredText('Label', 80).optional(), active: z.boolean().optional() });
+export const catalogCodeParam = z.object({ code: storableText().regex(/^[a-z0-9_]{1,60}$/, 'Not a valid part type code.') });
+export const catalogPatch = nonEmptyPatch(z.object({ label: requiredText('Label', 80).optional(), active: z.boolean().optional() }));
 
 export const checklistItemTemplate = z.object({
-  key: z.string().trim().min(1).max(60).regex(/^[a-z0-9_]+$/, 'Use lower-case letters, digits and underscores.'),
+  key: storableText().trim().min(1).max(60).regex(/^[a-z0-9_]+$/, 'Use lower-case letters, digits and underscores.'),
   section: requiredText('Section', 60),
   label: requiredText('Item', 400),
   caution: optionalText(500).transform((v) => v ?? undefined),
-  readings: z.array(z.string().max(60)).max(20).optional(),
+  readings: z.array(storableText().max(60)).max(20).optional(),
 });
 /** Per visit type, readings a visit must record or skip with a reason; each must be one an item records. Kept when not sent. */
 export const requiredReadingsInput = z.partialRecord(z.enum(E.VISIT_TYPES), z.array(z.enum(READING_KEYS, 'Not a reading of this form.')).max(20));

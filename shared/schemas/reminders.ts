@@ -8,6 +8,7 @@
  *   GET  /dev/outbox?limit=                       OutboxMessageDto[]   reminders:send; mounted only when FAKE_SMTP_OUTBOX is set (404 otherwise)
  */
 import { z } from 'zod';
+import { storableText } from './common';
 
 export const REMINDER_KINDS = ['annual_service', 'part_due'] as const;
 export type ReminderKind = (typeof REMINDER_KINDS)[number];
@@ -24,7 +25,7 @@ export const reminderApplianceParams = z.object({ applianceId: z.uuid('Not a val
 export const remindersListQuery = z.object({
   limit: z.coerce.number().int().min(1).max(200).default(50),
   /** Keyset cursor from the previous page's nextCursor. */
-  before: z.string().max(100).optional(),
+  before: storableText().max(100).optional(),
   applianceId: z.uuid().optional(),
 });
 
@@ -47,7 +48,7 @@ export type ReminderDto = {
 };
 export type RemindersPageDto = { items: ReminderDto[]; nextCursor: string | null };
 
-export const unsubscribeParams = z.object({ token: z.string().min(1).max(200) });
+export const unsubscribeParams = z.object({ token: storableText().min(1).max(200) });
 export type UnsubscribeStatusDto = { companyName: string; companyPhone: string; optedOut: boolean };
 
 export const outboxQuery = z.object({ limit: z.coerce.number().int().min(1).max(200).default(50) });

@@ -10,7 +10,7 @@
  */
 import type { MailDelivery } from './mail';
 import { z } from 'zod';
-import { optionalText } from './common';
+import { optionalText, storableText } from './common';
 import { CONTACT_NEEDED_MESSAGE, NAME_NEEDED_MESSAGE, SERVICE_REQUEST_LIMITS as MAX } from './service-request-limits';
 
 export const SERVICE_REQUEST_VIAS = ['share_link', 'homeowner_account'] as const;
@@ -28,7 +28,7 @@ const email = optionalText(MAX.contactEmail).refine((v) => !v || z.email().safeP
 
 export const serviceRequestInput = z
   .object({
-    contactName: z.string(NAME_NEEDED_MESSAGE).trim().min(1, NAME_NEEDED_MESSAGE).max(MAX.contactName, `At most ${MAX.contactName} characters.`),
+    contactName: storableText(NAME_NEEDED_MESSAGE).trim().min(1, NAME_NEEDED_MESSAGE).max(MAX.contactName, `At most ${MAX.contactName} characters.`),
     contactPhone: phone,
     contactEmail: email,
     preferredTimes: optionalText(MAX.preferredTimes),
@@ -49,7 +49,7 @@ export type ServiceRequestCreatedDto = { id: string; company: { name: string; ph
 
 export const serviceRequestListQuery = z.object({
   status: z.enum(SERVICE_REQUEST_STATUSES, 'Choose new, scheduled or closed.').optional(),
-  after: z.string().max(300).optional(),
+  after: storableText().max(300).optional(),
   limit: z.coerce.number().int().min(1).max(100).default(50),
 });
 export type ServiceRequestListQuery = z.input<typeof serviceRequestListQuery>;

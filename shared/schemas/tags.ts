@@ -11,6 +11,7 @@
  *   POST /visits/arrive-by-tag        VisitDto                   visits:record   (starts a visit on the tagged appliance)
  */
 import { z } from 'zod';
+import { storableText } from './common';
 import { checkTagCode } from '../tags/tag-code';
 import { VISIT_TYPES } from './enums';
 
@@ -21,7 +22,7 @@ export type TagFormatId = (typeof TAG_FORMAT_IDS)[number];
 export const MAX_TAGS_PER_BATCH = 300;
 
 /** A tag code as typed or scanned; normalised, and refused with the reason when it does not check out. */
-export const tagCode = z.string('Enter the tag code.').transform((input, ctx) => {
+export const tagCode = storableText('Enter the tag code.').transform((input, ctx) => {
   const check = checkTagCode(input);
   if (!check.ok) {
     ctx.addIssue({ code: 'custom', message: check.reason });

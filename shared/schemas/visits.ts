@@ -13,7 +13,7 @@
  */
 import { z } from 'zod';
 import * as E from './enums';
-import { isoDate, optionalText } from './common';
+import { isoDate, optionalText, storableText } from './common';
 import { FLUE_TEMP_PLAUSIBLE_F, FLUE_TEMP_RANGE_MESSAGE, flueBelowAirMessage, isFlueBelowCombustionAir } from '../trade/plausible-readings';
 
 const n = (label: string, min: number, max: number) =>
@@ -52,11 +52,11 @@ export const readingsInput = z
       })
       .nullish(),
     thermocouple: z.object({ openCircuitMv: n('Open-circuit mV', 0, 100).nullish(), closedCircuitMv: n('Closed-circuit mV', 0, 100).nullish() }).nullish(),
-    gaugeGlassLevel: z.string().trim().max(20).nullish(),
+    gaugeGlassLevel: storableText().trim().max(20).nullish(),
     lowWaterCutoff: z
       .object({
         type: z.enum(['float', 'probe'], 'Say whether the cutoff is a float or a probe type.'),
-        trippedAtLevel: z.string().trim().max(20).nullish(),
+        trippedAtLevel: storableText().trim().max(20).nullish(),
         burnerStopped: z.boolean('Say whether the burner stopped.'),
       })
       .nullish(),
@@ -83,13 +83,13 @@ export type ReadingKey = keyof ReadingsInput;
 export const READING_KEYS = Object.keys(readingsInput.shape) as [ReadingKey, ...ReadingKey[]];
 
 /** Required readings not taken, each with the reason ('' until one is typed; completing then asks for it). */
-export const readingSkipsInput = z.partialRecord(z.enum(READING_KEYS, 'Not a reading of this form.'), z.string().trim().max(500, 'At most 500 characters.'));
+export const readingSkipsInput = z.partialRecord(z.enum(READING_KEYS, 'Not a reading of this form.'), storableText().trim().max(500, 'At most 500 characters.'));
 export type ReadingSkips = z.infer<typeof readingSkipsInput>;
 
 export const checklistEntryInput = z.object({
-  key: z.string().max(60),
+  key: storableText().max(60),
   mark: z.enum(E.CHECK_MARKS).nullable(),
-  note: z.string().max(2000).default(''),
+  note: storableText().max(2000).default(''),
 });
 
 export const visitStartInput = z.object({
@@ -114,9 +114,9 @@ export const visitDraftInput = z
     readings: readingsInput.optional(),
     /** Replaces the stored skips when sent. */
     readingSkips: readingSkipsInput.optional(),
-    findings: z.string().max(8000).optional(),
-    recommendations: z.string().max(8000).optional(),
-    internalNotes: z.string().max(8000).optional(),
+    findings: storableText().max(8000).optional(),
+    recommendations: storableText().max(8000).optional(),
+    internalNotes: storableText().max(8000).optional(),
     technicianIds: z.array(z.uuid()).max(10).optional(),
     departedAt: z.iso.datetime({ offset: true }).nullish(),
     customerAckName: optionalText(160),
@@ -130,14 +130,14 @@ export const swapInput = z.object({
   componentId: z.uuid('Pick the part that was replaced.'),
   reason: optionalText(500),
   newDescription: optionalText(200),
-  newSpec: z.record(z.string(), z.union([z.string().max(60), z.number()])).optional(),
+  newSpec: z.record(storableText(), z.union([storableText().max(60), z.number()])).optional(),
   swappedOn: isoDate.optional(),
 });
 
 export const amendmentInput = z.object({
-  reason: z.string().trim().min(3, 'Say why the visit is being corrected.').max(2000),
-  findings: z.string().max(8000).optional(),
-  recommendations: z.string().max(8000).optional(),
+  reason: storableText().trim().min(3, 'Say why the visit is being corrected.').max(2000),
+  findings: storableText().max(8000).optional(),
+  recommendations: storableText().max(8000).optional(),
   checklist: z.array(checklistEntryInput).max(200).optional(),
   readings: readingsInput.optional(),
   outcome: outcomeInput.optional(),

@@ -285,7 +285,7 @@ describe('who may see a photo', () => {
   it('PATCH: 400 with nothing to change, 404 across companies, 403 for a homeowner, 401 signed out', async () => {
     const empty = await as.manager.patch(`/api/photos/${hiddenId}`).send({});
     expect(empty.status).toBe(400);
-    expect(Object.keys(empty.body.error.details)).toEqual(['caption']);
+    expect(Object.keys(empty.body.error.details)).toEqual(['_']);
     expect((await as.manager.patch(`/api/photos/${hiddenId}`).send({ homeownerVisible: 'yes' })).status).toBe(400);
     expect((await otherAs.manager.patch(`/api/photos/${hiddenId}`).send({ caption: 'x' })).status).toBe(404);
     expect((await as.homeowner.patch(`/api/photos/${hiddenId}`).send({ homeownerVisible: true })).status).toBe(403);
