@@ -2,6 +2,7 @@ import type { Request, RequestHandler, Response, Router } from 'express';
 import type { z } from 'zod';
 import type { Permission } from '../../shared/policy';
 import { requireHomeowner, requirePermission, requireSignedIn } from '../middleware/authenticate';
+import { JSON_BODY, requireBodyType, type BodyType } from '../middleware/body-type';
 import { validate, type Valid } from '../middleware/validate';
 
 /**
@@ -10,9 +11,13 @@ import { validate, type Valid } from '../middleware/validate';
 export type Access = { permission: Permission } | 'homeowner' | 'signed-in' | 'public';
 type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+export type RouteEntry = { method: Method; path: string; access: Access; schemas: Schemas; bodyTypes: readonly BodyType[] };
 
-/** Every route defined so far (paths relative to /api), so a test can prove that none is open by accident. */
-export const routeTable = new Map<string, { method: Method; path: string; access: Access }>();
+/**
+ * Every route defined so far (paths relative to /api), so a test can prove that none is open by accident and can
+ * send each one what it claims to accept.
+ */
+export const routeTable = new Map<string, RouteEntry>();
 
 export type RouteHandler<S extends Schemas> = (input: Valid<S>, req: Request, res: Response) => Promise<unknown> | unknown;
 
@@ -27,11 +32,13 @@ export function defineRoute<S extends Schemas>(
   router: Router,
   method: Method,
   path: string,
-  options: { access: Access; schemas?: S; status?: number },
+  /** bodyTypes: the media types the route reads its body from; JSON unless said otherwise. */
+  options: { access: Access; schemas?: S; status?: number; bodyTypes?: readonly BodyType[] },
   handler: RouteHandler<S>,
 ) {
-  routeTable.set(`${method} ${path}`, { method, path, access: options.access });
-  router[method](path, guardFor(options.access), validate(options.schemas ?? {}), async (req, res, next) => {
+  const bodyTypes = options.bodyTypes ?? [JSON_BODY];
+  routeTable.set(`${method} ${path}`, { method, path, access: options.access, schemas: options.schemas ?? {}, bodyTypes });
+  router[method](path, requireBodyType(bodyTypes), guardFor(options.access), validate(options.schemas ?? {}), async (req, res, next) => {
     try {
       const result = await handler(res.locals.valid as Valid<S>, req, res);
       if (res.headersSent) return;

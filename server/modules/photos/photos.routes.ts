@@ -3,6 +3,7 @@ import multer from 'multer';
 import type { AppContext } from '../../context';
 import { defineRoute } from '../../lib/route';
 import { currentMember, requirePermission } from '../../middleware/authenticate';
+import { MULTIPART_BODY } from '../../middleware/body-type';
 import { uuidParam } from '../../../shared/schemas/common';
 import { MAX_PHOTO_BYTES, MAX_PHOTO_FILES, photoListQuery, photoPatch, photoUploadFields } from '../../../shared/schemas/photos';
 import { photosService, type PhotoVariant } from './photos.service';
@@ -17,11 +18,17 @@ export function photosRoutes(ctx: AppContext) {
 
   // The multipart body is read only after the caller's role is checked, so a stranger cannot make us buffer 250 MB.
   router.post('/photos', requirePermission('visits:record'), upload.array('files', MAX_PHOTO_FILES));
-  defineRoute(router, 'post', '/photos', { access: { permission: 'visits:record' }, schemas: { body: photoUploadFields } }, async ({ body }, req, res) => {
-    const files = Array.isArray(req.files) ? req.files : [];
-    const { result, created } = await service.upload(currentMember(res), body, files);
-    res.status(created ? 201 : 200).json(result);
-  });
+  defineRoute(
+    router,
+    'post',
+    '/photos',
+    { access: { permission: 'visits:record' }, schemas: { body: photoUploadFields }, bodyTypes: [MULTIPART_BODY] },
+    async ({ body }, req, res) => {
+      const files = Array.isArray(req.files) ? req.files : [];
+      const { result, created } = await service.upload(currentMember(res), body, files);
+      res.status(created ? 201 : 200).json(result);
+    },
+  );
   defineRoute(router, 'get', '/photos', { access: { permission: 'records:read' }, schemas: { query: photoListQuery } }, ({ query }, _req, res) =>
     service.list(currentMember(res), query.applianceId),
   );
