@@ -9,6 +9,7 @@ import { securityHeaders } from './security-headers';
 import { requestLogger } from './logger';
 import { CLIENT_IP_HEADER } from './auth/auth';
 import { loadSession } from './middleware/authenticate';
+import { sameOriginOnly } from './middleware/same-origin';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { healthRoutes } from './routes/health';
 import { meRoutes } from './modules/me/me.routes';
@@ -59,11 +60,13 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   }, toNodeHandler(ctx.auth));
 
   const api = Router();
-  api.use(express.json({ limit: '1mb' }));
   api.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  // Before the body is read: a foreign page's request is refused without parsing what it sent.
+  api.use(sameOriginOnly(ctx.config.BASE_URL));
+  api.use(express.json({ limit: '1mb' }));
   api.use(healthRoutes(ctx));
   api.use(loadSession(ctx));
   api.use(meRoutes(ctx));
