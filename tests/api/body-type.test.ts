@@ -70,6 +70,13 @@ describe('a state-changing request whose body is not JSON', () => {
     expect(await ctx.db.select().from(photos).where(eq(photos.applianceId, boilerId))).toEqual([]);
   });
 
+  it('answers a multipart form its parser cannot read with 400, not 500', async () => {
+    // A NUL in a part's name makes the part header malformed.
+    const res = await as.technician.post('/api/photos').field('applianceId', boilerId).field('kind\u0000', 'nameplate');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('upload_rejected');
+  });
+
   it('does not stop the photo upload itself', async () => {
     const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 90, g: 90, b: 90 } } }).jpeg().toBuffer();
     const res = await as.technician

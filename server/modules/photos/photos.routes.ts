@@ -1,6 +1,7 @@
 import { Router } from 'express';
-import multer from 'multer';
+import multer, { MulterError } from 'multer';
 import type { AppContext } from '../../context';
+import { HttpError } from '../../lib/http-error';
 import { defineRoute } from '../../lib/route';
 import { currentMember, requirePermission } from '../../middleware/authenticate';
 import { MULTIPART_BODY } from '../../middleware/body-type';
@@ -16,8 +17,12 @@ export function photosRoutes(ctx: AppContext) {
     limits: { fileSize: MAX_PHOTO_BYTES, files: MAX_PHOTO_FILES, fields: 20, fieldSize: 8 * 1024, parts: MAX_PHOTO_FILES + 20 },
   });
 
+  const readUpload = upload.array('files', MAX_PHOTO_FILES);
   // The multipart body is read only after the caller's role is checked, so a stranger cannot make us buffer 250 MB.
-  router.post('/photos', requirePermission('visits:record'), upload.array('files', MAX_PHOTO_FILES));
+  router.post('/photos', requirePermission('visits:record'), (req, res, next) =>
+    // The parser's own errors ("Malformed part header", "Unexpected end of form") are plain Errors: the form is bad.
+    readUpload(req, res, (err?: unknown) => next(err && !(err instanceof MulterError) ? malformedUpload() : err)),
+  );
   defineRoute(
     router,
     'post',
@@ -50,6 +55,8 @@ export function photosRoutes(ctx: AppContext) {
   );
   return router;
 }
+
+const malformedUpload = () => new HttpError(400, 'upload_rejected', 'The upload could not be read: send it again as a multipart form.');
 
 const matchesEtag = (header: string | undefined, etag: string) =>
   Boolean(header) && header!.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag || tag.trim() === '*');
