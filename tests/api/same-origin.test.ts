@@ -40,7 +40,7 @@ describe('a state-changing API request', () => {
 
   it('from another origin is refused with 403 foreign_origin and writes nothing, even with a valid session', async () => {
     const before = await linkCount();
-    for (const headers of [
+    const foreign: Record<string, string>[] = [
       { Origin: 'http://evil.test' },
       // Same host, another port or scheme, is another origin.
       { Origin: 'http://127.0.0.1:4000' },
@@ -49,7 +49,8 @@ describe('a state-changing API request', () => {
       { Origin: 'null' },
       { 'Sec-Fetch-Site': 'cross-site' },
       { 'Sec-Fetch-Site': 'same-site' },
-    ]) {
+    ];
+    for (const headers of foreign) {
       const res = await makeLink(headers);
       expect({ headers, status: res.status, code: res.body.error?.code }).toEqual({ headers, status: 403, code: 'foreign_origin' });
     }
