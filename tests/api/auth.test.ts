@@ -177,7 +177,7 @@ describe('per-address sign-in limit', () => {
 describe('an attempt that never judged the password', () => {
   it('is given back, and a lock it set goes with it', async () => {
     const throttle = createSignInThrottle(ctx.db, ctx.config.BETTER_AUTH_SECRET);
-    const email = uniqueEmail('refund');
+    const email = uniqueEmail();
     const now = new Date('2026-12-02T12:00:00Z');
     for (let i = 0; i < 5; i++) expect((await throttle.attempt(email, now)).allowed).toBe(true);
     const stored = async () => (await ctx.db.select().from(signInThrottle).where(eq(signInThrottle.key, throttle.keyOf(email))))[0];
