@@ -22,6 +22,8 @@ import { testConfig } from '../support/context';
 import { createOwnDatabase } from '../support/own-database';
 import { installWriteCounter } from '../support/write-counter';
 import { createTenant, type Agent, type Tenant } from '../support/tenant';
+import { fullCompletion } from '../support/visit-completion';
+import type { VisitDto } from '../../shared/schemas/visits';
 
 const RUNS_PER_ROUTE = 200;
 const SEED = 20_261_202;
@@ -59,9 +61,15 @@ beforeAll(async () => {
   const parts = [{ typeCode: 'thermocouple' as const, installedOn: '2020-01-01', spec: { lengthIn: 24 } }];
   const boiler = await insertAppliance(ctx.db, { companyId: t.company.id, siteId: site.id, components: parts });
   const spare = await insertAppliance(ctx.db, { companyId: t.company.id, siteId: site.id });
-  const visit = async (type: string) => (await ok(as.owner.post('/api/visits').send({ applianceId: boiler.id, type }), 'start a visit')).body.id as string;
+  const started: VisitDto[] = [];
+  const visit = async (type: string) => {
+    const dto = (await ok(as.owner.post('/api/visits').send({ applianceId: boiler.id, type }), 'start a visit')).body as VisitDto;
+    started.push(dto);
+    return dto.id;
+  };
   const [draftVisit, swapVisit, completeVisit, amendVisit] = [await visit('repair'), await visit('repair'), await visit('repair'), await visit('repair')];
-  await ok(as.owner.post(`/api/visits/${amendVisit}/complete`).send({ revision: 0, findings: 'Cleaned the burners.' }), 'complete a visit');
+  const toAmend = started[3];
+  await ok(as.owner.post(`/api/visits/${amendVisit}/complete`).send(fullCompletion(toAmend, { findings: 'Cleaned the burners.' })), 'complete a visit');
   const link = await ok(as.owner.post(`/api/appliances/${boiler.id}/share-links`).send({ label: 'for the owner' }), 'make a share link');
   const token = link.body.url.split('/s/')[1];
   const tags = await ok(as.owner.post('/api/tag-batches').send({ count: 2, format: 'single_large' }), 'make tags');

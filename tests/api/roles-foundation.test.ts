@@ -50,11 +50,11 @@ describe('row: company settings (owner only)', () => {
     expect(audits.some((a) => a.action === 'update' && a.actorId === t.owner.user.id)).toBe(true);
   });
 
-  it('answers a change that names no field with the company as it is, writing nothing', async () => {
+  it('refuses a change that names no field with a form-level 400, writing nothing', async () => {
     const before = await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, t.company.id));
     const res = await as.owner.patch('/api/company').send({});
-    expect(res.status).toBe(200);
-    expect(res.body.id).toBe(t.company.id);
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.details)).toEqual(['_']);
     expect(await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, t.company.id))).toHaveLength(before.length);
   });
 

@@ -53,7 +53,8 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   'get /health': { status: 200 },
   'get /me': { status: 200 },
   'get /company': { status: 200 },
-  'patch /company': { body: () => ({}), status: 200 },
+  // An empty patch is a 400 (nonEmptyPatch); the time zone every test company has already changes nothing.
+  'patch /company': { body: () => ({ timeZone: 'America/New_York' }), status: 200 },
   'get /members': { status: 200 },
   'patch /members/:id': { params: (c) => ({ id: c.target.tenant.technician.membership.id }), body: () => ({ role: 'technician' }), status: 200 },
   'post /members/:id/deactivate': {
