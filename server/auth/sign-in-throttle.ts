@@ -1,5 +1,5 @@
 import { createHmac } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { signInThrottle } from '../db/schema/index';
 
@@ -42,8 +42,12 @@ export function createSignInThrottle(db: Db, secret: string) {
     async attempt(email: string, now = new Date()): Promise<ThrottleDecision> {
       const key = keyOf(email);
       return db.transaction(async (tx) => {
-        await tx.insert(signInThrottle).values({ key, attempts: 0, lastAttemptAt: now }).onConflictDoNothing();
-        const [row] = await tx.select().from(signInThrottle).where(eq(signInThrottle.key, key)).for('update');
+        // One statement that makes or locks the row: a sign-in clearing it at the same moment cannot leave it missing.
+        const [row] = await tx
+          .insert(signInThrottle)
+          .values({ key, attempts: 0, lastAttemptAt: now })
+          .onConflictDoUpdate({ target: signInThrottle.key, set: { key: sql`excluded.key` } })
+          .returning();
         const decision = decideAttempt(row.attempts ? row : null, now);
         if (decision.allowed) await tx.update(signInThrottle).set(decision.next).where(eq(signInThrottle.key, key));
         return decision;
