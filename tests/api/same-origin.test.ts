@@ -1,29 +1,18 @@
 import { eq } from 'drizzle-orm';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { shareLinks } from '../../server/db/schema/index';
-import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { testApp, testConfig } from '../support/context';
-import { agentsFor, createTenant, type Tenant } from '../support/tenant';
+import { useTenantWithBoiler } from '../support/tenant-fixture';
 
 const { app, ctx } = testApp();
 const OWN_ORIGIN = testConfig().BASE_URL;
-let t: Tenant;
-let as: Awaited<ReturnType<typeof agentsFor>>;
-let boilerId: string;
+const f = useTenantWithBoiler(app, ctx);
 
-beforeAll(async () => {
-  t = await createTenant(ctx.db);
-  as = await agentsFor(app, t);
-  const site = await insertSite(ctx.db, { companyId: t.company.id, customerId: t.customer.id });
-  boilerId = (await insertAppliance(ctx.db, { companyId: t.company.id, siteId: site.id })).id;
-});
-afterAll(() => ctx.pool.end());
-
-const linkCount = async () => (await ctx.db.select().from(shareLinks).where(eq(shareLinks.applianceId, boilerId))).length;
+const linkCount = async () => (await ctx.db.select().from(shareLinks).where(eq(shareLinks.applianceId, f.boilerId))).length;
 const makeLink = (headers: Record<string, string>) => {
-  let req = as.manager.post(`/api/appliances/${boilerId}/share-links`);
+  let req = f.as.manager.post(`/api/appliances/${f.boilerId}/share-links`);
   for (const [name, value] of Object.entries(headers)) req = req.set(name, value);
   return req.send({ label: 'for the owner' });
 };
@@ -54,7 +43,7 @@ describe('a state-changing API request', () => {
       const res = await makeLink(headers);
       expect({ headers, status: res.status, code: res.body.error?.code }).toEqual({ headers, status: 403, code: 'foreign_origin' });
     }
-    const patch = await as.manager.patch(`/api/customers/${t.customer.id}`).set('Origin', 'http://evil.test').send({ name: 'Taken Over' });
+    const patch = await f.as.manager.patch(`/api/customers/${f.t.customer.id}`).set('Origin', 'http://evil.test').send({ name: 'Taken Over' });
     expect(patch.status).toBe(403);
     expect(await linkCount()).toBe(before);
   });
@@ -72,7 +61,7 @@ describe('a state-changing API request', () => {
 
 describe('requests the origin check leaves alone', () => {
   it('reads: a GET from another origin is answered as usual', async () => {
-    const res = await as.manager.get(`/api/appliances/${boilerId}/share-links`).set('Origin', 'http://evil.test').set('Sec-Fetch-Site', 'cross-site');
+    const res = await f.as.manager.get(`/api/appliances/${f.boilerId}/share-links`).set('Origin', 'http://evil.test').set('Sec-Fetch-Site', 'cross-site');
     expect(res.status).toBe(200);
   });
 
@@ -82,7 +71,7 @@ describe('requests the origin check leaves alone', () => {
   });
 
   it('better-auth’s own routes, which check their trusted origins themselves', async () => {
-    const own = await request(app).post('/api/auth/sign-in/email').set('Origin', OWN_ORIGIN).send({ email: t.owner.user.email, password: DEFAULT_TEST_PASSWORD });
+    const own = await request(app).post('/api/auth/sign-in/email').set('Origin', OWN_ORIGIN).send({ email: f.t.owner.user.email, password: DEFAULT_TEST_PASSWORD });
     expect(own.status).toBe(200);
   });
 });
