@@ -18,9 +18,10 @@ export function machineFacts() {
   return { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? 'unknown', memoryGb: Math.round(os.totalmem() / 2 ** 30), node: process.version, platform: `${os.platform()} ${os.release()}` };
 }
 
-export function writeResults(outDir: string, data: Record<string, unknown>): string {
+/** `<date>.json`, or `<date>-<suffix>.json` for a partial run. */
+export function writeResults(outDir: string, suffix: string | null, data: Record<string, unknown>): string {
   fs.mkdirSync(outDir, { recursive: true });
-  const file = path.join(outDir, `${new Date().toISOString().slice(0, 10)}.json`);
+  const file = path.join(outDir, `${new Date().toISOString().slice(0, 10)}${suffix ? `-${suffix}` : ''}.json`);
   fs.writeFileSync(file, `${JSON.stringify(data, null, 2)}\n`);
   return file;
 }

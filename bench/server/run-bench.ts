@@ -36,6 +36,8 @@ export type RunOptions = {
   print?: (text: string) => void;
   /** Concurrent technicians (default 200 for 60 s, quick 10 for 3 s); null skips them. */
   crew?: CrewScale | null;
+  /** Only the concurrent technicians (written to <date>-crew.json, so a full run's file is kept). */
+  crewOnly?: boolean;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -71,6 +73,10 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
     await withApp(opts.databaseUrl, s3.endpoint, clientDir, async (run) => {
       meta = run.meta;
       log(`Database ${databaseNameOf(opts.databaseUrl)}: ${Object.entries(run.meta.counts).map(([k, v]) => `${v} ${k}`).join(', ')}`);
+      if (opts.crewOnly) {
+        figures.push(...(await crewRows(run, scale, opts.crew ?? (scale.quick ? QUICK_CREW : FULL_CREW), log)));
+        return;
+      }
       log('Warming up…');
       await warmUp(run, scale);
       log('Latency at fixed rates (timeline, search, due, stock)…');
@@ -106,33 +112,35 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
       if (opts.client) figures.push(...(await measureClientHalf(run, scale, log)));
     });
 
-    log('Photo pipeline…');
-    const storage = createObjectStorage({ S3_ENDPOINT: s3.endpoint, S3_REGION: 'us-east-1', S3_BUCKET, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
-    try {
-      const jpeg = await twelveMegapixelJpeg();
-      const times = await timePhotoPipeline(storage, jpeg, scale.quick ? 1 : 5);
-      figures.push({
-        figure: 'Photo: 12 MP JPEG → display image + thumbnail, both stored',
-        load: 'one at a time',
-        value: round(median(times), 0),
-        unit: 'ms',
-        target: '≤ 1000 ms',
-        met: median(times) <= 1000,
-        note: `processImage + 2 puts to the S3 fake; ${(jpeg.length / 2 ** 20).toFixed(1)} MB input; median of ${times.length}, slowest ${round(Math.max(...times), 0)} ms`,
-      });
-    } finally {
-      storage.destroy();
-    }
+    if (!opts.crewOnly) {
+      log('Photo pipeline…');
+      const storage = createObjectStorage({ S3_ENDPOINT: s3.endpoint, S3_REGION: 'us-east-1', S3_BUCKET, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
+      try {
+        const jpeg = await twelveMegapixelJpeg();
+        const times = await timePhotoPipeline(storage, jpeg, scale.quick ? 1 : 5);
+        figures.push({
+          figure: 'Photo: 12 MP JPEG → display image + thumbnail, both stored',
+          load: 'one at a time',
+          value: round(median(times), 0),
+          unit: 'ms',
+          target: '≤ 1000 ms',
+          met: median(times) <= 1000,
+          note: `processImage + 2 puts to the S3 fake; ${(jpeg.length / 2 ** 20).toFixed(1)} MB input; median of ${times.length}, slowest ${round(Math.max(...times), 0)} ms`,
+        });
+      } finally {
+        storage.destroy();
+      }
 
-    if (opts.growthDatabaseUrl && big) {
-      const bigSet: LatencySet = big;
-      log(`Growth: the same latency figures on ${databaseNameOf(opts.growthDatabaseUrl)}…`);
-      await withApp(opts.growthDatabaseUrl, s3.endpoint, undefined, async (run) => {
-        growthMeta = run.meta;
-        await warmUp(run, scale);
-        const small = await measureLatencySet(run, scale);
-        figures.push(...growthRows(bigSet, small, { big: meta?.appliances ?? 0, small: run.meta.appliances }));
-      });
+      if (opts.growthDatabaseUrl && big) {
+        const bigSet: LatencySet = big;
+        log(`Growth: the same latency figures on ${databaseNameOf(opts.growthDatabaseUrl)}…`);
+        await withApp(opts.growthDatabaseUrl, s3.endpoint, undefined, async (run) => {
+          growthMeta = run.meta;
+          await warmUp(run, scale);
+          const small = await measureLatencySet(run, scale);
+          figures.push(...growthRows(bigSet, small, { big: meta?.appliances ?? 0, small: run.meta.appliances }));
+        });
+      }
     }
   } finally {
     await s3.close();
@@ -145,9 +153,10 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   const print = opts.print ?? ((text: string) => console.log(text));
   print(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
   if (p) print(`Due query plan:\n${p.text}\n`);
-  const file = writeResults(opts.outDir, {
+  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : null, {
     date: new Date().toISOString(),
     quick: opts.quick,
+    crewOnly: Boolean(opts.crewOnly),
     machine: { ...machineFacts(), note: SHARED_CORES_NOTE },
     database: { name: databaseNameOf(opts.databaseUrl), appliances: m?.appliances, seed: m?.seed, counts: m?.counts },
     growthDatabase: g ? { name: databaseNameOf(opts.growthDatabaseUrl!), appliances: g.appliances, counts: g.counts } : null,
