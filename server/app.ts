@@ -35,6 +35,7 @@ import { robotsTxt } from './spa/robots';
 import { remindersRoutes } from './modules/reminders/reminders.routes';
 import { outboxRoutes } from './modules/reminders/outbox.routes';
 import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.routes';
+import { importRoutes } from './modules/imports/imports.routes';
 import { serviceRequestRoutes } from './modules/service-requests/service-requests.routes';
 
 export type AppOptions = {
@@ -91,6 +92,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(outboxRoutes(ctx));
   api.use(homeownerPhotoRoutes(ctx));
   api.use(serviceRequestRoutes(ctx));
+  api.use(importRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -13,6 +13,8 @@ export const PERMISSIONS = {
   'reminders:send': ['owner', 'manager'],
   'team:manage': ['owner', 'manager'],
   'company:settings': ['owner'],
+  // Bringing a whole customer list in at once is an office task.
+  'records:import': ['owner', 'manager'],
   // The development outbox holds other people's sign-in and invitation links: whoever opens one is signed in as them.
   'dev:outbox': ['owner'],
 } as const satisfies Record<string, readonly MemberRole[]>;

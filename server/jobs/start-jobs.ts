@@ -3,6 +3,7 @@ import type { AppContext } from '../context';
 import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE, photoSweepJob } from './photo-sweep-job';
 import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
 import { MAIL_CRON, MAIL_QUEUE, mailJob } from './mail-job';
+import { IMPORT_CRON, IMPORT_QUEUE, importJob } from './import-job';
 
 export const JOBS_SCHEMA = 'pgboss';
 
@@ -18,6 +19,8 @@ const JOBS: Job[] = [
   { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, options: { expireInSeconds: 4 * 3600, retryLimit: 2, retryDelay: 600 }, run: remindersJob },
   // Each message keeps its own tries and backoff in outgoing_mail; this retries a run that failed as a whole (database away).
   { queue: MAIL_QUEUE, cron: MAIL_CRON, options: { expireInSeconds: 15 * 60, retryLimit: 3, retryDelay: 30, retryBackoff: true }, run: mailJob },
+  // Each import claims itself by status, so a run that overlaps another finds nothing to claim.
+  { queue: IMPORT_QUEUE, cron: IMPORT_CRON, options: { expireInSeconds: 3600, retryLimit: 2, retryDelay: 60 }, run: (ctx) => importJob(ctx) },
   { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, options: { expireInSeconds: 3600, retryLimit: 1, retryDelay: 600 }, run: (ctx) => photoSweepJob(ctx) },
 ];
 

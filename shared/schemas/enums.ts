@@ -20,6 +20,7 @@ export const TIMELINE_KINDS = [
   'note',
   'reminder',
   'status',
+  'import',
 ] as const;
 
 export type ApplianceKind = (typeof APPLIANCE_KINDS)[number];

@@ -11,3 +11,4 @@ export * from './service-requests';
 export * from './invitations';
 export * from './outgoing-mail';
 export * from './sign-in-throttle';
+export * from './imports';

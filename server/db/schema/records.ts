@@ -49,6 +49,8 @@ export const customers = pgTable(
     email: text('email'),
     remindersOptOut: boolean('reminders_opt_out').notNull().default(false),
     notes: text('notes'),
+    /** The customer's id in the system a company imported its records from (import re-runs match on it). */
+    externalId: text('external_id'),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),
@@ -58,6 +60,7 @@ export const customers = pgTable(
     index('customers_company_name_idx').on(t.companyId, t.name, t.id),
     index('customers_name_trgm_idx').using('gin', sql`${t.name} gin_trgm_ops`),
     index('customers_phone_idx').on(t.companyId, t.phone),
+    uniqueIndex('customers_company_external_id_uq').on(t.companyId, t.externalId).where(sql`${t.externalId} is not null`),
   ],
 );
 
@@ -129,6 +132,9 @@ export const appliances = pgTable(
     ventType: ventType('vent_type').notNull(),
     status: applianceStatus('status').notNull().default('in_service'),
     replacedById: uuid('replaced_by_id').references((): AnyPgColumn => appliances.id, { onDelete: 'set null' }),
+    externalId: text('external_id'),
+    /** The spreadsheet this record came from, when it was imported (import_files.id). */
+    importId: uuid('import_id'),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),
@@ -136,6 +142,7 @@ export const appliances = pgTable(
   },
   (t) => [
     index('appliances_company_site_idx').on(t.companyId, t.siteId),
+    uniqueIndex('appliances_company_external_id_uq').on(t.companyId, t.externalId).where(sql`${t.externalId} is not null`),
     index('appliances_serial_trgm_idx').using('gin', sql`${t.serial} gin_trgm_ops`),
   ],
 );
@@ -240,6 +247,8 @@ export const visits = pgTable(
     signedOffAt: timestamp('signed_off_at', { withTimezone: true }),
     customerAckName: text('customer_ack_name'),
     completedAt: timestamp('completed_at', { withTimezone: true }),
+    /** Set on history brought in from a spreadsheet (import_files.id): recorded elsewhere, not signed off here. */
+    importId: uuid('import_id'),
     revision: integer('revision').notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
