@@ -5,7 +5,7 @@
  *   GET  /imports                                             ImportFileDto[]       the company's recent files
  *   GET  /imports/:id                                         ImportFileDto         status and progress (poll while importing)
  *   POST /imports/:id/preview         { mapping }             ImportPreviewDto      dry run: nothing is written but the mapping
- *   POST /imports/:id/run             { mapping }             ImportFileDto (202)   the import starts; poll GET /imports/:id
+ *   POST /imports/:id/run             { mapping }             ImportFileDto         200 imported (up to 200 rows), or 202 running: poll GET /imports/:id
  *   GET  /imports/:id/errors.csv                              text/csv              the rows with errors, to fix and upload again
  */
 import { z } from 'zod';

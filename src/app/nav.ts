@@ -11,6 +11,7 @@ const ITEMS: NavItem[] = [
   { to: '/customers', label: 'Customers', permission: 'records:read' },
   { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
   { to: '/tags', label: 'Tags', permission: 'catalog:manage' },
+  { to: '/imports', label: 'Bring records in', permission: 'records:import' },
   { to: '/team', label: 'Team', permission: 'records:read' },
   { to: '/settings', label: 'Company', permission: 'company:settings' },
 ];

@@ -82,6 +82,10 @@ beforeAll(async () => {
   );
   const serviceRequest = { contactName: 'Ada Fenwick', contactPhone: '555-0142', message: 'No heat upstairs' };
   const requested = await ok(as.homeowner.post(`/api/homeowner/appliances/${boiler.id}/service-requests`).send(serviceRequest), 'request service');
+  const importFile = await ok(
+    as.owner.post('/api/imports').attach('file', Buffer.from('Customer,Street,Town,Kind,Fuel\nIda Quell,5 Marsh Row,Wrenfield,Steam,Gas\n'), { filename: 'f.csv', contentType: 'text/csv' }),
+    'upload an import file',
+  );
   const [rule] = (await ok(as.owner.get('/api/due-rules'), 'read the due rules')).body;
   const [template] = (await ok(as.owner.get('/api/checklist-templates'), 'read the checklists')).body;
 
@@ -118,6 +122,8 @@ beforeAll(async () => {
     'post /visits/:id/complete': `/visits/${completeVisit}/complete`,
     'post /visits/:id/amendments': `/visits/${amendVisit}/amendments`,
     'post /photos': '/photos',
+    'post /imports/:id/preview': `/imports/${importFile.body.id}/preview`,
+    'post /imports/:id/run': `/imports/${importFile.body.id}/run`,
     'patch /photos/:id': `/photos/${photo.body.photos[0].id}`,
     'post /team/invitations': '/team/invitations',
     'post /customers/:id/homeowner-invitation': `/customers/${t.customer.id}/homeowner-invitation`,
@@ -175,6 +181,8 @@ beforeAll(async () => {
     'post /visits/:id/amendments': { reason: 'Typo in the findings', findings: 'Cleaned the burners and the pilot' },
     'post /photos': { applianceId: boiler.id, kind: 'after', caption: 'After cleaning', homeownerVisible: 'true' },
     'patch /photos/:id': { caption: 'Rating plate', homeownerVisible: false },
+    'post /imports/:id/preview': { mapping: { customerName: 'Customer', siteStreet: 'Street', siteTown: 'Town', applianceKind: 'Kind', fuel: 'Fuel' } },
+    'post /imports/:id/run': { mapping: { customerName: 'Customer', siteStreet: 'Street', siteTown: 'Town', applianceKind: 'Kind', fuel: 'Fuel' } },
     'post /team/invitations': { email: 'new.hand@example.test', role: 'technician' },
     'post /customers/:id/homeowner-invitation': { email: 'home.owner@example.test' },
     'post /invitations/:id/accept': { name: 'Rowan Tarn' },

@@ -45,8 +45,12 @@ export function importRoutes(ctx: AppContext) {
     router,
     'post',
     '/imports/:id/run',
-    { access: { permission: 'records:import' }, schemas: { params: uuidParam, body: importMappingInput }, status: 202 },
-    ({ params, body }, _req, res) => service.run(currentMember(res), params.id, body),
+    { access: { permission: 'records:import' }, schemas: { params: uuidParam, body: importMappingInput } },
+    async ({ params, body }, _req, res) => {
+      const file = await service.run(currentMember(res), params.id, body);
+      // 200 when a small file was imported within the request; 202 while a large one runs on (poll GET /imports/:id).
+      res.status(file.status === 'queued' || file.status === 'importing' ? 202 : 200).json(file);
+    },
   );
   defineRoute(router, 'get', '/imports/:id/errors.csv', { access: { permission: 'records:import' }, schemas: { params: uuidParam } }, async ({ params }, _req, res) => {
     const { fileName, csv } = await service.errorsCsv(currentMember(res).companyId, params.id);

@@ -17,6 +17,8 @@ import { runImport } from './run-import';
 type Member = Extract<Principal, { kind: 'member' }>;
 type MappingInput = z.output<typeof importMappingInput>;
 const MAX_LISTED_ERRORS = 500;
+/** A file this small is imported within the request (a second or so); a larger one in the background, with progress. */
+export const INLINE_IMPORT_ROWS = 200;
 
 export const toImportFileDto = (f: ImportFileRow): ImportFileDto => ({
   id: f.id,
@@ -125,7 +127,11 @@ export function importsService(ctx: AppContext) {
         return row;
       });
       await importsRepository.rememberMapping(ctx.db, actor.companyId, mappingMemory(input.mapping));
-      // Started at once; should this process stop, the import job picks it up (server/jobs/import-job.ts).
+      if (queued.rowCount <= INLINE_IMPORT_ROWS) {
+        await runImport(ctx, actor.companyId, id);
+        return toImportFileDto(await find(actor.companyId, id));
+      }
+      // Started at once, answered at once; should this process stop, the import job picks it up (server/jobs/import-job.ts).
       void runImport(ctx, actor.companyId, id).catch((err: unknown) => ctx.logger.warn({ err, importId: id }, 'import run did not finish'));
       return toImportFileDto(queued);
     },

@@ -24,7 +24,8 @@ export type RouteCase = {
   params?: (c: Cell) => Record<string, string>;
   query?: (c: Cell) => Record<string, string>;
   body?: (c: Cell) => object;
-  upload?: (c: Cell) => Promise<{ fields: Record<string, string>; file: Buffer }>;
+  /** A multipart upload; `as` names the file's form field, name and type (default: a JPEG in `files`). */
+  upload?: (c: Cell) => Promise<{ fields: Record<string, string>; file: Buffer; as?: { field: string; filename: string; contentType: string } }>;
   /** The answer to a caller of the target's own company whom the route's access lets through. */
   status: number;
   /** Callers answered otherwise, each for a reason given beside it. */
@@ -184,6 +185,24 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   'get /photos/:id/display': { params: (c) => ({ id: c.target.photoId }), status: 200 },
   'get /photos/:id/thumb': { params: (c) => ({ id: c.target.photoId }), status: 200 },
   'patch /photos/:id': { params: (c) => ({ id: c.target.photoId }), body: () => ({ caption: 'Rating plate' }), status: 200 },
+  'post /imports': {
+    upload: async () => ({
+      fields: {},
+      file: Buffer.from(`Customer,Street,Town,Kind,Fuel\nUpload ${crypto.randomUUID()},2 Matrix Row,Wrenfield,Steam,Gas\n`),
+      as: { field: 'file', filename: 'matrix.csv', contentType: 'text/csv' },
+    }),
+    status: 201,
+  },
+  'get /imports': { status: 200 },
+  'get /imports/:id': { params: (c) => ({ id: c.target.importId }), status: 200 },
+  'post /imports/:id/preview': {
+    params: (c) => ({ id: c.target.importId }),
+    body: () => ({ mapping: { customerName: 'Customer', siteStreet: 'Street', siteTown: 'Town', applianceKind: 'Kind', fuel: 'Fuel' } }),
+    status: 200,
+  },
+  // A run without the required columns: the office's caller reaches validation, and nothing is imported by the matrix.
+  'post /imports/:id/run': { params: (c) => ({ id: c.target.importId }), body: () => ({ mapping: {} }), status: 400 },
+  'get /imports/:id/errors.csv': { params: (c) => ({ id: c.target.importId }), status: 200 },
   'post /team/invitations': { body: () => ({ email: uniqueEmail('invitee'), role: 'technician' }), status: 201 },
   'get /team/invitations': { status: 200 },
   'post /team/invitations/:id/revoke': {

@@ -48,9 +48,9 @@ async function send(agent: Agent | ReturnType<typeof request>, route: Route, spe
   const query = spec.query?.(cell);
   if (query) req = req.query(query);
   if (spec.upload) {
-    const { fields, file } = await spec.upload(cell);
+    const { fields, file, as = { field: 'files', filename: 'matrix.jpg', contentType: 'image/jpeg' } } = await spec.upload(cell);
     for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
-    req = req.attach('files', file, { filename: 'matrix.jpg', contentType: 'image/jpeg' });
+    req = req.attach(as.field, file, { filename: as.filename, contentType: as.contentType });
   } else if (route.method !== 'get') {
     req = req.send(spec.body?.(cell) ?? {});
   }

@@ -60,6 +60,12 @@ export async function buildWorld(ctx: AppContext, app: Express) {
     as.anonymous.post(`/api/share/${shareToken}/service-requests`).send({ contactName: 'Matrix caller', contactPhone: '555-0142' }),
   );
 
+  const importFile = await ok<{ id: string }>(
+    'import file',
+    as.manager
+      .post('/api/imports')
+      .attach('file', Buffer.from('Customer,Street,Town,Kind,Fuel\nMatrix Example,1 Matrix Row,Wrenfield,Steam,Gas\n'), { filename: 'matrix.csv', contentType: 'text/csv' }),
+  );
   const templates = await ok<{ id: string; name: string; items: unknown[] }[]>('templates', as.owner.get('/api/checklist-templates'));
   const rules = await ok<Record<string, unknown>[]>('due rules', as.owner.get('/api/due-rules'));
   const rule = rules[0];
@@ -90,6 +96,7 @@ export async function buildWorld(ctx: AppContext, app: Express) {
     shareLinkId: link.id,
     shareToken,
     serviceRequestId: request.id,
+    importId: importFile.id,
     invitationForHomeownerId: forHomeowner.id,
     invitationForNobodyId: forNobody.id,
     checklistTemplate: { id: templates[0].id, body: { name: templates[0].name, items: templates[0].items } },
@@ -129,6 +136,7 @@ export async function buildWorld(ctx: AppContext, app: Express) {
     world.photoId,
     world.shareLinkId,
     world.serviceRequestId,
+    world.importId,
     world.invitationForHomeownerId,
     world.checklistTemplate.id,
     world.dueRule.id,
@@ -160,6 +168,7 @@ export function ghostOf(w: World): World {
     shareLinkId: uuid(),
     shareToken: crypto.randomBytes(32).toString('base64url'),
     serviceRequestId: uuid(),
+    importId: uuid(),
     invitationForHomeownerId: uuid(),
     invitationForNobodyId: uuid(),
     checklistTemplate: { ...w.checklistTemplate, id: uuid() },

@@ -138,3 +138,26 @@ describe('reading the file', () => {
     expect(nameKey("  O'Neil,  Pat ")).toBe(nameKey('o neil pat'));
   });
 });
+
+describe('the sample file in public/', () => {
+  it('maps itself and has no row errors against the standard part types', async () => {
+    const fs = await import('node:fs');
+    const { COMPONENT_TYPES } = await import('../../../shared/trade/component-types');
+    const { text, encoding } = decodeImportBytes(fs.readFileSync('public/import-sample.csv'));
+    const { headers, rows } = parseImportText(text, encoding);
+    const mapping = guessMapping(headers);
+    const labels = new Map(Object.entries(COMPONENT_TYPES).map(([code, def]) => [nameKey(def.label), code as keyof typeof COMPONENT_TYPES]));
+    const column = new Map(headers.map((h, i) => [h, i]));
+    const results = rows.map((cells, i) =>
+      validateImportRow({
+        row: i + 2,
+        cells: Object.fromEntries(Object.entries(mapping).map(([f, h]) => [f, cells[column.get(h!)!]])),
+        columns: mapping,
+        today: '2026-11-01',
+        partType: (t) => labels.get(nameKey(t)) ?? null,
+      }),
+    );
+    expect(results.flatMap((r) => r.errors)).toEqual([]);
+    expect(results.every((r) => r.value && r.value.visits.length === 2 && r.value.parts.length >= 1)).toBe(true);
+  });
+});
