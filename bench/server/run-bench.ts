@@ -22,6 +22,7 @@ import { formatTable, machineFacts, writeResults } from './report';
 import { loadSamples } from './samples';
 import { measureClientHalf } from './client-half';
 import { crewRows, FULL_CREW, QUICK_CREW, type CrewScale } from './crew-figures';
+import { importRows } from './import-figure';
 
 export type RunOptions = {
   databaseUrl: string;
@@ -38,6 +39,8 @@ export type RunOptions = {
   crew?: CrewScale | null;
   /** Only the concurrent technicians (written to <date>-crew.json, so a full run's file is kept). */
   crewOnly?: boolean;
+  /** Only the import figures (written to <date>-import.json). */
+  importOnly?: boolean;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -70,49 +73,55 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
     const clientDir = opts.client ? CLIENT_DIST : undefined;
     let big: LatencySet | null = null;
 
-    await withApp(opts.databaseUrl, s3.endpoint, clientDir, async (run) => {
-      meta = run.meta;
-      log(`Database ${databaseNameOf(opts.databaseUrl)}: ${Object.entries(run.meta.counts).map(([k, v]) => `${v} ${k}`).join(', ')}`);
-      if (opts.crewOnly) {
-        figures.push(...(await crewRows(run, scale, opts.crew ?? (scale.quick ? QUICK_CREW : FULL_CREW), log)));
-        return;
-      }
-      log('Warming up…');
-      await warmUp(run, scale);
-      log('Latency at fixed rates (timeline, search, due, stock)…');
-      big = await measureLatencySet(run, scale);
-      figures.push(...latencyRows(big));
-      log('Tag resolution…');
-      figures.push(await tagRow(run, scale));
-      log('Throughput at 50 connections, then pgbench on the same SQL…');
-      figures.push(...(await throughputRows(run, scale)));
+    if (!opts.importOnly) {
+      await withApp(opts.databaseUrl, s3.endpoint, clientDir, async (run) => {
+        meta = run.meta;
+        log(`Database ${databaseNameOf(opts.databaseUrl)}: ${Object.entries(run.meta.counts).map(([k, v]) => `${v} ${k}`).join(', ')}`);
+        if (opts.crewOnly) {
+          figures.push(...(await crewRows(run, scale, opts.crew ?? (scale.quick ? QUICK_CREW : FULL_CREW), log)));
+          return;
+        }
+        log('Warming up…');
+        await warmUp(run, scale);
+        log('Latency at fixed rates (timeline, search, due, stock)…');
+        big = await measureLatencySet(run, scale);
+        figures.push(...latencyRows(big));
+        log('Tag resolution…');
+        figures.push(await tagRow(run, scale));
+        log('Throughput at 50 connections, then pgbench on the same SQL…');
+        figures.push(...(await throughputRows(run, scale)));
 
-      log('EXPLAIN the due query…');
-      const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 1 });
-      try {
-        const db = drizzle(pool, { schema, casing: 'snake_case' }) as unknown as Db;
-        plan = await explainDueQuery(db, pool, run.meta.companyId, DUE_WINDOW_DAYS, 100);
-      } finally {
-        await pool.end();
-      }
-      const p = plan;
-      figures.push({
-        figure: `Due query plan (EXPLAIN ANALYZE, first page)`,
-        load: 'single query',
-        value: round(p.executionMs, 2),
-        unit: 'ms',
-        target: 'index scan, no full-table sort',
-        met: p.usesIndexScan && !p.fullTableSort,
-        note: `top node: ${p.topNode}; index scan on components: ${p.usesIndexScan ? 'yes' : 'no'}; full-table sort: ${p.fullTableSort ? 'yes' : 'no'}${p.seqScans.length ? `; seq scans: ${p.seqScans.join(', ')}` : ''}`,
+        log('EXPLAIN the due query…');
+        const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 1 });
+        try {
+          const db = drizzle(pool, { schema, casing: 'snake_case' }) as unknown as Db;
+          plan = await explainDueQuery(db, pool, run.meta.companyId, DUE_WINDOW_DAYS, 100);
+        } finally {
+          await pool.end();
+        }
+        const p = plan;
+        figures.push({
+          figure: `Due query plan (EXPLAIN ANALYZE, first page)`,
+          load: 'single query',
+          value: round(p.executionMs, 2),
+          unit: 'ms',
+          target: 'index scan, no full-table sort',
+          met: p.usesIndexScan && !p.fullTableSort,
+          note: `top node: ${p.topNode}; index scan on components: ${p.usesIndexScan ? 'yes' : 'no'}; full-table sort: ${p.fullTableSort ? 'yes' : 'no'}${p.seqScans.length ? `; seq scans: ${p.seqScans.join(', ')}` : ''}`,
+        });
+
+        const crew = opts.crew === undefined ? (scale.quick ? QUICK_CREW : FULL_CREW) : opts.crew;
+        if (crew) figures.push(...(await crewRows(run, scale, crew, log)));
+
+        if (opts.client) figures.push(...(await measureClientHalf(run, scale, log)));
       });
-
-      const crew = opts.crew === undefined ? (scale.quick ? QUICK_CREW : FULL_CREW) : opts.crew;
-      if (crew) figures.push(...(await crewRows(run, scale, crew, log)));
-
-      if (opts.client) figures.push(...(await measureClientHalf(run, scale, log)));
-    });
+    }
 
     if (!opts.crewOnly) {
+      log('Import…');
+      figures.push(...(await importRows({ databaseUrl: opts.databaseUrl, s3Endpoint: s3.endpoint, s3Bucket: S3_BUCKET }, scale, log)));
+    }
+    if (!opts.crewOnly && !opts.importOnly) {
       log('Photo pipeline…');
       const storage = createObjectStorage({ S3_ENDPOINT: s3.endpoint, S3_REGION: 'us-east-1', S3_BUCKET, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
       try {
@@ -153,7 +162,7 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   const print = opts.print ?? ((text: string) => console.log(text));
   print(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
   if (p) print(`Due query plan:\n${p.text}\n`);
-  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : null, {
+  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : opts.importOnly ? 'import' : null, {
     date: new Date().toISOString(),
     quick: opts.quick,
     crewOnly: Boolean(opts.crewOnly),
