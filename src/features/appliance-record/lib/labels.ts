@@ -1,3 +1,4 @@
+import { formatCalendarDate, formatInstant } from '@shared/format/dates';
 import { LABELS } from '@shared/schemas/enums';
 import type { ApplianceDto } from '@shared/schemas/records';
 import type { Status } from '@/components/ui/status-badge';
@@ -19,11 +20,10 @@ export function makeModel(a: ApplianceDto) {
   return [a.manufacturer, a.model].filter(Boolean).join(' ') || 'Make and model not recorded';
 }
 
-const dateFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
 /** A calendar date (yyyy-mm-dd) shown as written, never shifted by the phone's time zone. */
-export const formatDate = (iso: string | null | undefined) => (iso ? dateFormat.format(new Date(`${iso.slice(0, 10)}T00:00:00Z`)) : '—');
+export const formatDate = (iso: string | null | undefined) => formatCalendarDate(iso);
 
-export const formatDateTime = (iso: string) =>
-  new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' }).format(new Date(iso));
+/** An instant on the company's clocks (the reader's own zone until the company is known). */
+export const formatDateTime = (iso: string, timeZone = Intl.DateTimeFormat().resolvedOptions().timeZone) => formatInstant(iso, timeZone);
 
 export const btuh = (n: number | null) => (n == null ? null : `${n.toLocaleString('en-US')} Btu/h`);

@@ -1,3 +1,4 @@
+import { formatInstant } from '@shared/format/dates';
 import { useState } from 'react';
 import { LABELS } from '@shared/schemas/enums';
 import { Card } from '@/components/ui/card';
@@ -33,7 +34,7 @@ export function ChecklistTemplatesSection() {
                 <p className="text-sm text-iron-muted">
                   {LABELS.applianceKind[t.applianceKind]}
                   {t.fuel ? `, ${LABELS.fuel[t.fuel].toLowerCase()}` : ', any fuel'} · {t.items.length} items · changed{' '}
-                  {new Date(t.updatedAt).toLocaleDateString()}
+                  {formatInstant(t.updatedAt, Intl.DateTimeFormat().resolvedOptions().timeZone)}
                 </p>
               </div>
               <Button variant="secondary" onClick={() => setEditingId(t.id)} aria-label={`Edit ${t.name}`}>

@@ -1,3 +1,4 @@
+import { formatCalendarDate } from '@shared/format/dates';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -7,7 +8,7 @@ import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
 import { ServiceRequestForm } from './service-request-form';
 
-const date = (iso: string) => new Date(`${iso}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+const date = (iso: string) => formatCalendarDate(iso, { long: true });
 
 /** The homeowner's life record: read-only, plain words first, the numbers alongside. */
 export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; source: RecordSource }) {

@@ -1,11 +1,11 @@
+import { formatInstant } from '@shared/format/dates';
 import { useEffect, useId, useRef } from 'react';
 import { Button } from '@/components/ui/button';
 import { PHOTO_KIND_LABELS, type PhotoDto } from '@shared/schemas/photos';
 import { useUpdatePhoto } from '../api/update-photo';
 import { photoAlt } from '../lib/upload-batch';
 
-const addedAt = (iso: string, timeZone: string) =>
-  new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(new Date(iso));
+const addedAt = (iso: string, timeZone: string) => formatInstant(iso, timeZone);
 
 function VisibilitySwitch({ photo }: { photo: PhotoDto }) {
   const update = useUpdatePhoto(photo.applianceId);

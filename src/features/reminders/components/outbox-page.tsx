@@ -1,3 +1,4 @@
+import { formatInstant } from '@shared/format/dates';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
@@ -24,7 +25,7 @@ export function OutboxPage() {
         outbox.data.map((m) => (
           <Card key={m.id} title={m.subject || '(no subject)'}>
             <p className="text-sm text-iron-muted">
-              To {m.to.join(', ')} · {new Date(m.date).toLocaleString()}
+              To {m.to.join(', ')} · {formatInstant(m.date, Intl.DateTimeFormat().resolvedOptions().timeZone)}
             </p>
             <details className="mt-2">
               <summary className="min-h-tap cursor-pointer font-semibold">Text part</summary>

@@ -1,10 +1,11 @@
+import { formatInstant } from '@shared/format/dates';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import { SERVICE_REQUEST_STATUS_LABELS, type ServiceRequestDto, type ServiceRequestStatus } from '@shared/schemas/service-requests';
 
 const BADGE: Record<ServiceRequestStatus, Status> = { new: 'soon', scheduled: 'info', closed: 'ok' };
-const when = (iso: string) => new Date(iso).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => formatInstant(iso, Intl.DateTimeFormat().resolvedOptions().timeZone);
 
 export function ServiceRequestCard({
   request: r,

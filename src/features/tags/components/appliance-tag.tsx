@@ -1,3 +1,5 @@
+import { todayInTimeZone } from '@shared/dates';
+import { formatCalendarDate } from '@shared/format/dates';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
@@ -12,7 +14,7 @@ import { TagCodeForm } from './tag-code-form';
 
 const linkButton =
   'inline-flex min-h-tap w-full items-center justify-center rounded-plate border border-plate-line bg-surface px-4 text-base font-semibold text-iron hover:bg-brass-light';
-const formatDay = (iso: string) => new Date(iso).toLocaleDateString(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
+const formatDay = (iso: string) => formatCalendarDate(todayInTimeZone(Intl.DateTimeFormat().resolvedOptions().timeZone, new Date(iso)));
 
 /** The record's tag section: which tag is on the appliance, and attaching or replacing one. */
 export function ApplianceTag({ applianceId }: { applianceId: string }) {

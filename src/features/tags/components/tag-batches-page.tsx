@@ -1,3 +1,5 @@
+import { todayInTimeZone } from '@shared/dates';
+import { formatCalendarDate } from '@shared/format/dates';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -13,7 +15,7 @@ import { TAG_FORMAT_LABELS } from '../lib/tag-formats';
 
 const pdfLink =
   'inline-flex min-h-tap items-center justify-center rounded-plate border border-plate-line bg-plate-deep px-4 text-base font-semibold text-iron hover:bg-brass-light';
-const formatDay = (iso: string) => new Date(iso).toLocaleDateString(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
+const formatDay = (iso: string) => formatCalendarDate(todayInTimeZone(Intl.DateTimeFormat().resolvedOptions().timeZone, new Date(iso)));
 
 /** The office prints tags here: make a batch of new codes, download its sheet, see how many are on appliances. */
 export function TagBatchesPage() {

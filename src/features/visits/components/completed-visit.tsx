@@ -3,6 +3,7 @@ import { Notice } from '@/components/ui/notice';
 import { Page } from '@/components/ui/page';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { useMe } from '@/lib/auth';
+import { formatCalendarDate, formatInstant } from '@shared/format/dates';
 import { can } from '@shared/policy';
 import { LABELS } from '@shared/schemas/enums';
 import type { ReadingKey, VisitDto } from '@shared/schemas/visits';
@@ -12,8 +13,8 @@ import { AmendForm } from './amend-form';
 import { Panel } from './inputs';
 import { ServerResults } from './server-results';
 
-const dayFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
-const stampFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+const dayFormat = { format: (isoDate: string) => formatCalendarDate(isoDate) };
+const stampFormat = { format: (iso: string) => formatInstant(iso, Intl.DateTimeFormat().resolvedOptions().timeZone) };
 
 const MARK_LOOK = { done: 'ok', not_applicable: 'info', needs_attention: 'due' } as const;
 
@@ -39,7 +40,7 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
 
   return (
     <Page
-      title={`${LABELS.visitType[visit.type]} · ${dayFormat.format(new Date(`${visit.visitedOn}T00:00:00Z`))}`}
+      title={`${LABELS.visitType[visit.type]} · ${dayFormat.format(visit.visitedOn)}`}
       subtitle={
         <Link to={`/appliances/${visit.applianceId}`} className="underline">
           Back to the life record
@@ -97,7 +98,7 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
               <li key={a.id} className="rounded-plate border-l-4 border-brass bg-plate p-2" data-amendment={a.id}>
                 <p className="font-semibold">{a.reason}</p>
                 <p className="text-sm text-iron-muted">
-                  {stampFormat.format(new Date(a.createdAt))} {a.createdByName ? `· ${a.createdByName}` : ''}
+                  {stampFormat.format(a.createdAt)} {a.createdByName ? `· ${a.createdByName}` : ''}
                 </p>
                 <ChangeList changes={a.changes} />
               </li>
@@ -112,13 +113,13 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
 
 /** The confirmation right after signing off, with what the sign-off set in motion. */
 function JustCompleted({ visit, mayAmend }: { visit: VisitDto; mayAmend: boolean }) {
-  const nextAnnual = visit.type === 'annual_maintenance' ? dayFormat.format(new Date(`${addYears(visit.visitedOn, 1)}T00:00:00Z`)) : null;
+  const nextAnnual = visit.type === 'annual_maintenance' ? dayFormat.format(addYears(visit.visitedOn, 1)) : null;
   return (
     <Notice kind="done" title="Visit completed">
       <ul className="mt-1 list-disc pl-5">
         <li>
           Signed off{visit.signedOffBy ? ` by ${visit.signedOffBy.name}` : ''}
-          {visit.signedOffAt ? ` on ${stampFormat.format(new Date(visit.signedOffAt))}` : ''}. It is on the appliance&apos;s life record now, and the homeowner
+          {visit.signedOffAt ? ` on ${stampFormat.format(visit.signedOffAt)}` : ''}. It is on the appliance&apos;s life record now, and the homeowner
           sees it through their share link or sign-in.
         </li>
         {visit.outcome === 'shut_down_unsafe' ? (
