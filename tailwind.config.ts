@@ -15,8 +15,8 @@ export default {
         plate: { DEFAULT: token('plate', '#F6F3EE'), deep: token('plate-deep', '#ECE6DC'), line: token('plate-line', '#D9D1C3') },
         surface: token('surface', '#FFFFFF'),
         brass: { DEFAULT: '#A9844F', dark: token('brass-dark', '#7E6139'), light: token('brass-light', '#E9DCC4') },
-        ok: { DEFAULT: token('ok', '#2E7D6B'), soft: token('ok-soft', '#DCEFE9') },
-        soon: { DEFAULT: token('soon', '#B7791F'), soft: token('soon-soft', '#F7EBD6') },
+        ok: { DEFAULT: token('ok', '#22614F'), soft: token('ok-soft', '#DCEFE9') },
+        soon: { DEFAULT: token('soon', '#8A5A12'), soft: token('soon-soft', '#F7EBD6') },
         due: { DEFAULT: token('due', '#B23A2E'), soft: token('due-soft', '#F6DEDA') },
         unsafe: { DEFAULT: token('unsafe', '#C8102E'), soft: token('unsafe-soft', '#FFFFFF') },
         // The header stays dark in both themes.
