@@ -30,6 +30,12 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen flex-col">
+      <a
+        href="#main"
+        className="no-print sr-only rounded-plate bg-surface px-4 py-3 font-semibold text-iron focus:not-sr-only focus:fixed focus:left-2 focus:top-2 focus:z-50"
+      >
+        Skip to content
+      </a>
       <header className="no-print sticky top-0 z-10 bg-header text-header-text">
         <div className="mx-auto flex max-w-5xl items-center gap-3 px-3 py-2 sm:px-6">
           <NavLink to="/" className="flex min-h-tap items-center gap-2 font-bold" aria-label="Lifeplate home">
@@ -82,7 +88,7 @@ export function AppShell() {
           </span>
         </nav>
       </header>
-      <main className="flex-1">
+      <main id="main" tabIndex={-1} className="flex-1 focus:outline-none">
         <Outlet />
       </main>
     </div>

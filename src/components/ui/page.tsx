@@ -1,6 +1,14 @@
-import type { ReactNode } from 'react';
+import { useEffect, type ReactNode } from 'react';
+
+/** Each page names itself in the browser's tab and to screen readers (WCAG 2.2 SC 2.4.2 Page Titled). */
+export function useDocumentTitle(title: string) {
+  useEffect(() => {
+    document.title = `${title} · Lifeplate`;
+  }, [title]);
+}
 
 export function Page({ title, subtitle, actions, children }: { title: string; subtitle?: ReactNode; actions?: ReactNode; children: ReactNode }) {
+  useDocumentTitle(title);
   return (
     <div className="mx-auto flex w-full max-w-5xl flex-col gap-4 px-3 py-4 sm:px-6">
       <header className="flex flex-wrap items-end justify-between gap-3">

@@ -1,0 +1,24 @@
+import { describe, expect, it } from 'vitest';
+import { signInAsMember, useBrowserFixture } from '../support/browser';
+
+const fx = useBrowserFixture();
+
+// Source: WCAG 2.2 SC 2.4.2 Page Titled and SC 2.4.1 Bypass Blocks (level A).
+describe('page titles and the skip link', () => {
+  it('names each page in the tab and lets the keyboard skip the header to the content', async () => {
+    const context = await fx.browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
+    await page.goto(`${fx.server.baseUrl}/customers`);
+    await page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
+    await expect.poll(() => page.title()).toBe('Customers · Lifeplate');
+
+    await page.keyboard.press('Tab');
+    const skip = page.getByRole('link', { name: 'Skip to content' });
+    expect(await skip.evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(await skip.isVisible()).toBe(true);
+    await page.keyboard.press('Enter');
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe('main');
+    await context.close();
+  });
+});
