@@ -7,12 +7,20 @@ import { can } from '@shared/policy';
 import { useNewServiceRequestCount } from '@/features/service-requests/api/list-service-requests';
 import { navFor } from './nav';
 
+/** Dim follows the device's colour scheme until the user presses the button; that choice is kept on the device. */
 function useDimMode() {
-  const [dim, setDim] = useState(() => localStorage.getItem('lifeplate:dim') === '1');
+  const [dim, setDimState] = useState(() => {
+    const stored = localStorage.getItem('lifeplate:dim');
+    if (stored === '1' || stored === '0') return stored === '1';
+    return window.matchMedia?.('(prefers-color-scheme: dark)').matches ?? false;
+  });
   useEffect(() => {
     document.documentElement.classList.toggle('dim', dim);
-    localStorage.setItem('lifeplate:dim', dim ? '1' : '0');
   }, [dim]);
+  const setDim = (next: boolean) => {
+    localStorage.setItem('lifeplate:dim', next ? '1' : '0');
+    setDimState(next);
+  };
   return [dim, setDim] as const;
 }
 

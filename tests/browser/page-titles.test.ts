@@ -22,3 +22,21 @@ describe('page titles and the skip link', () => {
     await context.close();
   });
 });
+
+describe('dim mode', () => {
+  it('follows a dark colour scheme until the Dim button overrides it, and keeps the choice', async () => {
+    const context = await fx.browser.newContext({ viewport: { width: 1280, height: 800 }, colorScheme: 'dark' });
+    const page = await context.newPage();
+    await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
+    await page.goto(`${fx.server.baseUrl}/customers`);
+    await page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
+    const isDim = () => page.evaluate(() => document.documentElement.classList.contains('dim'));
+    expect(await isDim()).toBe(true);
+    await page.getByRole('button', { name: /Light/ }).click();
+    expect(await isDim()).toBe(false);
+    await page.reload();
+    await page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
+    expect(await isDim()).toBe(false);
+    await context.close();
+  });
+});
