@@ -92,10 +92,7 @@ function CatalogRow({ entry }: { entry: CatalogEntryDto }) {
         <>
           <div className="min-w-48 flex-1">
             <p className={`font-semibold ${entry.active ? '' : 'text-iron-muted line-through'}`}>{entry.label}</p>
-            <p className="text-xs text-iron-muted">
-              code {entry.code}
-              {specLabels(entry).length > 0 && ` · told apart by ${specLabels(entry).join(', ')}`}
-            </p>
+            {specLabels(entry).length > 0 && <p className="text-xs text-iron-muted">Told apart by {specLabels(entry).join(', ')}</p>}
           </div>
           {entry.active ? <StatusBadge status="ok">Active</StatusBadge> : <StatusBadge status="info">Deactivated</StatusBadge>}
           <Button variant="ghost" onClick={() => setRenaming(true)} aria-label={`Rename ${entry.label}`}>
