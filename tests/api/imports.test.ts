@@ -249,6 +249,13 @@ describe('the import job', () => {
     const preview = await as.manager.post(`/api/imports/${old.body.id}/preview`).send({ mapping: old.body.mapping });
     expect(preview.status).toBe(410);
     expect(preview.body.error.message).toBe('The file old.csv was deleted after its keeping time. Upload it again.');
+    // The photo sweep leaves the kept import files alone, however old: they are not photos.
+    const { sweepOrphanObjects } = await import('../../server/modules/photos/sweep-orphan-objects');
+    const [kept] = await ctx.db.select().from(importFiles).where(eq(importFiles.id, live.body.id));
+    // Only under imports/, so no other test file's upload in flight is touched.
+    const { deleted } = await sweepOrphanObjects(ctx, { olderThanHours: 0, now: new Date(Date.now() + 86_400_000), prefix: 'imports/' });
+    expect(deleted).toEqual([]);
+    expect((await ctx.storage.get(kept.objectKey!)).body.length).toBeGreaterThan(0);
     // Leave the company free for other imports.
     await ctx.db.update(importFiles).set({ status: 'failed' }).where(eq(importFiles.id, live.body.id));
   });
