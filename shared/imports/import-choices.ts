@@ -1,4 +1,20 @@
-import { APPLIANCE_KINDS, CONSTRUCTIONS, FUELS, LABELS, VISIT_OUTCOMES, VISIT_TYPES, type ApplianceKind, type Construction, type Fuel, type VisitOutcome, type VisitType } from '../schemas/enums';
+import {
+  APPLIANCE_KINDS,
+  CONSTRUCTIONS,
+  FUELS,
+  IGNITION_TYPES,
+  LABELS,
+  VENT_TYPES,
+  VISIT_OUTCOMES,
+  VISIT_TYPES,
+  type ApplianceKind,
+  type Construction,
+  type Fuel,
+  type IgnitionType,
+  type VentType,
+  type VisitOutcome,
+  type VisitType,
+} from '../schemas/enums';
 import { normaliseHeader } from './guess-mapping';
 
 type Choices<T extends string> = { codes: readonly T[]; labels: Readonly<Record<T, string>>; words: Readonly<Record<string, T>> };
@@ -18,6 +34,16 @@ const CONSTRUCTION: Choices<Construction> = {
   codes: CONSTRUCTIONS,
   labels: LABELS.construction,
   words: { 'cast iron': 'cast_iron', iron: 'cast_iron', steel: 'steel_fire_tube', 'fire tube': 'steel_fire_tube', 'water tube': 'steel_water_tube', copper: 'copper', condensing: 'condensing', electric: 'electric' },
+};
+const IGNITION: Choices<IgnitionType> = {
+  codes: IGNITION_TYPES,
+  labels: LABELS.ignitionType,
+  words: { 'standing pilot': 'standing_pilot', pilot: 'standing_pilot', 'intermittent pilot': 'intermittent_pilot', ipi: 'intermittent_pilot', spark: 'direct_spark', 'direct spark': 'direct_spark', 'hot surface': 'hot_surface', hsi: 'hot_surface', 'oil burner': 'oil_burner', oil: 'oil_burner' },
+};
+const VENT: Choices<VentType> = {
+  codes: VENT_TYPES,
+  labels: LABELS.ventType,
+  words: { 'draft hood': 'draft_hood', 'draft diverter': 'draft_hood', natural: 'draft_hood', 'natural draft': 'draft_hood', barometric: 'barometric_damper', 'barometric damper': 'barometric_damper', 'power vent': 'power_vent', 'power vented': 'power_vent', 'direct vent': 'direct_vent', sealed: 'direct_vent' },
 };
 const VISIT: Choices<VisitType> = {
   codes: VISIT_TYPES,
@@ -46,5 +72,7 @@ function matcher<T extends string>(choices: Choices<T>) {
 export const applianceKindChoice = matcher(KIND);
 export const fuelChoice = matcher(FUEL);
 export const constructionChoice = matcher(CONSTRUCTION);
+export const ignitionChoice = matcher(IGNITION);
+export const ventChoice = matcher(VENT);
 export const visitTypeChoice = matcher(VISIT);
 export const visitOutcomeChoice = matcher(OUTCOME);

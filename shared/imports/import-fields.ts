@@ -35,6 +35,8 @@ export const IMPORT_FIELDS = {
   applianceKind: { label: 'Kind of appliance', required: true, synonyms: ['kind', 'type', 'appliance', 'appliance type', 'equipment', 'equipment type', 'unit type'] },
   fuel: { label: 'Fuel', required: true, synonyms: ['fuel', 'fuel type', 'energy'] },
   construction: { label: 'Construction', synonyms: ['construction', 'material', 'heat exchanger'] },
+  ignitionType: { label: 'Ignition', synonyms: ['ignition', 'ignition type', 'pilot', 'pilot type'] },
+  ventType: { label: 'Venting', synonyms: ['vent', 'venting', 'vent type', 'draft', 'flue type'] },
   manufacturer: { label: 'Make', synonyms: ['make', 'manufacturer', 'brand', 'mfr'] },
   model: { label: 'Model', synonyms: ['model', 'model number', 'model no'] },
   serial: { label: 'Serial number', synonyms: ['serial', 'serial number', 'serial no', 's/n', 'sn'] },

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { isStorableText, UNSTORABLE_TEXT_MESSAGE } from '../schemas/common';
 import type { ApplianceKind, Construction, Fuel, IgnitionType, VentType, VisitOutcome, VisitType } from '../schemas/enums';
 import type { ComponentType } from '../trade/component-types';
-import { applianceKindChoice, constructionChoice, fuelChoice, visitOutcomeChoice, visitTypeChoice } from './import-choices';
+import { applianceKindChoice, constructionChoice, fuelChoice, ignitionChoice, ventChoice, visitOutcomeChoice, visitTypeChoice } from './import-choices';
 import { IMPORT_FIELDS, PART_SLOTS, VISIT_SLOTS, type ImportField } from './import-fields';
 import { IMPORT_DATE_FORMATS_HINT, parseImportDate } from './parse-import-date';
 import { parseSpecText } from './parse-spec-text';
@@ -105,6 +105,8 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
   const kind = choice('applianceKind', applianceKindChoice, true);
   const fuel = choice('fuel', fuelChoice, true);
   const construction = choice('construction', constructionChoice, false);
+  const ignitionType = choice('ignitionType', ignitionChoice, false);
+  const ventType = choice('ventType', ventChoice, false);
   const inputText = text('inputBtuh');
   let inputBtuh: number | null = null;
   if (inputText !== null) {
@@ -161,6 +163,8 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
   const assumed: string[] = [];
   const oil = fuel === 'oil_no2';
   if (!construction) assumed.push('construction');
+  if (!ignitionType) assumed.push('ignition');
+  if (!ventType) assumed.push('vent');
   return {
     value: {
       row: ctx.row,
@@ -171,10 +175,11 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
         kind,
         fuel,
         construction: construction ?? (kind === 'water_heater' || kind === 'furnace' ? 'steel_fire_tube' : 'cast_iron'),
-        // Not columns of most old records; the record says they were assumed, for the technician to confirm.
-        ignitionType: oil ? 'oil_burner' : 'standing_pilot',
-        ventType: oil ? 'barometric_damper' : 'draft_hood',
-        assumed: [...assumed, 'ignition', 'vent'],
+        // Often not columns of an old list: the usual arrangement for the fuel, and the record says it was assumed,
+        // for the technician to confirm on the first visit (the checklist and the draft checks depend on them).
+        ignitionType: ignitionType ?? (oil ? 'oil_burner' : 'standing_pilot'),
+        ventType: ventType ?? (oil ? 'barometric_damper' : 'draft_hood'),
+        assumed,
         manufacturer,
         model,
         serial,

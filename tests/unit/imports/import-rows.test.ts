@@ -72,7 +72,7 @@ describe('reading a part\'s size from a cell', () => {
 });
 
 describe('one row', () => {
-  const columns = { customerName: 'Customer', siteStreet: 'Address', siteTown: 'City', applianceKind: 'Kind', fuel: 'Fuel', installedOn: 'Installed', part1Type: 'Part 1', visit1Date: 'Visit 1' } as const;
+  const columns = { customerName: 'Customer', siteStreet: 'Address', siteTown: 'City', applianceKind: 'Kind', fuel: 'Fuel', installedOn: 'Installed', part1Type: 'Part 1', visit1Date: 'Visit 1', ignitionType: 'Ignition', ventType: 'Vent', construction: 'Build' } as const;
   const partType = (t: string) => (nameKey(t) === 'thermocouple' ? ('thermocouple' as const) : null);
   const row = (cells: Record<string, string>) => validateImportRow({ row: 214, cells, columns, today: '2026-11-18', partType });
   const good = { customerName: 'Pat Example', siteStreet: '12 Elm Street', siteTown: 'Wrenfield', applianceKind: 'Steam', fuel: 'Oil' };
@@ -94,6 +94,11 @@ describe('one row', () => {
       "row 214, Installed: '13/31/2004' is not a date; use YYYY-MM-DD, MM/DD/YYYY or a month name such as Jan 6, 2004.",
       "row 214, Part 1: 'flux capacitor' is not a part type of your catalog.",
     ]);
+  });
+
+  it('takes ignition and venting from the file when it has them, and then assumes nothing of them', () => {
+    const { value } = row({ ...good, ignitionType: 'HSI', ventType: 'power vented', construction: 'steel' } as Record<string, string>);
+    expect(value?.appliance).toMatchObject({ ignitionType: 'hot_surface', ventType: 'power_vent', construction: 'steel_fire_tube', assumed: [] });
   });
 
   it('refuses a date after the company\'s today', () => {
