@@ -2,7 +2,7 @@ import type { Faker } from '@faker-js/faker';
 import { planAppliance, type DemoApplianceRow } from '../../server/db/seed/demo-plan';
 import { partSlotsFor } from '../../server/db/seed/demo-parts';
 import { demoFindings, demoReadings } from '../../server/db/seed/demo-readings';
-import { computeVisitResults, keyReadings } from '../../server/modules/visits/visit-results';
+import { resultsToStore, keyReadings } from '../../server/modules/visits/visit-results';
 import { COMPONENT_TYPES, formatSpec } from '../../shared/trade/component-types';
 
 /**
@@ -42,7 +42,7 @@ export function buildPrototypes(f: Faker, today: string) {
     for (let wear = 0; wear < WEAR_LEVELS; wear++) {
       for (let r = 0; r < READINGS_PER_WEAR; r++) {
         const input = demoReadings(f, shape, wear / (WEAR_LEVELS - 1));
-        const results = computeVisitResults(input, { fuel: row.fuel, ventType: row.ventType, construction: row.construction, inputBtuh: row.inputBtuh });
+        const results = resultsToStore(input, { fuel: row.fuel, ventType: row.ventType, construction: row.construction, inputBtuh: row.inputBtuh });
         const key = keyReadings(input, results);
         readings.push({ p, wear, r, readings: input, results, key, summary: readingSummary(key), findings: demoFindings(f, shape) });
       }

@@ -5,7 +5,7 @@ import { LABELS, type VisitOutcome, type VisitType } from '../../../shared/schem
 import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { addDays, addYears, daysBetween } from '../../../shared/trade/iso-date';
 import { COMPONENT_TYPES, formatSpec } from '../../../shared/trade/component-types';
-import { computeVisitResults, keyReadings } from '../../modules/visits/visit-results';
+import { resultsToStore, keyReadings } from '../../modules/visits/visit-results';
 import { findDefaultChecklist } from '../../modules/checklists/default-checklists';
 import { requiredReadingsFor } from '../../modules/checklists/required-readings';
 import { ATTENTION_NOTES, demoFindings, demoReadings } from './demo-readings';
@@ -137,7 +137,7 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClo
       recommendations = 'Replace the thermocouple at the next call; it is weak and the pilot may drop out.';
     }
     const readings = demoReadings(f, shape, wear, overrides);
-    const results = computeVisitResults(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction });
+    const results = resultsToStore(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction });
     const checklist = checklistFor(f, plan);
 
     const swapped: string[] = [];

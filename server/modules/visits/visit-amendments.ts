@@ -9,7 +9,7 @@ import { companyToday } from '../due/company-today';
 import { recomputeDueForAppliance } from '../due/due.repository';
 import { alertsOf, outcomeRequirements, requirementDetails } from '../../../shared/visits/completion-requirements';
 import { mergeChecklist, mergeReadings } from './visit-draft';
-import { computeVisitResults, type VisitResults } from './visit-results';
+import { resultsToStore, type VisitResults } from './visit-results';
 import type { Member } from './visit-lock';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
@@ -41,7 +41,7 @@ export async function amendVisit(tx: Tx, actor: Member, visitId: string, input: 
 
   if (input.checklist) mergeChecklist(visit.checklist, input.checklist);
   if (input.readings) {
-    changes.results = computeVisitResults(mergeReadings(visit.readings, input.readings), appliance);
+    changes.results = resultsToStore(mergeReadings(visit.readings, input.readings), appliance);
   }
   if (input.outcome) {
     const o = input.outcome;

@@ -3,12 +3,12 @@ import type { DbOrTx } from '../../db/client';
 import type { ChecklistItemRecord } from '../../db/schema/index';
 import { validationFailed } from '../../lib/http-error';
 import type { checklistEntryInput, ReadingsInput, visitDraftInput } from '../../../shared/schemas/visits';
-import { computeVisitResults, type VisitResults } from './visit-results';
+import { resultsToStore, type VisitResults } from './visit-results';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
 export type DraftFields = z.output<typeof visitDraftInput>;
 type ChecklistEntry = z.output<typeof checklistEntryInput>;
-type ApplianceFacts = Parameters<typeof computeVisitResults>[1];
+type ApplianceFacts = Parameters<typeof resultsToStore>[1];
 
 /** Marks and notes matched by key onto the visit's own copy of the checklist; an unknown key is a field error. */
 export function mergeChecklist(current: ChecklistItemRecord[], entries: ChecklistEntry[], path = 'checklist'): ChecklistItemRecord[] {
@@ -44,7 +44,7 @@ export async function mergeDraft(
   const patch: Partial<VisitRow> = {};
   if (input.checklist) patch.checklist = mergeChecklist(visit.checklist, input.checklist);
   const readings = mergeReadings(visit.readings, input.readings);
-  const results = computeVisitResults(readings, appliance);
+  const results = resultsToStore(readings, appliance);
   if (input.readings) patch.readings = readings;
   patch.results = results;
 

@@ -1,7 +1,7 @@
 import type { DbOrTx } from '../../db/client';
 import type { ReadingKey, ReadingsInput, VisitDto } from '../../../shared/schemas/visits';
 import { typeLabelFor } from '../due/type-label';
-import { isOutcomeRequired, type VisitResults } from './visit-results';
+import { isOutcomeRequired, type VisitResults } from '../../../shared/visits/visit-results';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);

@@ -1,7 +1,7 @@
 import { createContext, useContext } from 'react';
 import type { ApplianceDto } from '@shared/schemas/records';
 import type { DraftFields, FieldErrors, LocalReadings, ReadingKey } from '../draft/draft-fields';
-import type { LiveResults } from '../lib/live-results';
+import type { ReadingResults } from '@shared/visits/visit-results';
 import type { UnitPrefs } from '../lib/unit-prefs';
 
 export type DraftEditor = {
@@ -12,7 +12,7 @@ export type DraftEditor = {
   errors: FieldErrors;
   appliance: ApplianceDto | undefined;
   prefs: UnitPrefs;
-  live: LiveResults;
+  live: ReadingResults;
   /** Readings the template requires on this visit (each taken, or skipped with a reason). */
   requiredReadings: readonly string[];
   /** A number field holding text that is not a number says so here, so completing can refuse it (null: fixed). */

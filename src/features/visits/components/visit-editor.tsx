@@ -7,11 +7,12 @@ import { ApiError } from '@/lib/api-client';
 import { LABELS } from '@shared/schemas/enums';
 import type { VisitDto } from '@shared/schemas/visits';
 import { alertsOf, requirementDetails, type Requirement } from '@shared/visits/completion-requirements';
+import { computeReadingResults } from '@shared/visits/visit-results';
 import { applianceQueryOptions, useAppliance } from '../api/get-appliance';
 import { readingErrors } from '../draft/draft-fields';
 import { jumpToField } from '../lib/jump-to-field';
 import { liveRequirements } from '../lib/live-requirements';
-import { computeLiveResults } from '../lib/live-results';
+import { resultFacts } from '../lib/result-facts';
 import { useMe } from '@/lib/auth';
 import { useUnitPrefs } from '../lib/unit-prefs';
 import { Checklist } from './checklist';
@@ -69,14 +70,16 @@ export function VisitEditor({
     [],
   );
 
-  const live = useMemo(() => computeLiveResults(fields.readings, a, tolerancePct), [fields.readings, a, tolerancePct]);
+  const facts = useMemo(() => resultFacts(a, tolerancePct), [a, tolerancePct]);
+  // The same function the server runs on every save, so the phone shows the flags the server will store.
+  const live = useMemo(() => computeReadingResults(fields.readings, facts), [fields.readings, facts]);
   const liveList = useMemo(() => liveRequirements({ visit, fields, live, appliance: a, badText }), [visit, fields, live, a, badText]);
   const requirements = useMemo(() => [...liveList, ...serverOnly(completeError, liveList)], [liveList, completeError]);
   const errors = useMemo(
     () => ({ ...snapshot.errors, ...(tried ? requirementDetails(requirements) : {}), ...readingErrors(fields.readings) }),
     [snapshot.errors, tried, requirements, fields.readings],
   );
-  const alerts = alertsOf({ flags: live.flags, lowWaterCutoffFailed: live.lwcoFailed });
+  const alerts = alertsOf({ flags: live.flags, lowWaterCutoffFailed: live.lowWaterCutoffFailed });
   const ctx: DraftEditor = {
     visitId: visit.id,
     fields,

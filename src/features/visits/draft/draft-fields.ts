@@ -1,10 +1,10 @@
 import type { CheckMark, VisitOutcome } from '@shared/schemas/enums';
 import { analyzeCombustion, assessThermocoupleMillivolts, clockGasInput, parseGaugeGlassLevel, TradeInputError } from '@shared/trade/index';
+import type { ReadingsSoFar } from '@shared/visits/visit-results';
 import { readingsInput, type ReadingSkips, type ReadingsInput, type VisitDraftInput, type VisitDto } from '@shared/schemas/visits';
 
-type Loose<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
 /** Readings as typed so far: sub-objects may be incomplete; only complete, valid parts are sent. */
-export type LocalReadings = { [K in keyof ReadingsInput]?: Loose<NonNullable<ReadingsInput[K]>> | null };
+export type LocalReadings = ReadingsSoFar;
 export type ReadingKey = keyof ReadingsInput;
 
 export type ChecklistEntry = { key: string; mark: CheckMark | null; note: string };

@@ -2,12 +2,9 @@ import type { ApplianceDto } from '@shared/schemas/records';
 import type { VisitDto } from '@shared/schemas/visits';
 import { completionRequirements, type Requirement } from '@shared/visits/completion-requirements';
 import type { DraftFields } from '../draft/draft-fields';
-import type { LiveResults } from './live-results';
+import { refusalsOf, type ReadingResults } from '@shared/visits/visit-results';
 
 export const NOT_A_NUMBER = 'Type a number, like 8.5.';
-
-/** The block each live computation reads, for keying its refusal like the server would. */
-const LIVE_BLOCKS = { combustion: 'combustion', gasInput: 'gasInput', thermocouple: 'thermocouple', gaugeGlass: 'gaugeGlassLevel' } as const;
 
 /**
  * What still stops this visit from being completed, by the same rule the server applies, from what is on the
@@ -16,7 +13,7 @@ const LIVE_BLOCKS = { combustion: 'combustion', gasInput: 'gasInput', thermocoup
 export function liveRequirements(input: {
   visit: Pick<VisitDto, 'type' | 'checklist' | 'requiredReadings'>;
   fields: DraftFields;
-  live: LiveResults;
+  live: ReadingResults;
   appliance: ApplianceDto | undefined;
   badText: Record<string, string>;
 }): Requirement[] {
@@ -29,7 +26,7 @@ export function liveRequirements(input: {
     readingSkips: fields.readingSkips ?? {},
     requiredReadings: visit.requiredReadings ?? [],
     flags: live.flags,
-    lowWaterCutoffFailed: live.lwcoFailed,
+    lowWaterCutoffFailed: live.lowWaterCutoffFailed,
     outcome: fields.outcome,
     outcomeReason: fields.outcomeReason,
     outcomeToldWhom: fields.outcomeToldWhom,
@@ -39,13 +36,10 @@ export function liveRequirements(input: {
   const first = completionRequirements(facts);
   // A computation's refusal matters only where the schema found nothing wrong with the block already.
   const refused: Record<string, string[]> = {};
-  for (const [result, key] of Object.entries(LIVE_BLOCKS)) {
-    const r = live[result as keyof typeof LIVE_BLOCKS];
-    if (!r || r.ok || first.some((x) => x.field === `readings.${key}` || x.field.startsWith(`readings.${key}.`))) continue;
-    const block = fields.readings[key];
-    // Keyed like the server's results: the block's own field when the refusal names one, else the block.
-    const own = block !== null && typeof block === 'object' && Object.hasOwn(block, r.field);
-    refused[own ? `readings.${key}.${r.field}` : `readings.${key}`] = [r.message];
+  for (const r of refusalsOf(live)) {
+    const block = r.key.split('.')[1];
+    if (first.some((x) => x.field === `readings.${block}` || x.field.startsWith(`readings.${block}.`))) continue;
+    refused[r.key] = [r.message];
   }
   const all = Object.keys(refused).length ? completionRequirements({ ...facts, readingErrors: { ...facts.readingErrors, ...refused } }) : first;
   // Text that is not a number leaves the value empty; "must be a number" beside "type a number" says it twice.
