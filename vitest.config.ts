@@ -15,6 +15,11 @@ export default defineConfig({
       },
       {
         extends: true,
+        // Client code in a simulated DOM (happy-dom) with @testing-library/react: hooks, query keys, error screens.
+        test: { name: 'client', include: ['tests/client/**/*.test.{ts,tsx}'], environment: 'happy-dom' },
+      },
+      {
+        extends: true,
         test: { name: 'api', include: ['tests/api/**/*.test.ts'], environment: 'node', testTimeout: 20_000, hookTimeout: 30_000 },
       },
       {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { QueryClient } from '@tanstack/react-query';
 import { preloadKeys, preloadScriptTag } from '../../server/spa/preload';
 import { sharedRecordQueryOptions } from '@/features/homeowner/api/get-shared-record';
-import { applianceRecordQueryOptions } from '@/features/appliance-record/api/get-appliance-record';
+import { applianceRecordQueryOptions } from '@/lib/resources/appliances';
 import { meQueryOptions } from '@/lib/auth';
 
 describe('first-screen data embedded in the HTML', () => {

@@ -2,6 +2,7 @@ import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { Page, TimelineEventDto } from '@shared/schemas/records';
 import type { TimelineKind } from '@shared/schemas/enums';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 const PAGE_SIZE = 20;
 
@@ -10,7 +11,7 @@ export const getTimeline = (id: string, kind: TimelineKind | undefined, before: 
 
 export const timelineQueryOptions = (id: string, kind?: TimelineKind) =>
   infiniteQueryOptions({
-    queryKey: ['appliance', id, 'timeline', kind ?? 'all'],
+    queryKey: applianceKeys.timeline(id, kind ?? 'all'),
     queryFn: ({ pageParam }) => getTimeline(id, kind, pageParam),
     initialPageParam: undefined as string | undefined,
     getNextPageParam: (last) => last.nextCursor ?? undefined,

@@ -1,10 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { MakeupWaterDto, MakeupWaterEntryInput } from '@shared/schemas/makeup-water';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 export const getMakeupWater = (applianceId: string) => api<MakeupWaterDto>(`/appliances/${applianceId}/makeup-water`);
 export const makeupWaterQueryOptions = (applianceId: string) =>
-  queryOptions({ queryKey: ['appliance', applianceId, 'makeup-water'], queryFn: () => getMakeupWater(applianceId) });
+  queryOptions({ queryKey: applianceKeys.makeupWater(applianceId), queryFn: () => getMakeupWater(applianceId) });
 export const useMakeupWater = (applianceId: string) => useQuery(makeupWaterQueryOptions(applianceId));
 
 export const addMakeupWater = ({ applianceId, entry }: { applianceId: string; entry: MakeupWaterEntryInput }) =>
@@ -16,7 +17,7 @@ export function useAddMakeupWater(applianceId: string) {
     mutationFn: (entry: MakeupWaterEntryInput) => addMakeupWater({ applianceId, entry }),
     onSuccess: (data) => {
       qc.setQueryData(makeupWaterQueryOptions(applianceId).queryKey, data);
-      void qc.invalidateQueries({ queryKey: ['appliance', applianceId, 'timeline'] });
+      void qc.invalidateQueries({ queryKey: applianceKeys.timeline(applianceId) });
     },
   });
 }

@@ -1,10 +1,11 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { CreatedShareLinkDto, ShareLinkDto, ShareLinkInput } from '@shared/schemas/homeowner';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 export const listShareLinks = (applianceId: string) => api<ShareLinkDto[]>(`/appliances/${applianceId}/share-links`);
 export const shareLinksQueryOptions = (applianceId: string) =>
-  queryOptions({ queryKey: ['appliance', applianceId, 'share-links'], queryFn: () => listShareLinks(applianceId) });
+  queryOptions({ queryKey: applianceKeys.shareLinks(applianceId), queryFn: () => listShareLinks(applianceId) });
 export const useShareLinks = (applianceId: string) => useQuery(shareLinksQueryOptions(applianceId));
 
 export function useCreateShareLink(applianceId: string) {

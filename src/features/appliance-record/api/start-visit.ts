@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { VisitDto } from '@shared/schemas/visits';
 import type { VisitType } from '@shared/schemas/enums';
-import { applianceRecordQueryOptions } from './get-appliance-record';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 export const startVisit = (input: { applianceId: string; type: VisitType }) => api<VisitDto>('/visits', { method: 'POST', body: input });
 
@@ -12,7 +12,7 @@ export function useStartVisit() {
     mutationFn: startVisit,
     onSuccess: (visit) => {
       qc.setQueryData(['visit', visit.id], visit);
-      return qc.invalidateQueries({ queryKey: applianceRecordQueryOptions(visit.applianceId).queryKey });
+      return qc.invalidateQueries({ queryKey: applianceKeys.record(visit.applianceId) });
     },
   });
 }

@@ -6,7 +6,7 @@ import { useMe } from '@/lib/auth';
 import { ApiError } from '@/lib/api-client';
 import { can } from '@shared/policy';
 import { LABELS } from '@shared/schemas/enums';
-import { useApplianceRecord } from '../api/get-appliance-record';
+import { useApplianceRecord } from '@/lib/resources/appliances';
 import { applianceTitle, formatDate } from '../lib/labels';
 import { CombustionTrend } from './combustion-trend';
 import { ComponentsList } from './components-list';

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { CatalogEntryDto, catalogPatch } from '@shared/schemas/records';
-import { componentTypesQueryOptions } from './list-component-types';
+import { componentTypeKeys } from '@/lib/resources/component-types';
 
 export type CatalogPatchBody = z.output<typeof catalogPatch>;
 
@@ -13,6 +13,6 @@ export function useUpdateComponentType() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: updateComponentType,
-    onSuccess: () => qc.invalidateQueries({ queryKey: componentTypesQueryOptions().queryKey }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: componentTypeKeys.all }),
   });
 }

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { DueRuleDto, dueRuleInput } from '@shared/schemas/due';
+import { applianceKeys } from '@/lib/resources/appliances';
 import { dueRulesQueryOptions } from './list-due-rules';
 
 export type DueRuleBody = z.output<typeof dueRuleInput>;
@@ -17,7 +18,7 @@ export function useUpdateDueRule() {
       void qc.invalidateQueries({ queryKey: dueRulesQueryOptions().queryKey });
       // Due dates everywhere were recomputed on the server.
       void qc.invalidateQueries({ queryKey: ['due'] });
-      void qc.invalidateQueries({ queryKey: ['appliances'] });
+      void qc.invalidateQueries({ queryKey: applianceKeys.all });
     },
   });
 }

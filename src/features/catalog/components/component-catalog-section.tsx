@@ -6,7 +6,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Spinner } from '@/components/ui/page';
 import { StatusBadge } from '@/components/ui/status-badge';
-import { useComponentTypes } from '../api/list-component-types';
+import { useComponentTypes } from '@/lib/resources/component-types';
 import { useUpdateComponentType } from '../api/update-component-type';
 import { describeFailure, zodFieldErrors } from '@/lib/form-errors';
 

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { ApplianceRecordDto, replaceApplianceInput } from '@shared/schemas/records';
+import { applianceKeys } from '@/lib/resources/appliances';
 import { customerQueryOptions } from './get-customer';
 
 export type ReplaceBody = z.output<typeof replaceApplianceInput>;
@@ -16,7 +17,7 @@ export function useReplaceAppliance() {
     onSuccess: (record) => {
       void qc.invalidateQueries({ queryKey: customerQueryOptions(record.customer.id).queryKey });
       // The old and the new appliance's life records both changed.
-      void qc.invalidateQueries({ queryKey: ['appliance'] });
+      void qc.invalidateQueries({ queryKey: applianceKeys.all });
     },
   });
 }

@@ -5,7 +5,7 @@ import { Page } from '@/components/ui/page';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import type { FieldErrors } from '@/lib/api-client';
-import { useComponentTypes } from '../api/get-component-types';
+import { useComponentTypes } from '@/lib/resources/component-types';
 import { useCustomer } from '../api/get-customer';
 import { useCreateAppliance } from '../api/create-appliance';
 import { buildApplianceBody, emptyApplianceDraft, isOil, newComponentDraft, type ApplianceDraft, type ComponentDraft } from './appliance-draft';

@@ -4,7 +4,7 @@ import { FormActions } from '@/components/ui/form-actions';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { SiteBody } from '../api/create-site';
-import { useTechnicians } from '../api/get-technicians';
+import { useTechnicians } from '@/lib/resources/members';
 import { unclaimedErrors } from '@/lib/form-errors';
 import { useValidatedSubmit } from '@/lib/use-validated-submit';
 

@@ -8,7 +8,7 @@ import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import { LABELS, APPLIANCE_KINDS, type ApplianceKind } from '@shared/schemas/enums';
 import type { DueItemStatus } from '@shared/schemas/due';
 import { useDue } from '../api/get-due';
-import { useTechnicians } from '../api/get-technicians';
+import { useTechnicians } from '@/lib/resources/members';
 import { StockForecast } from './stock-forecast';
 import { AnnualServiceDue } from './annual-service-due';
 import { ReplacementProspects } from './replacement-prospects';

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { PhotoDto } from '@shared/schemas/photos';
 import { photosQueryOptions } from './list-photos';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 export type PhotoChange = { caption?: string | null; homeownerVisible?: boolean };
 
@@ -14,7 +15,7 @@ export function useUpdatePhoto(applianceId: string) {
     onSuccess: (updated) => {
       qc.setQueryData(photosQueryOptions(applianceId).queryKey, (list) => list?.map((p) => (p.id === updated.id ? updated : p)));
       // The timeline entry's homeowner visibility follows the photo's.
-      void qc.invalidateQueries({ queryKey: ['appliance', applianceId] });
+      void qc.invalidateQueries({ queryKey: applianceKeys.record(applianceId) });
     },
   });
 }

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '@/lib/api-client';
 import { MAX_PHOTO_BYTES, type PhotoKind, type PhotoUploadDto } from '@shared/schemas/photos';
+import { applianceKeys } from '@/lib/resources/appliances';
 
 /** One file of a batch and the name it is sent under (unique within the batch, so a rejection names exactly one file). */
 export type UploadItem = { file: File; name: string };
@@ -58,6 +59,6 @@ export function useUploadPhotos(applianceId: string) {
     mutationFn: ({ batch, onProgress, signal }: { batch: UploadBatch; onProgress: (percent: number) => void; signal?: AbortSignal }) =>
       sendPhotos(batch, onProgress, signal),
     // The photo list, the record and its timeline (a "photo added" entry) all change.
-    onSettled: () => qc.invalidateQueries({ queryKey: ['appliance', applianceId] }),
+    onSettled: () => qc.invalidateQueries({ queryKey: applianceKeys.record(applianceId) }),
   });
 }

@@ -6,7 +6,7 @@ import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/lib/auth';
 import { can, canManageMemberRole } from '@shared/policy';
 import { MEMBER_ROLES, ROLE_LABELS, type MemberRole } from '@shared/schemas/roles';
-import { useMembers } from '../api/get-members';
+import { useMembers } from '@/lib/resources/members';
 import { useChangeMemberRole, useDeactivateMember } from '../api/update-member';
 import { InviteForm } from './invite-form';
 import { PendingInvitations } from './pending-invitations';

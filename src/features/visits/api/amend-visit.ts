@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { amendmentInput, VisitDto } from '@shared/schemas/visits';
-import { applianceQueryOptions } from './get-appliance';
+import { applianceKeys } from '@/lib/resources/appliances';
 import { visitQueryOptions } from './get-visit';
 
 export type AmendmentInput = z.input<typeof amendmentInput>;
@@ -16,7 +16,7 @@ export function useAmendVisit() {
     mutationFn: amendVisit,
     onSuccess: (visit) => {
       qc.setQueryData(visitQueryOptions(visit.id).queryKey, visit);
-      return qc.invalidateQueries({ queryKey: applianceQueryOptions(visit.applianceId).queryKey });
+      return qc.invalidateQueries({ queryKey: applianceKeys.record(visit.applianceId) });
     },
   });
 }

@@ -3,7 +3,7 @@ import { api } from '@/lib/api-client';
 import type { VisitDto } from '@shared/schemas/visits';
 import type { z } from 'zod';
 import type { swapInput } from '@shared/schemas/visits';
-import { applianceQueryOptions } from './get-appliance';
+import { applianceKeys } from '@/lib/resources/appliances';
 import { visitQueryOptions } from './get-visit';
 
 export type SwapInput = z.input<typeof swapInput>;
@@ -16,7 +16,7 @@ export function useSwapPart() {
     mutationFn: swapPart,
     onSuccess: (visit) => {
       qc.setQueryData(visitQueryOptions(visit.id).queryKey, visit);
-      return qc.invalidateQueries({ queryKey: applianceQueryOptions(visit.applianceId).queryKey });
+      return qc.invalidateQueries({ queryKey: applianceKeys.record(visit.applianceId) });
     },
   });
 }

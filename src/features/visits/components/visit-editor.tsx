@@ -8,7 +8,7 @@ import { LABELS } from '@shared/schemas/enums';
 import type { VisitDto } from '@shared/schemas/visits';
 import { alertsOf, requirementDetails, type Requirement } from '@shared/visits/completion-requirements';
 import { computeReadingResults } from '@shared/visits/visit-results';
-import { applianceQueryOptions, useAppliance } from '../api/get-appliance';
+import { applianceKeys, useApplianceRecord } from '@/lib/resources/appliances';
 import { readingErrors } from '../draft/draft-fields';
 import { jumpToField } from '../lib/jump-to-field';
 import { liveRequirements } from '../lib/live-requirements';
@@ -47,7 +47,7 @@ export function VisitEditor({
   onCompleting: (visitId: string | null) => void;
 }) {
   const { sync, snapshot } = useDraftSync(initial);
-  const appliance = useAppliance(visit.applianceId);
+  const appliance = useApplianceRecord(visit.applianceId);
   const [prefs] = useUnitPrefs();
   const tolerancePct = useMe().data?.company?.underFiringTolerancePct ?? null;
   const qc = useQueryClient();
@@ -105,7 +105,7 @@ export function VisitEditor({
     try {
       const done = await sync.complete();
       // The record behind the visit changed (parts, due dates, history); this screen now shows the completed visit.
-      void qc.invalidateQueries({ queryKey: applianceQueryOptions(done.applianceId).queryKey });
+      void qc.invalidateQueries({ queryKey: applianceKeys.record(done.applianceId) });
     } catch (e) {
       onCompleting(null);
       const err = e instanceof Error ? e : new Error('Not completed.');

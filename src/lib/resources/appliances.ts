@@ -1,0 +1,20 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { ApplianceRecordDto } from '@shared/schemas/records';
+
+/**
+ * `/appliances/:id` and everything shown under one appliance. Every key starts with `applianceKeys.all`, so
+ * invalidating `record(id)` refreshes the record with its photos, timeline and links, and `all` every open record.
+ */
+export const applianceKeys = {
+  all: ['appliance'] as const,
+  record: (id: string) => ['appliance', id] as const,
+  timeline: (id: string, kind?: string) => (kind === undefined ? (['appliance', id, 'timeline'] as const) : (['appliance', id, 'timeline', kind] as const)),
+  photos: (id: string) => ['appliance', id, 'photos'] as const,
+  shareLinks: (id: string) => ['appliance', id, 'share-links'] as const,
+  makeupWater: (id: string) => ['appliance', id, 'makeup-water'] as const,
+};
+
+export const getApplianceRecord = (id: string) => api<ApplianceRecordDto>(`/appliances/${encodeURIComponent(id)}`);
+export const applianceRecordQueryOptions = (id: string) => queryOptions({ queryKey: applianceKeys.record(id), queryFn: () => getApplianceRecord(id) });
+export const useApplianceRecord = (id: string) => useQuery(applianceRecordQueryOptions(id));
