@@ -1,6 +1,7 @@
 import { lazy, Suspense, type ComponentType } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import type { Permission } from '@shared/policy';
+import { withErrorScreens } from './route-error';
 
 /*
  * Everything but the router itself is lazy, so a page opened from a tag or a share link on a weak signal loads only the
@@ -30,7 +31,11 @@ function guardedPage(path: string, permission: Permission, load: () => Promise<C
 }
 
 export function createAppRouter() {
-  return createBrowserRouter([
+  return createBrowserRouter(withErrorScreens(appRoutes()));
+}
+
+export function appRoutes(): RouteObject[] {
+  return [
     {
       path: '/sign-in',
       lazy: async () => {
@@ -145,7 +150,7 @@ export function createAppRouter() {
         },
       ],
     },
-  ]);
+  ];
 }
 
 export type AppRouter = ReturnType<typeof createAppRouter>;
