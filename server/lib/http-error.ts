@@ -1,3 +1,5 @@
+import type { FileRejection } from '../../shared/schemas/errors';
+
 export type ErrorDetails = Record<string, string[]> | Record<string, unknown>;
 
 export class HttpError extends Error {
@@ -6,6 +8,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly details?: ErrorDetails,
+    /** Refused uploads, each with its file name and the reason (see shared/schemas/errors.ts). */
+    readonly files?: FileRejection[],
   ) {
     super(message);
   }

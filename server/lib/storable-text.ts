@@ -1,4 +1,5 @@
 import { isStorableText } from '../../shared/schemas/common';
+import { FORM_ERROR_KEY } from '../../shared/schemas/errors';
 
 type Node = { value: unknown; key: string | null; parent: Node | null };
 
@@ -32,7 +33,7 @@ export function unstorableTextPaths(root: unknown): string[] {
 function pathOf(node: Node): string {
   const keys: string[] = [];
   for (let n: Node | null = node; n?.key != null; n = n.parent) keys.push(n.key);
-  return keys.reverse().join('.') || '_';
+  return keys.reverse().join('.') || FORM_ERROR_KEY;
 }
 
 function isPlainObject(value: unknown): value is Record<string, unknown> {

@@ -7,10 +7,10 @@ export const notFoundApi: RequestHandler = (_req, _res, next) => next(new HttpEr
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let status = 500;
-  let body: { code: string; message: string; details?: unknown } = { code: 'internal', message: 'Something went wrong on our side.' };
+  let body: { code: string; message: string; details?: unknown; files?: unknown } = { code: 'internal', message: 'Something went wrong on our side.' };
   if (err instanceof HttpError) {
     status = err.status;
-    body = { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) };
+    body = { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}), ...(err.files ? { files: err.files } : {}) };
   } else if (err instanceof MulterError) {
     status = err.code === 'LIMIT_FILE_SIZE' ? 413 : 400;
     body = { code: 'upload_rejected', message: err.message, details: err.field ? { [err.field]: [err.message] } : undefined };

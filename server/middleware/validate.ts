@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { validationFailed } from '../lib/http-error';
 import { unstorableTextPaths } from '../lib/storable-text';
 import { UNSTORABLE_TEXT_MESSAGE } from '../../shared/schemas/common';
+import { FORM_ERROR_KEY } from '../../shared/schemas/errors';
 
 type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
 type Out<S, K extends keyof S> = S[K] extends z.ZodType ? z.output<S[K]> : undefined;
@@ -14,7 +15,7 @@ export function fieldErrors(error: z.ZodError): Record<string, string[]> {
   for (const issue of error.issues) {
     // A refused record key is reported at its record, with the reason: the key itself may be the text we refuse.
     const badKey = issue.code === 'invalid_key';
-    const key = (badKey ? issue.path.slice(0, -1) : issue.path).join('.') || '_';
+    const key = (badKey ? issue.path.slice(0, -1) : issue.path).join('.') || FORM_ERROR_KEY;
     (out[key] ??= []).push(badKey ? (issue.issues[0]?.message ?? issue.message) : issue.message);
   }
   return out;

@@ -25,7 +25,7 @@ export const optionalText = (max = 2000) =>
     .nullish();
 
 export const NOTHING_TO_CHANGE_MESSAGE = 'Nothing to change: send at least one field.';
-/** A PATCH must name at least one field; an empty patch is a form-level 400 (details key "_"), never a silent write. */
+/** A PATCH must name at least one field; an empty patch is a form-level 400 (details key FORM_ERROR_KEY, "_", from ./errors), never a silent write. */
 export const nonEmptyPatch = <T extends z.ZodObject>(schema: T) =>
   schema.refine((patch) => Object.values(patch).some((v) => v !== undefined), { message: NOTHING_TO_CHANGE_MESSAGE, path: [] });
 

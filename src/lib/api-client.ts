@@ -1,4 +1,6 @@
-export type FieldErrors = Record<string, string[]>;
+import type { ErrorBody, FieldErrors, FileRejection } from '@shared/schemas/errors';
+
+export type { FieldErrors } from '@shared/schemas/errors';
 
 export class ApiError extends Error {
   constructor(
@@ -8,6 +10,8 @@ export class ApiError extends Error {
     readonly details?: FieldErrors,
     /** From a 503's Retry-After: how long the server asked us to wait before trying again. */
     readonly retryAfterMs?: number,
+    /** Refused uploads, each with its file name and reason. */
+    readonly files?: FileRejection[],
   ) {
     super(message);
   }
@@ -37,8 +41,8 @@ export async function api<T>(path: string, { body, query, headers, ...init }: Op
   if (res.status === 204) return undefined as T;
   const data = await res.json().catch(() => null);
   if (!res.ok) {
-    const err = data?.error ?? data;
-    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `Request failed (${res.status}).`, err?.details, retryAfterMs(res.headers.get('Retry-After')));
+    const err: Partial<ErrorBody['error']> | undefined = data?.error ?? data;
+    throw new ApiError(res.status, err?.code ?? 'http_error', err?.message ?? `Request failed (${res.status}).`, err?.details, retryAfterMs(res.headers.get('Retry-After')), err?.files);
   }
   return data as T;
 }

@@ -1,11 +1,12 @@
 import type { z } from 'zod';
 import { ApiError, type FieldErrors } from '@/lib/api-client';
+import { FORM_ERROR_KEY } from '@shared/schemas/errors';
 
 /** zod issues keyed by dotted path ("components.2.installedOn"), the same shape the server sends in details. */
 export function zodFieldErrors(error: z.ZodError): FieldErrors {
   const out: FieldErrors = {};
   for (const issue of error.issues) {
-    const key = issue.path.map(String).join('.') || '_form';
+    const key = issue.path.map(String).join('.') || FORM_ERROR_KEY;
     (out[key] ??= []).push(issue.message);
   }
   return out;
@@ -39,7 +40,7 @@ export function errorsUnder(errors: FieldErrors, prefix: string): FieldErrors {
 export function unclaimedErrors(errors: FieldErrors, claimed: (key: string) => boolean): string[] {
   return Object.entries(errors)
     .filter(([key]) => !claimed(key))
-    .flatMap(([key, messages]) => messages.map((m) => (key === '_form' || key === '_self' ? m : `${key}: ${m}`)));
+    .flatMap(([key, messages]) => messages.map((m) => (key === FORM_ERROR_KEY || key === '_self' ? m : `${key}: ${m}`)));
 }
 
 /** '' means "not given" for optional numbers; anything else goes to zod as typed, so it can say what is wrong. */

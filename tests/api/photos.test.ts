@@ -161,6 +161,8 @@ describe('refusing bad uploads, storing nothing', () => {
       const res = await send(as.technician, { applianceId: heaterId, kind: 'finding' }, [file]);
       expect({ name: file.name, status: res.status }).toEqual({ name: file.name, status: 422 });
       expect(res.body.error.details.files[0]).toContain(file.name);
+      // Named as data, so the phone matches the refusal to its file without parsing a sentence.
+      expect(res.body.error.files).toEqual([{ file: file.name, reason: res.body.error.message }]);
     }
     await expectNothingStored();
   });

@@ -111,7 +111,7 @@ export function photosService(ctx: AppContext) {
         try {
           images.push(await processImage(file.buffer));
         } catch (err) {
-          if (err instanceof HttpError) throw new HttpError(err.status, err.code, err.message, { files: [`${file.originalname}: ${err.message}`] });
+          if (err instanceof HttpError) throw new HttpError(err.status, err.code, err.message, { files: [`${file.originalname}: ${err.message}`] }, [{ file: file.originalname, reason: err.message }]);
           throw err;
         }
       }

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import type { Tx } from '../../db/client';
 import { conflict, forbidden, notFound, validationFailed } from '../../lib/http-error';
 import { can } from '../../../shared/policy';
+import { FORM_ERROR_KEY } from '../../../shared/schemas/errors';
 import type { amendmentInput } from '../../../shared/schemas/visits';
 import { recordAudit } from '../audit/audit.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
@@ -57,7 +58,7 @@ export async function amendVisit(tx: Tx, actor: Member, visitId: string, input: 
   }
 
   if (swapCorrections?.length) changes.swaps = await correctSwaps(tx, actor, visit, swapCorrections);
-  if (Object.keys(changes).length === 0) throw validationFailed({ _: ['Give at least one corrected field.'] });
+  if (Object.keys(changes).length === 0) throw validationFailed({ [FORM_ERROR_KEY]: ['Give at least one corrected field.'] });
 
   const amendment = await visitsRepository.insertAmendment(tx, {
     companyId: actor.companyId,

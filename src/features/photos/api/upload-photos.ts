@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { ApiError } from '@/lib/api-client';
+import type { ErrorBody } from '@shared/schemas/errors';
 import { MAX_PHOTO_BYTES, type PhotoKind, type PhotoUploadDto } from '@shared/schemas/photos';
 import { applianceKeys } from '@/lib/resources/appliances';
 
@@ -13,10 +14,10 @@ const OFFLINE = 'No connection. The photos are kept on this phone; try again whe
 const TOO_LARGE = `A photo is too large: the limit is ${MAX_PHOTO_BYTES / 1024 / 1024} MB each.`;
 
 function failure(status: number, body: unknown): ApiError {
-  const err = (body as { error?: { code?: string; message?: string; details?: Record<string, string[]> } } | null)?.error;
+  const err = (body as Partial<ErrorBody> | null)?.error;
   // A 413 may come from a proxy with an HTML body, and multer's own says only "File too large": say it in our words.
   if (status === 413) return new ApiError(413, 'too_large', TOO_LARGE);
-  return new ApiError(status, err?.code ?? 'http_error', err?.message ?? `The photos were not saved (${status}).`, err?.details);
+  return new ApiError(status, err?.code ?? 'http_error', err?.message ?? `The photos were not saved (${status}).`, err?.details, undefined, err?.files);
 }
 
 /**

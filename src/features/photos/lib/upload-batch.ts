@@ -1,5 +1,5 @@
 import { MAX_PHOTO_BYTES, PHOTO_KIND_LABELS, type PhotoDto, type PhotoKind } from '@shared/schemas/photos';
-import type { FieldErrors } from '@/lib/api-client';
+import type { ApiError } from '@/lib/api-client';
 import type { UploadItem, UploadResult } from '../api/upload-photos';
 
 /** A file the server (or this phone, for size) would not take, with the reason in plain words. */
@@ -29,15 +29,16 @@ export function splitOversized(items: UploadItem[]): { fits: UploadItem[]; rejec
   };
 }
 
-/** The server names a bad file as "<name>: <reason>" under details.files; match it to the file sent under that name. */
-export function rejectionsFrom(details: FieldErrors | undefined, items: UploadItem[]): { rejected: Rejection[]; other: string[] } {
+/** The server names each refused file with its reason (`error.files`); match it to the file sent under that name. */
+export function rejectionsFrom(error: Pick<ApiError, 'files' | 'details'>, items: UploadItem[]): { rejected: Rejection[]; other: string[] } {
   const rejected: Rejection[] = [];
   const other: string[] = [];
-  for (const line of details?.files ?? []) {
-    const item = items.find((i) => line.startsWith(`${i.name}: `));
-    if (item) rejected.push({ name: item.name, message: line.slice(item.name.length + 2) });
-    else other.push(line);
+  for (const { file, reason } of error.files ?? []) {
+    if (items.some((i) => i.name === file)) rejected.push({ name: file, message: reason });
+    else other.push(`${file}: ${reason}`);
   }
+  // A message about the files as a whole ("Add at least one photo.") names no file.
+  if (!error.files?.length) other.push(...(error.details?.files ?? []));
   return { rejected, other };
 }
 

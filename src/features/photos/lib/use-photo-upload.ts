@@ -45,7 +45,7 @@ export function usePhotoUpload(applianceId: string, visitId?: string) {
       return true;
     } catch (err) {
       const e = err instanceof ApiError ? err : new ApiError(0, 'unknown', err instanceof Error ? err.message : 'The photos were not saved.');
-      const { rejected, other } = rejectionsFrom(e.details, batch.items);
+      const { rejected, other } = rejectionsFrom(e, batch.items);
       // Kind and caption are shown under their fields; anything else the server names goes into the message.
       const { files: _files, kind, caption, ...elsewhere } = e.details ?? {};
       const fieldErrors: FieldErrors = { ...(kind && { kind }), ...(caption && { caption }) };

@@ -5,6 +5,7 @@ import { ApiError } from '@/lib/api-client';
 import type { VisitDto } from '@shared/schemas/visits';
 import { useAmendVisit } from '../api/amend-visit';
 import { Panel, TextArea } from './inputs';
+import { FORM_ERROR_KEY } from '@shared/schemas/errors';
 
 /** A correction is added beside the original, never over it; it needs a reason. */
 export function AmendForm({ visit, current }: { visit: VisitDto; current: { findings: string; recommendations: string } }) {
@@ -32,7 +33,7 @@ export function AmendForm({ visit, current }: { visit: VisitDto; current: { find
       <TextArea label="Why it is being corrected" value={reason} onChange={setReason} maxLength={2000} rows={2} error={details?.reason} />
       <TextArea label="Findings" value={findings} onChange={setFindings} error={details?.findings} />
       <TextArea label="Recommendations" value={recommendations} onChange={setRecommendations} error={details?.recommendations} />
-      {details?._ && <p role="alert" className="text-sm font-semibold text-due">⚠ {details._.join(' ')}</p>}
+      {details?.[FORM_ERROR_KEY] && <p role="alert" className="text-sm font-semibold text-due">⚠ {details[FORM_ERROR_KEY].join(' ')}</p>}
       <div className="flex gap-2">
         <Button
           className="flex-1"

@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { Page } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { LABELS } from '@shared/schemas/enums';
+import { FORM_ERROR_KEY } from '@shared/schemas/errors';
 import type { VisitDto } from '@shared/schemas/visits';
 import { alertsOf, requirementDetails, type Requirement } from '@shared/visits/completion-requirements';
 import { computeReadingResults } from '@shared/visits/visit-results';
@@ -31,7 +32,7 @@ function serverOnly(error: unknown, live: Requirement[]): Requirement[] {
   const known = new Set(live.map((r) => r.field));
   return Object.entries(error.details)
     .filter(([field]) => !known.has(field))
-    .flatMap(([field, messages]) => messages.map((message) => ({ field, label: field === '_' ? 'Visit' : field, message })));
+    .flatMap(([field, messages]) => messages.map((message) => ({ field, label: field === FORM_ERROR_KEY ? 'Visit' : field, message })));
 }
 
 /** `onCompleting` names the visit being signed off from this screen (null if that failed), so the completed view can confirm it. */
