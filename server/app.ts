@@ -37,6 +37,7 @@ import { outboxRoutes } from './modules/reminders/outbox.routes';
 import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.routes';
 import { importRoutes } from './modules/imports/imports.routes';
 import { serviceRequestRoutes } from './modules/service-requests/service-requests.routes';
+import { visitReportRoutes } from './modules/visit-reports/visit-reports.routes';
 
 export type AppOptions = {
   /** Built client (vite build output) to serve; omitted in API-only tests. */
@@ -80,6 +81,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(catalogRoutes(ctx));
   api.use(checklistRoutes(ctx));
   api.use(visitsRoutes(ctx));
+  api.use(visitReportRoutes(ctx));
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
   api.use(shareLinkRoutes(ctx));

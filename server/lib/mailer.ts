@@ -4,7 +4,10 @@ import type { AppConfig } from '../config';
 /** Names the company a message was sent for, so the development outbox shows a company only its own mail. */
 export const COMPANY_MAIL_HEADER = 'X-Lifeplate-Company';
 
-export type Mail = { to: string; subject: string; text: string; html: string; headers?: Record<string, string> };
+/** A file sent with a message; `content` is base64, so the whole message stays plain JSON in the sealed queue row. */
+export type MailAttachment = { filename: string; contentType: string; content: string };
+
+export type Mail = { to: string; subject: string; text: string; html: string; headers?: Record<string, string>; attachments?: MailAttachment[] };
 
 /** Mail over real SMTP; in development and tests the host is the local fake, which offers no TLS. */
 export const isLoopbackHost = (host: string) => ['127.0.0.1', 'localhost', '::1'].includes(host);
@@ -25,7 +28,12 @@ export function createMailer(config: Pick<AppConfig, 'SMTP_HOST' | 'SMTP_PORT' |
   });
   return {
     async send(mail: Mail) {
-      const info = await transport.sendMail({ from: config.MAIL_FROM, ...mail });
+      const { attachments, ...rest } = mail;
+      const info = await transport.sendMail({
+        from: config.MAIL_FROM,
+        ...rest,
+        ...(attachments?.length ? { attachments: attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content, encoding: 'base64' })) } : {}),
+      });
       return { messageId: info.messageId as string, accepted: info.accepted.map(String) };
     },
     close: () => transport.close(),

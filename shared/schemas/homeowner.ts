@@ -39,6 +39,8 @@ export type CreatedShareLinkDto = ShareLinkDto & { url: string };
 export const SHARE_LINK_GONE_MESSAGE = 'This link has expired: ask your service company for a new one.';
 
 export type HomeownerVisitDto = {
+  /** Names the visit's report: /share/:token/visits/:id/report. */
+  id: string;
   visitedOn: string;
   what: string;
   outcome: 'left_operating' | 'shut_down_unsafe' | null;
@@ -72,3 +74,7 @@ export type HomeownerViewDto = {
 };
 
 export type HomeownerApplianceSummary = { id: string; title: string; address: string };
+
+/** A visit of the appliance behind a share link, or of one of the homeowner's own appliances. */
+export const shareVisitParams = shareTokenParam.extend({ visitId: z.uuid('Not a valid id.') });
+export const homeownerVisitParams = z.object({ id: z.uuid('Not a valid id.'), visitId: z.uuid('Not a valid id.') });

@@ -265,7 +265,7 @@ describe('POST /api/visits/:id/complete', () => {
     expect(reading.data).toMatchObject({ visitId: visit.id, coAirFreePpm: 75, flueTempF: 400, thermocoupleOpenCircuitMv: 12 });
     expect(typeof reading.data.efficiencyPct).toBe('number');
     const audits = await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, visit.id));
-    expect(audits.map((a) => a.action).sort()).toEqual(['complete', 'start']);
+    expect(audits.map((a) => a.action).sort()).toEqual(['complete', 'start', 'visit_report_mailed']);
   });
 
   it('a completed visit cannot be edited in place (409, stored row unchanged)', async () => {

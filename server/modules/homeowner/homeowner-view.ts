@@ -61,6 +61,7 @@ export async function buildHomeownerView(db: DbOrTx, companyId: string, applianc
       const { words, numbers } = readingsInWords(v.results);
       const checked = [...new Set(v.checklist.filter((i) => i.mark === 'done').map((i) => i.section))];
       return {
+        id: v.id,
         visitedOn: v.visitedOn,
         what: LABELS.visitType[v.type],
         outcome: v.outcome,

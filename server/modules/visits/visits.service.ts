@@ -16,6 +16,7 @@ import { visitsRepository, type VisitRow } from './visits.repository';
 import { lockDraft, type Member } from './visit-lock';
 import { findTemplateFor } from '../checklists/checklists.repository';
 import { requiredReadingsFor } from '../checklists/required-readings';
+import { queueVisitReportMail } from '../visit-reports/visit-reports.service';
 
 type StartFields = z.output<typeof visitStartInput>;
 
@@ -96,7 +97,7 @@ export function visitsService(ctx: AppContext) {
 
     /** Saves the final fields, signs off, and writes everything the visit changed, all in one transaction. */
     async complete(actor: Member, visitId: string, input: DraftFields): Promise<VisitDto> {
-      const completed = await ctx.db.transaction(async (tx) => {
+      const { row: completed, report } = await ctx.db.transaction(async (tx) => {
         const { visit, appliance, patch, results, changedFields } = await saveDraftIn(tx, actor, visitId, input);
         const merged = { ...visit, ...patch };
         assertCompletable(merged, results, appliance);
@@ -121,8 +122,10 @@ export function visitsService(ctx: AppContext) {
           entityId: visitId,
           changes: { fields: changedFields, outcome: row.outcome, revision: row.revision },
         });
-        return row;
+        // The household's copy of the visit report, queued with the sign-off so it is never lost or sent for a rolled-back visit.
+        return { row, report: await queueVisitReportMail(ctx, tx, actor, visitId) };
       });
+      if ('mailId' in report) await ctx.mail.deliver(report.mailId);
       return dto(actor.companyId, completed);
     },
 

@@ -45,6 +45,22 @@ async function visitOnNewAppliance(ctx: AppContext, w: World, components: Parame
   return { appliance, visit: await draftVisit(w, appliance.id) };
 }
 
+/** One completed visit on the world's shared boiler (made once per world): the visit reports read it. */
+const completedVisits = new WeakMap<World, Promise<string>>();
+function completedVisitOn(w: World): Promise<string> {
+  if (!completedVisits.has(w)) {
+    completedVisits.set(
+      w,
+      (async () => {
+        const visit = await draftVisit(w, w.applianceId, w.as.manager);
+        await ok('complete', w.as.manager.post(`/api/visits/${visit.id}/complete`).send(completeVisitBody(visit)));
+        return visit.id;
+      })(),
+    );
+  }
+  return completedVisits.get(w)!;
+}
+
 /**
  * The expectation of every route in routeTable, keyed `method path`. A route without one fails the matrix test.
  * Bodies are valid and harmless (or act on records made for the cell), so a permitted caller's answer is the
@@ -243,5 +259,27 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   'post /homeowner/appliances/:id/service-requests': { params: (c) => ({ id: c.target.applianceId }), body: () => serviceRequestBody, status: 201 },
   'get /service-requests': { status: 200 },
+  'get /visits/:id/report': {
+    freshInTarget: async (_ctx, w) => ({ visitId: await completedVisitOn(w) }),
+    params: (c) => ({ id: str(c.fresh.visitId) }),
+    status: 200,
+  },
+  'post /visits/:id/report/email': {
+    freshInTarget: async (_ctx, w) => ({ visitId: await completedVisitOn(w) }),
+    params: (c) => ({ id: str(c.fresh.visitId) }),
+    status: 200,
+  },
+  // The link opens its own appliance's visit reports only: another company's link never opens this visit's.
+  'get /share/:token/visits/:visitId/report': {
+    freshInTarget: async (_ctx, w) => ({ visitId: await completedVisitOn(w) }),
+    params: (c) => ({ token: c.own?.shareToken ?? randomShareToken(), visitId: str(c.fresh.visitId) }),
+    status: 200,
+    as: { signedOut: 404 },
+  },
+  'get /homeowner/appliances/:id/visits/:visitId/report': {
+    freshInTarget: async (_ctx, w) => ({ visitId: await completedVisitOn(w) }),
+    params: (c) => ({ id: c.target.applianceId, visitId: str(c.fresh.visitId) }),
+    status: 200,
+  },
   'patch /service-requests/:id': { params: (c) => ({ id: c.target.serviceRequestId }), body: () => ({ status: 'scheduled' }), status: 200 },
 };

@@ -1,0 +1,1 @@
+ALTER TYPE "public"."mail_kind" ADD VALUE 'visit_report';
