@@ -3,7 +3,7 @@ import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { HomeownerViewDto } from '@shared/schemas/homeowner';
-import type { RecordSource } from '../api/record-source';
+import { visitReportPath, type RecordSource } from '../api/record-source';
 import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
 import { ServiceRequestForm } from './service-request-form';
@@ -68,7 +68,7 @@ export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; sour
         {!view.visits.length && <p>No visits are recorded yet.</p>}
         <ol className="flex flex-col gap-4">
           {view.visits.map((v) => (
-            <li key={`${v.visitedOn}-${v.what}`} className="border-b border-plate-line pb-3">
+            <li key={v.id} className="border-b border-plate-line pb-3">
               <p className="font-semibold">
                 {date(v.visitedOn)} · {v.what}
               </p>
@@ -91,6 +91,9 @@ export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; sour
               ))}
               {v.findings && <p className="mt-1 text-sm">{v.findings}</p>}
               {v.recommendations && <p className="text-sm">Recommended: {v.recommendations}</p>}
+              <a className="min-h-tap inline-flex items-center text-sm font-semibold underline" href={visitReportPath(source, v.id)} download>
+                Download the visit report (PDF)
+              </a>
               {Object.keys(v.readings).length > 0 && (
                 <details className="mt-1 text-xs text-iron-muted">
                   <summary className="cursor-pointer">The numbers</summary>

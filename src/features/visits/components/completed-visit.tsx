@@ -51,6 +51,9 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
       <p className="flex flex-wrap items-center gap-2">
         <StatusBadge status="ok">Completed</StatusBadge>
         {visit.technicians.map((t) => t.name).join(', ')}
+        <a className="min-h-tap inline-flex items-center font-semibold underline" href={`/api/visits/${visit.id}/report`} download>
+          Visit report (PDF)
+        </a>
       </p>
       {visit.outcome === 'shut_down_unsafe' ? (
         <Notice kind="danger" title="Shut down as unsafe">
