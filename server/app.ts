@@ -38,6 +38,7 @@ import { homeownerPhotoRoutes } from './modules/homeowner/homeowner-photos.route
 import { importRoutes } from './modules/imports/imports.routes';
 import { serviceRequestRoutes } from './modules/service-requests/service-requests.routes';
 import { visitReportRoutes } from './modules/visit-reports/visit-reports.routes';
+import { lifeRecordExportRoutes } from './modules/life-record-export/life-record-export.routes';
 
 export type AppOptions = {
   /** Built client (vite build output) to serve; omitted in API-only tests. */
@@ -82,6 +83,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(checklistRoutes(ctx));
   api.use(visitsRoutes(ctx));
   api.use(visitReportRoutes(ctx));
+  api.use(lifeRecordExportRoutes(ctx));
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
   api.use(shareLinkRoutes(ctx));

@@ -259,6 +259,13 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   'post /homeowner/appliances/:id/service-requests': { params: (c) => ({ id: c.target.applianceId }), body: () => serviceRequestBody, status: 201 },
   'get /service-requests': { status: 200 },
+  'get /appliances/:id/life-record.json': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'get /appliances/:id/life-record.pdf': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'get /homeowner/appliances/:id/life-record.json': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'get /homeowner/appliances/:id/life-record.pdf': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  // As the share page itself: a live link exports its own appliance; another company's caller exports their own.
+  'get /share/:token/life-record.json': { params: (c) => ({ token: c.own?.shareToken ?? randomShareToken() }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
+  'get /share/:token/life-record.pdf': { params: (c) => ({ token: c.own?.shareToken ?? randomShareToken() }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
   'get /visits/:id/report': {
     freshInTarget: async (_ctx, w) => ({ visitId: await completedVisitOn(w) }),
     params: (c) => ({ id: str(c.fresh.visitId) }),

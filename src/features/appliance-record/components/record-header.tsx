@@ -34,6 +34,14 @@ export function RecordHeader({ record }: { record: ApplianceRecordDto }) {
           </div>
         )}
       </dl>
+      <p className="mt-3 flex flex-wrap gap-4 text-sm">
+        <a className="min-h-tap inline-flex items-center font-semibold underline" href={`/api/appliances/${a.id}/life-record.pdf`} download>
+          Export the life record (PDF)
+        </a>
+        <a className="min-h-tap inline-flex items-center font-semibold underline" href={`/api/appliances/${a.id}/life-record.json`} download>
+          Export as JSON
+        </a>
+      </p>
     </Section>
   );
 }

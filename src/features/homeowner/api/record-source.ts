@@ -9,3 +9,4 @@ const base = (source: RecordSource) =>
 export const photoPath = (source: RecordSource, photoId: string, variant: HomeownerPhotoVariant) => `/api${base(source)}/photos/${photoId}/${variant}`;
 export const serviceRequestPath = (source: RecordSource) => `${base(source)}/service-requests`;
 export const visitReportPath = (source: RecordSource, visitId: string) => `/api${base(source)}/visits/${encodeURIComponent(visitId)}/report`;
+export const lifeRecordPath = (source: RecordSource, format: 'pdf' | 'json') => `/api${base(source)}/life-record.${format}`;

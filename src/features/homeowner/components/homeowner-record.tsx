@@ -3,7 +3,7 @@ import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { HomeownerViewDto } from '@shared/schemas/homeowner';
-import { visitReportPath, type RecordSource } from '../api/record-source';
+import { lifeRecordPath, visitReportPath, type RecordSource } from '../api/record-source';
 import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
 import { ServiceRequestForm } from './service-request-form';
@@ -108,6 +108,17 @@ export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; sour
         </ol>
       </Card>
       <HomeownerPhotos source={source} photos={view.photos} />
+      <Card title="Keep a copy">
+        <p className="text-sm">The whole record, to keep or to hand to the next owner of the house.</p>
+        <p className="mt-1 flex flex-wrap gap-4">
+          <a className="min-h-tap inline-flex items-center font-semibold underline" href={lifeRecordPath(source, 'pdf')} download>
+            Download the whole record (PDF)
+          </a>
+          <a className="min-h-tap inline-flex items-center font-semibold underline" href={lifeRecordPath(source, 'json')} download>
+            As data (JSON)
+          </a>
+        </p>
+      </Card>
       <SafetyNotes kind={a.kind} fuel={a.fuel} />
       <p className="text-center text-sm text-iron-muted">
         Kept by {view.company.name} · {view.company.phone}
