@@ -156,6 +156,17 @@ describe('visit report downloads', () => {
     expect(shared.headers['content-disposition']).toBe('attachment; filename="visit-report-2026-11-18.pdf"');
   });
 
+  it('shows the visit as its amendments corrected it, and says it was corrected', async () => {
+    const { applianceId } = await boilerWithThermocouple(t);
+    const visit = await completedVisit(as.technician, applianceId);
+    const amended = await as.manager.post(`/api/visits/${visit.id}/amendments`).send({ reason: 'Findings were typed on the wrong visit.', findings: 'Replaced the pilot assembly gasket.' });
+    expect(amended.status).toBe(200);
+    const text = await pdfText((await binary(as.manager.get(`/api/visits/${visit.id}/report`))).body as Buffer);
+    expect(text).toContain('What was done: Replaced the pilot assembly gasket.');
+    expect(text).not.toContain('Cleaned the burners and tested the controls.');
+    expect(text).toContain('Corrected after the visit: Findings were typed on the wrong visit.');
+  });
+
   it('answers 401 signed out, 403 to a homeowner on the office route, 404 across tenants and appliances, 400 for a bad id', async () => {
     const { applianceId } = await boilerWithThermocouple(t);
     const visit = await completedVisit(as.technician, applianceId);

@@ -9,6 +9,7 @@ import { wholeYearsBetween } from '../appliances/appliance-age';
 import { homeownerRepository } from '../homeowner/homeowner.repository';
 import { typeLabelFor } from '../due/type-label';
 import { visitsRepository } from '../visits/visits.repository';
+import { visitAsCorrected } from './visit-as-corrected';
 
 export type VisitReport = {
   company: { name: string; phone: string };
@@ -19,6 +20,8 @@ export type VisitReport = {
   unsafe: { headline: string; reason: string; mustDo: string[] } | null;
   findings: string;
   recommendations: string;
+  /** Why the visit was corrected afterwards, oldest first; the report shows the corrected fields. */
+  corrections: string[];
   checklist: { section: string; label: string; result: string }[];
   readings: ReadingMeaning[];
   swaps: { part: string; fitted: string | null; removedAgeYears: number | null; reason: string | null }[];
@@ -51,8 +54,9 @@ const unsafeSteps = (company: { name: string; phone: string }) => [
  * fields (checklist notes included) can never slip through. Only completed visits have a report.
  */
 export async function loadVisitReport(db: DbOrTx, companyId: string, visitId: string): Promise<VisitReport> {
-  const visit = await visitsRepository.findVisit(db, companyId, visitId);
-  if (!visit || visit.status !== 'completed') throw notFound('Visit report');
+  const stored = await visitsRepository.findVisit(db, companyId, visitId);
+  if (!stored || stored.status !== 'completed') throw notFound('Visit report');
+  const visit = visitAsCorrected(stored, await visitsRepository.amendmentsOfVisit(db, companyId, visitId));
   const [record, company, swaps, names] = await Promise.all([
     loadApplianceRecord(db, companyId, visit.applianceId),
     homeownerRepository.company(db, companyId),
@@ -89,6 +93,7 @@ export async function loadVisitReport(db: DbOrTx, companyId: string, visitId: st
       : null,
     findings: visit.findings,
     recommendations: visit.recommendations,
+    corrections: visit.corrections,
     checklist: visit.checklist
       .filter((i) => i.mark)
       .map((i) => ({ section: i.section, label: i.label, result: RESULT_WORDS[i.mark!] })),

@@ -30,6 +30,7 @@ export async function renderVisitReportPdf(r: VisitReport): Promise<Uint8Array> 
   w.heading(`Outcome: ${r.visit.outcomeWords}`);
   if (r.findings.trim()) w.text(`What was done: ${r.findings}`);
   if (r.recommendations.trim()) w.text(`Recommended: ${r.recommendations}`);
+  for (const why of r.corrections) w.text(`Corrected after the visit: ${why}`, { size: 9 });
 
   if (r.readings.length) {
     w.heading('Readings and what they mean');
