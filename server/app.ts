@@ -27,6 +27,7 @@ import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
 import { shareLinkRoutes } from './modules/share-links/share-links.routes';
 import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
+import { serviceLifeRoutes } from './modules/service-life/service-life.routes';
 import { tagsRoutes } from './modules/tags/tags.routes';
 import { photosRoutes } from './modules/photos/photos.routes';
 import { invitationRoutes } from './modules/invitations/invitations.routes';
@@ -89,6 +90,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(shareLinkRoutes(ctx));
   api.use(homeownerRoutes(ctx));
   api.use(fleetRoutes(ctx));
+  api.use(serviceLifeRoutes(ctx));
   api.use(tagsRoutes(ctx));
   api.use(photosRoutes(ctx));
   api.use(invitationRoutes(ctx));

@@ -12,6 +12,7 @@
  * The server recomputes the results from shared/trade and stores its own result.
  */
 import { z } from 'zod';
+import { SWAP_CAUSES } from '../stats/swap-causes';
 import * as E from './enums';
 import { isoDate, optionalText, storableText } from './common';
 import { FLUE_TEMP_PLAUSIBLE_F, FLUE_TEMP_RANGE_MESSAGE, flueBelowAirMessage, isFlueBelowCombustionAir } from '../trade/plausible-readings';
@@ -129,6 +130,7 @@ export const visitCompleteInput = visitDraftInput;
 export const swapInput = z.object({
   componentId: z.uuid('Pick the part that was replaced.'),
   reason: optionalText(500),
+  cause: z.enum(SWAP_CAUSES, 'Say why the old part came out.').default('wear_or_failure'),
   newDescription: optionalText(200),
   newSpec: z.record(storableText(), z.union([storableText().max(60), z.number()])).optional(),
   swappedOn: isoDate.optional(),

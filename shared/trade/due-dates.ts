@@ -5,7 +5,8 @@ import { requireNumber, requireOneOf, TradeInputError } from './trade-input-erro
 
 export const REPLACEMENT_POLICIES = ['on_condition', 'fixed_age', 'annual'] as const;
 export type ReplacementPolicy = (typeof REPLACEMENT_POLICIES)[number];
-export const DUE_RULE_BASES = ['published', 'common_practice', 'manufacturer', 'company_policy'] as const;
+/** 'learned': the replacement age is the median service life estimated from the company's own part swaps. */
+export const DUE_RULE_BASES = ['published', 'common_practice', 'manufacturer', 'company_policy', 'learned'] as const;
 export type DueRuleBasis = (typeof DUE_RULE_BASES)[number];
 
 export type DueRule = {

@@ -176,7 +176,7 @@ beforeAll(async () => {
       checklist: [{ key: 'burners', mark: 'done', note: 'ok' }],
       readings: { combustion: { o2Pct: 6, coPpm: 40, flueTempF: 400, airTempF: 70 }, gaugeGlassLevel: 'half' },
     },
-    'post /visits/:id/swaps': { componentId: boiler.components[0].id, reason: 'worn', newSpec: { lengthIn: 24 } },
+    'post /visits/:id/swaps': { componentId: boiler.components[0].id, reason: 'worn', cause: 'wear_or_failure', newSpec: { lengthIn: 24 } },
     'post /visits/:id/complete': { revision: 0, findings: 'Left running', outcome: 'left_operating' },
     'post /visits/:id/amendments': { reason: 'Typo in the findings', findings: 'Cleaned the burners and the pilot' },
     'post /photos': { applianceId: boiler.id, kind: 'after', caption: 'After cleaning', homeownerVisible: 'true' },

@@ -3,6 +3,7 @@ import { applianceKind } from './records';
 import { companies } from './companies';
 import { id, updatedAt, updatedBy } from './columns';
 import { uuid } from 'drizzle-orm/pg-core';
+import type { DueRuleBasis } from '../../../shared/trade/due-dates';
 
 export type SpecFieldDef = { key: string; label: string; unit?: string; options?: string[]; kind: 'number' | 'text' | 'choice' };
 
@@ -37,7 +38,7 @@ export const dueRules = pgTable(
     inspectionIntervalMonths: integer('inspection_interval_months'),
     replacementAgeYears: integer('replacement_age_years'),
     replacementPolicy: text('replacement_policy').$type<'on_condition' | 'fixed_age' | 'annual'>().notNull(),
-    basis: text('basis').$type<'published' | 'common_practice' | 'manufacturer' | 'company_policy'>().notNull(),
+    basis: text('basis').$type<DueRuleBasis>().notNull(),
     source: text('source').notNull(),
     updatedAt: updatedAt(),
     updatedBy: updatedBy(),

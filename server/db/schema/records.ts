@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import {
   bigserial,
   boolean,
+  check,
   date,
   index,
   integer,
@@ -17,6 +18,7 @@ import {
   type AnyPgColumn,
 } from 'drizzle-orm/pg-core';
 import * as E from '../../../shared/schemas/enums';
+import type { SwapCause } from '../../../shared/stats/swap-causes';
 import { users } from './auth';
 import { companies } from './companies';
 import { createdAt, createdBy, id, updatedAt, updatedBy } from './columns';
@@ -180,6 +182,7 @@ export const components = pgTable(
   (t) => [
     index('components_appliance_idx').on(t.applianceId),
     index('components_company_due_idx').on(t.companyId, t.dueOn, t.id).where(sql`${t.removedOn} is null`),
+    index('components_company_type_idx').on(t.companyId, t.typeCode),
   ],
 );
 
@@ -293,10 +296,16 @@ export const partSwaps = pgTable(
       .references(() => components.id, { onDelete: 'cascade' }),
     swappedOn: date('swapped_on').notNull(),
     reason: text('reason'),
+    /** Why the old part came out, for service-life estimates (shared/stats/swap-causes.ts). */
+    cause: text('cause').$type<SwapCause>().notNull().default('wear_or_failure'),
     createdAt: createdAt(),
     createdBy: createdBy(),
   },
-  (t) => [index('part_swaps_visit_idx').on(t.visitId)],
+  (t) => [
+    index('part_swaps_visit_idx').on(t.visitId),
+    index('part_swaps_removed_component_idx').on(t.companyId, t.removedComponentId),
+    check('part_swaps_cause_ck', sql`${t.cause} in ('wear_or_failure', 'upgrade', 'other')`),
+  ],
 );
 
 /** Append-only: one row per thing that happened to an appliance, written in the same transaction as the record. */

@@ -77,6 +77,7 @@ export async function swapPart(tx: Tx, actor: Member, visitId: string, input: Sw
     newComponentId: fresh.id,
     swappedOn,
     reason: input.reason ?? null,
+    cause: input.cause,
     createdBy: actor.userId,
   });
   const label = typeLabelFor(old.typeCode);

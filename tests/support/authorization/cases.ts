@@ -151,6 +151,9 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   'get /due-rules': { status: 200 },
   'put /due-rules/:id': { params: (c) => ({ id: c.target.dueRule.id }), body: (c) => c.target.dueRule.body, status: 200 },
+  'get /service-life': { status: 200 },
+  // The matrix's companies have too few worn-out parts to adopt a learned life: a caller let through meets that 400.
+  'post /due-rules/:id/adopt-learned-life': { params: (c) => ({ id: c.target.dueRule.id }), status: 400 },
   'get /due': { status: 200 },
   'get /due/export.csv': { status: 200 },
   'get /due/stock': { status: 200 },

@@ -20,6 +20,7 @@ const BASIS: Record<DueRuleBasis, { label: string; status: Status }> = {
   common_practice: { label: 'Common practice', status: 'info' },
   manufacturer: { label: "Manufacturer's instructions govern", status: 'soon' },
   company_policy: { label: 'Company policy', status: 'info' },
+  learned: { label: 'Learned from our fleet', status: 'ok' },
 };
 const POLICY: Record<ReplacementPolicy, string> = {
   on_condition: 'Replace when found failing',
