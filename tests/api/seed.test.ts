@@ -14,6 +14,7 @@ import {
   visits,
 } from '../../server/db/schema/index';
 import { seedDemo } from '../../server/db/seed/seed-demo';
+import { serviceLifeService } from '../../server/modules/service-life/service-life.service';
 import { DEMO_COMPANY, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
 import { todayInTimeZone } from '../../shared/dates';
 import { addDays } from '../../shared/trade/iso-date';
@@ -191,6 +192,16 @@ describe('demo seed', () => {
     const removed = demoAppliances.filter((a) => a.status === 'removed');
     expect(removed).toHaveLength(1);
     expect(demoAppliances.some((a) => a.id === removed[0].replacedById)).toBe(true);
+  });
+
+  it('has enough worn-out parts of one type for a manager to adopt a learned service life', async () => {
+    const [demo] = await ctx.db.select().from(companies).where(eq(companies.name, DEMO_COMPANY.name));
+    const estimates = await serviceLifeService(ctx).estimates(demo.id);
+    const adoptable = estimates.filter((e) => e.canAdopt);
+    expect(adoptable.length).toBeGreaterThanOrEqual(1);
+    expect(adoptable[0].events).toBeGreaterThanOrEqual(30);
+    // Parts changed at every annual service are not counted as worn out.
+    expect(estimates.find((e) => e.componentType === 'oil_filter')?.events ?? 0).toBe(0);
   });
 
   it('every demo visit is one the app would let a technician complete: steps marked, outcome set, readings taken, warnings told', async () => {

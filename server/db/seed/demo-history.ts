@@ -153,7 +153,9 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClo
       old.replacedById = fresh.id;
       rows.components.push(fresh);
       const swapId = f.string.uuid();
-      rows.swaps.push({ ...base, id: swapId, visitId, removedComponentId: old.id, newComponentId: fresh.id, swappedOn: visitedOn, reason, createdBy: technicianId });
+      // A part changed at every annual service (filter, nozzle) comes out on schedule, not because it wore out.
+      const cause = (slotState.slot.swapEveryYears?.[1] ?? Infinity) <= 1 ? ('other' as const) : ('wear_or_failure' as const);
+      rows.swaps.push({ ...base, id: swapId, visitId, removedComponentId: old.id, newComponentId: fresh.id, swappedOn: visitedOn, reason, cause, createdBy: technicianId });
       rows.events.push({
         ...base,
         occurredAt: new Date(departedAt.getTime() - 60_000),

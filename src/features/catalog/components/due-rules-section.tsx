@@ -12,6 +12,9 @@ import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import type { FieldErrors } from '@/lib/api-client';
 import { useDueRules } from '../api/list-due-rules';
 import { useUpdateDueRule } from '../api/update-due-rule';
+import { useServiceLife } from '../api/list-service-life';
+import type { ServiceLifeDto } from '@shared/schemas/service-life';
+import { LearnedLife } from './learned-life';
 import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
 import { useFocusFirstError } from '@/lib/use-focus-first-error';
 
@@ -30,17 +33,20 @@ const POLICY: Record<ReplacementPolicy, string> = {
 
 export function DueRulesSection() {
   const rules = useDueRules();
+  const learned = useServiceLife();
+  const byType = new Map((learned.data ?? []).map((e) => [e.componentType, e]));
   return (
     <Card title={<span id="due-rules">Due rules</span>}>
       <p className="mb-3 text-sm text-iron-muted">
         How often each part is inspected and when it is replaced, and what that rule rests on. Saving a rule recomputes
-        every due date in the company. Where the manufacturer&rsquo;s instructions say otherwise, they govern.
+        every due date in the company. Where the manufacturer&rsquo;s instructions say otherwise, they govern. Beside a rule,
+        the service life learned from our own part swaps, with its 95 % interval, once any part of that type has worn out.
       </p>
       {rules.isPending && <Spinner />}
       {rules.isError && <Notice kind="danger" title="Could not load the due rules">{rules.error.message}</Notice>}
       <ul className="divide-y divide-plate-line rounded-plate border border-plate-line">
         {rules.data?.map((r) => (
-          <DueRuleRow key={r.id} rule={r} />
+          <DueRuleRow key={r.id} rule={r} learned={byType.get(r.componentType)} />
         ))}
       </ul>
     </Card>
@@ -57,7 +63,7 @@ const describeRule = (r: DueRuleDto) =>
     r.replacementPolicy === 'fixed_age' && r.replacementAgeYears ? `replace at ${r.replacementAgeYears} years` : POLICY[r.replacementPolicy].toLowerCase(),
   ].join(' · ');
 
-function DueRuleRow({ rule }: { rule: DueRuleDto }) {
+function DueRuleRow({ rule, learned }: { rule: DueRuleDto; learned?: ServiceLifeDto }) {
   const [editing, setEditing] = useState(false);
   return (
     <li className="px-3 py-2">
@@ -77,6 +83,7 @@ function DueRuleRow({ rule }: { rule: DueRuleDto }) {
           </Button>
         )}
       </div>
+      {learned && learned.events > 0 && <LearnedLife rule={rule} estimate={learned} />}
       {editing && <DueRuleForm rule={rule} onClose={() => setEditing(false)} />}
     </li>
   );
