@@ -1,9 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
+import { swappedPart } from '../support/swap-history';
 import { describe, expect, it, beforeAll } from 'vitest';
-import type { DbOrTx } from '../../server/db/client';
-import { auditLog, components, dueRules, partSwaps, visits } from '../../server/db/schema/index';
-import { insertAppliance, insertSite } from '../../server/db/factories/records';
-import type { SwapCause } from '../../shared/stats/swap-causes';
+import { auditLog, components, dueRules } from '../../server/db/schema/index';
 import type { ServiceLifeDto } from '../../shared/schemas/service-life';
 import { kaplanMeier, medianSurvival } from '../../shared/stats/kaplan-meier';
 import { testApp } from '../support/context';
@@ -16,20 +14,6 @@ runFileAt('2026-11-18T12:00:00-05:00');
 const fx = useTenantWithBoiler(app, ctx);
 let other: Tenant;
 
-/** One appliance whose part of `typeCode` was installed on `installedOn` and swapped on `swappedOn` for `cause`. */
-async function swapped(db: DbOrTx, t: Tenant, typeCode: 'thermocouple' | 'flame_sensor', installedOn: string, swappedOn: string | null, cause: SwapCause, boilerGoneOn?: string) {
-  const site = await insertSite(db, { companyId: t.company.id, customerId: t.customer.id });
-  const a = await insertAppliance(db, { companyId: t.company.id, siteId: site.id, installedOn, components: [{ typeCode, installedOn, spec: typeCode === 'thermocouple' ? { lengthIn: 24 } : {} }] });
-  const old = a.components[0];
-  if (!swappedOn) return;
-  const [visit] = await db.insert(visits).values({ companyId: t.company.id, applianceId: a.id, type: 'repair', status: 'completed', visitedOn: swappedOn }).returning();
-  // The whole boiler replaced later: the fresh part leaves with it, censored at its age then.
-  const gone = boilerGoneOn ? { removedOn: boilerGoneOn, removalReason: 'Removed with the appliance' } : {};
-  const [fresh] = await db.insert(components).values({ companyId: t.company.id, applianceId: a.id, typeCode, installedOn: swappedOn, spec: old.spec, specKey: old.specKey, ...gone }).returning();
-  await db.update(components).set({ removedOn: swappedOn, replacedById: fresh.id }).where(eq(components.id, old.id));
-  await db.insert(partSwaps).values({ companyId: t.company.id, visitId: visit.id, applianceId: a.id, removedComponentId: old.id, newComponentId: fresh.id, swappedOn, cause });
-}
-
 const thermocouple = async (as: typeof fx.as.manager) => {
   const res = await as.get('/api/service-life').query({ type: 'thermocouple' }).expect(200);
   return (res.body as ServiceLifeDto[])[0];
@@ -39,11 +23,11 @@ beforeAll(async () => {
   other = await createTenant(ctx.db);
   // 36 thermocouples worn out at ages 2…7 years (6 at each), their boilers replaced whole in 2018 (the fresh parts
   // censored at 6…1 years); 4 swapped for an upgrade at 1 year, the fresh parts still in service (10.7 years).
-  for (let i = 0; i < 36; i += 1) await swapped(ctx.db, fx.t, 'thermocouple', '2010-03-01', `${2012 + (i % 6)}-03-01`, 'wear_or_failure', '2018-03-01');
-  for (let i = 0; i < 4; i += 1) await swapped(ctx.db, fx.t, 'thermocouple', '2015-03-01', '2016-03-01', 'upgrade');
-  for (let i = 0; i < 3; i += 1) await swapped(ctx.db, fx.t, 'flame_sensor', '2012-03-01', '2019-03-01', 'wear_or_failure');
+  for (let i = 0; i < 36; i += 1) await swappedPart(ctx.db, fx.t, 'thermocouple', '2010-03-01', `${2012 + (i % 6)}-03-01`, 'wear_or_failure', '2018-03-01');
+  for (let i = 0; i < 4; i += 1) await swappedPart(ctx.db, fx.t, 'thermocouple', '2015-03-01', '2016-03-01', 'upgrade');
+  for (let i = 0; i < 3; i += 1) await swappedPart(ctx.db, fx.t, 'flame_sensor', '2012-03-01', '2019-03-01', 'wear_or_failure');
   // Another company's worn-out thermocouples never count here.
-  for (let i = 0; i < 5; i += 1) await swapped(ctx.db, other, 'thermocouple', '2010-03-01', '2011-03-01', 'wear_or_failure');
+  for (let i = 0; i < 5; i += 1) await swappedPart(ctx.db, other, 'thermocouple', '2010-03-01', '2011-03-01', 'wear_or_failure');
 }, 60_000);
 
 describe('GET /service-life', () => {
