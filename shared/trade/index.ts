@@ -17,3 +17,5 @@ export * from './thermocouple';
 export * from './service-life';
 export * from './component-types';
 export * from './due-dates';
+export * from './radiator-edr';
+export * from './boiler-sizing';
