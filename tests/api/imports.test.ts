@@ -93,7 +93,7 @@ describe('bringing a spreadsheet in', () => {
 
     const [boiler] = await ctx.db.select().from(appliances).where(and(eq(appliances.companyId, t.company.id), eq(appliances.importId, imported.id))).limit(1);
     const events = await ctx.db.select().from(timelineEvents).where(eq(timelineEvents.applianceId, boiler.id));
-    expect(events.find((e) => e.kind === 'import')?.summary).toMatch(/^Brought in from customers\.csv on 2026-11-18 \(row \d+\)\. Not in the file, so assumed until checked on a visit: construction, ignition, vent\.$/);
+    expect(events.find((e) => e.kind === 'import')?.summary).toMatch(/^Brought in from customers\.csv on Nov 18, 2026 \(row \d+\)\. Not in the file, so assumed until checked on a visit: construction, ignition, vent\.$/);
     expect(events.filter((e) => e.kind === 'visit').map((e) => e.summary)).toEqual(expect.arrayContaining([expect.stringMatching(/\(imported from customers\.csv\)$/)]));
     const history = await ctx.db.select().from(visits).where(eq(visits.applianceId, boiler.id));
     expect(history.every((v) => v.status === 'completed' && v.importId === imported.id)).toBe(true);

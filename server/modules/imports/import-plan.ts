@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { ImportCounts, ImportPreviewRow } from '../../../shared/schemas/imports';
 import { LABELS } from '../../../shared/schemas/enums';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import { IMPORT_FIELD_KEYS, REQUIRED_IMPORT_FIELDS, type ImportField, type ImportMapping } from '../../../shared/imports/import-fields';
 import { validateImportRow, type ImportRow, type ImportRowError } from '../../../shared/imports/validate-import-row';
 import { COMPONENT_TYPES, formatSpec, type ComponentType } from '../../../shared/trade/component-types';
@@ -172,7 +173,7 @@ export function previewRows(plan: ImportPlan, limit = 20): ImportPreviewRow[] {
     customer: `${row.customer.name} (${word(customer.insert, Object.keys(customer.fill).length > 0)})`,
     site: `${row.site.street}, ${row.site.town} (${word(site.insert)})`,
     appliance: `${LABELS.applianceKind[row.appliance.kind]}, ${LABELS.fuel[row.appliance.fuel]}${row.appliance.serial ? `, serial ${row.appliance.serial}` : ''} (${word(appliance.insert)})`,
-    parts: parts.map((p) => [COMPONENT_TYPES[p.typeCode].label, p.specKey || p.description, p.installedOn ? `installed ${p.installedOn}` : null].filter(Boolean).join(', ')),
-    visits: visits.map((v) => `${v.visitedOn}: ${LABELS.visitType[v.type]}${v.outcome ? `, ${LABELS.visitOutcome[v.outcome].toLowerCase()}` : ''}`),
+    parts: parts.map((p) => [COMPONENT_TYPES[p.typeCode].label, p.specKey || p.description, p.installedOn ? `installed ${formatCalendarDate(p.installedOn)}` : null].filter(Boolean).join(', ')),
+    visits: visits.map((v) => `${formatCalendarDate(v.visitedOn)}: ${LABELS.visitType[v.type]}${v.outcome ? `, ${LABELS.visitOutcome[v.outcome].toLowerCase()}` : ''}`),
   }));
 }

@@ -2,6 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { appliances, auditLog, components, customers, sites, timelineEvents, visits } from '../../db/schema/index';
 import { LABELS } from '../../../shared/schemas/enums';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import { COMPONENT_TYPES } from '../../../shared/trade/component-types';
 import type { RowPlan } from './import-plan';
 
@@ -75,7 +76,7 @@ export async function writeImportBatch(tx: Tx, source: ImportSource, batch: RowP
         applianceId: r.appliance.id,
         occurredAt: r.row.appliance.installedOn ? atNoon(r.row.appliance.installedOn) : new Date(),
         kind: 'import',
-        summary: `Brought in from ${fileName} on ${importedOn} (row ${r.row.row}).${assumed.length ? ` Not in the file, so assumed until checked on a visit: ${assumed.join(', ')}.` : ''}`,
+        summary: `Brought in from ${fileName} on ${formatCalendarDate(importedOn)} (row ${r.row.row}).${assumed.length ? ` Not in the file, so assumed until checked on a visit: ${assumed.join(', ')}.` : ''}`,
         data: { ...provenance, row: r.row.row, assumed },
         homeownerVisible: false,
         actorId,
