@@ -12,6 +12,9 @@ const PUBLIC = new Set([
   'get /share/:token',
   'get /share/:token/photos/:photoId/:variant',
   'post /share/:token/service-requests',
+  'get /share/:token/visits/:visitId/report',
+  'get /share/:token/life-record.json',
+  'get /share/:token/life-record.pdf',
   'get /unsubscribe/:token',
   'post /unsubscribe/:token',
 ]);
