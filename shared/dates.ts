@@ -40,3 +40,15 @@ export function instantInTimeZone(timeZone: string, date: string, hour: number, 
   const candidates = [wall - offsetBefore, wall - offsetAfter].filter((t) => wallClockMs(timeZone, t) === wall).sort((a, b) => a - b);
   return new Date(candidates[0] ?? wall - offsetBefore);
 }
+
+/** The instant a company's wall clock reads `local` (yyyy-mm-ddThh:mm), by the rules of instantInTimeZone. */
+export function instantOfLocalDateTime(timeZone: string, local: string): Date {
+  const [date, time] = local.split('T');
+  const [hour, minute] = time.split(':').map(Number);
+  return instantInTimeZone(timeZone, date, hour, minute);
+}
+
+/** What a wall clock in `timeZone` reads at `instant`, to the minute: yyyy-mm-ddThh:mm. */
+export function localDateTimeOf(timeZone: string, instant: Date): string {
+  return new Date(wallClockMs(timeZone, instant.getTime())).toISOString().slice(0, 16);
+}

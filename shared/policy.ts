@@ -15,6 +15,10 @@ export const PERMISSIONS = {
   'company:settings': ['owner'],
   // Bringing a whole customer list in at once is an office task.
   'records:import': ['owner', 'manager'],
+  // Every round is visible to the whole team; technicians may book follow-ups for themselves only (the service checks).
+  'bookings:read': ['owner', 'manager', 'technician'],
+  'bookings:book': ['owner', 'manager', 'technician'],
+  'bookings:manage': ['owner', 'manager'],
   // The development outbox holds other people's sign-in and invitation links: whoever opens one is signed in as them.
   'dev:outbox': ['owner'],
 } as const satisfies Record<string, readonly MemberRole[]>;

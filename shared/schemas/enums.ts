@@ -21,6 +21,7 @@ export const TIMELINE_KINDS = [
   'reminder',
   'status',
   'import',
+  'booking',
 ] as const;
 
 export type ApplianceKind = (typeof APPLIANCE_KINDS)[number];

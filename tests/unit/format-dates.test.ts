@@ -34,13 +34,16 @@ describe('formatInstant', () => {
 });
 
 describe('relative days', () => {
-  const today = todayInTimeZone('America/New_York');
+  // Read inside each test: the describe body runs while files are collected, before beforeAll fixes the clock.
+  const companyToday = () => todayInTimeZone('America/New_York');
   it('counts whole calendar days from the company’s today', () => {
+    const today = companyToday();
     expect(today).toBe('2026-12-02');
     expect(daysFromToday('2027-01-06', today)).toBe(35);
     expect(daysFromToday('2026-11-30', today)).toBe(-2);
   });
   it('speaks in words where they help', () => {
+    const today = companyToday();
     expect(relativeDays('2026-12-02', today)).toBe('today');
     expect(relativeDays('2026-12-03', today)).toBe('tomorrow');
     expect(relativeDays('2026-11-29', today)).toBe('3 days ago');

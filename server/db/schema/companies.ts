@@ -1,7 +1,8 @@
-import { pgEnum, pgTable, smallint, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { jsonb, pgEnum, pgTable, smallint, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { createdAt, id, updatedAt } from './columns';
 import { MEMBER_ROLES } from '../../../shared/schemas/roles';
+import type { BookingMinutesSetting } from '../../../shared/schemas/bookings';
 
 export const memberRole = pgEnum('member_role', MEMBER_ROLES);
 
@@ -12,6 +13,8 @@ export const companies = pgTable('companies', {
   timeZone: text('time_zone').notNull().default('America/New_York'),
   /** How far below the nameplate input a clocked gas input may be before it is flagged; null: not judged. */
   underFiringTolerancePct: smallint('under_firing_tolerance_pct'),
+  /** A new booking's window by appliance kind, in minutes (shared/schemas/bookings.ts DEFAULT_BOOKING_MINUTES when unset). */
+  bookingMinutes: jsonb('booking_minutes').$type<Partial<BookingMinutesSetting>>().notNull().default({}),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
 });

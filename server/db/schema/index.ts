@@ -12,3 +12,4 @@ export * from './invitations';
 export * from './outgoing-mail';
 export * from './sign-in-throttle';
 export * from './imports';
+export * from './bookings';

@@ -252,13 +252,19 @@ export const visits = pgTable(
     completedAt: timestamp('completed_at', { withTimezone: true }),
     /** Set on history brought in from a spreadsheet (import_files.id): recorded elsewhere, not signed off here. */
     importId: uuid('import_id'),
+    /** The booking this visit was started from (bookings.id; the foreign key is in drizzle/0016_bookings_no_clash.sql). */
+    bookingId: uuid('booking_id'),
     revision: integer('revision').notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),
     updatedBy: updatedBy(),
   },
-  (t) => [index('visits_appliance_idx').on(t.applianceId, t.visitedOn), index('visits_company_idx').on(t.companyId, t.status)],
+  (t) => [
+    index('visits_appliance_idx').on(t.applianceId, t.visitedOn),
+    index('visits_company_idx').on(t.companyId, t.status),
+    index('visits_booking_idx').on(t.bookingId),
+  ],
 );
 
 export const visitAmendments = pgTable(

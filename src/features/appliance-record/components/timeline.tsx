@@ -19,6 +19,8 @@ const KINDS: { kind: TimelineKind; label: string; icon: string }[] = [
   { kind: 'photo', label: 'Photos', icon: '▣' },
   { kind: 'makeup_water', label: 'Makeup water', icon: '≈' },
   { kind: 'reminder', label: 'Reminders', icon: '◷' },
+  { kind: 'booking', label: 'Bookings', icon: '▦' },
+  { kind: 'import', label: 'Imports', icon: '⇣' },
 ];
 const ICON = Object.fromEntries(KINDS.map((k) => [k.kind, k.icon])) as Record<TimelineKind, string>;
 const WORD = Object.fromEntries(KINDS.map((k) => [k.kind, k.label])) as Record<TimelineKind, string>;
