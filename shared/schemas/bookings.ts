@@ -61,10 +61,13 @@ export const DEFAULT_BOOKING_MINUTES: Record<ApplianceKind, number> = {
   furnace: 60,
 };
 
+const LOCAL_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/;
 /** A wall-clock time in the company's zone, to the minute: 2026-12-08T09:00. */
 export const localDateTime = storableText('Give a date and time like 2026-12-08T09:00.')
-  .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, 'Give a date and time like 2026-12-08T09:00.')
+  .regex(LOCAL_DATE_TIME, 'Give a date and time like 2026-12-08T09:00.')
   .refine((v) => {
+    // Refinements run even after the pattern fails; only a well-formed reading is checked further.
+    if (!LOCAL_DATE_TIME.test(v)) return true;
     const [date, time] = v.split('T');
     const [h, m] = time.split(':').map(Number);
     return z.iso.date().safeParse(date).success && h < 24 && m < 60;
@@ -80,7 +83,7 @@ const windowFields = {
 
 /** End after start and within a day: checked here so every field is named at once; the past is checked on the server (company's clock). */
 function checkWindow(v: { start?: string; end?: string }, ctx: z.RefinementCtx) {
-  if (!v.start || !v.end) return;
+  if (typeof v.start !== 'string' || typeof v.end !== 'string' || !LOCAL_DATE_TIME.test(v.start) || !LOCAL_DATE_TIME.test(v.end)) return;
   const minutes = localMinutesBetween(v.start, v.end);
   if (minutes <= 0) ctx.addIssue({ code: 'custom', path: ['end'], message: 'The end must be after the start.' });
   else if (minutes < MIN_BOOKING_MINUTES) ctx.addIssue({ code: 'custom', path: ['end'], message: `A booking is at least ${MIN_BOOKING_MINUTES} minutes.` });
@@ -90,7 +93,8 @@ function checkWindow(v: { start?: string; end?: string }, ctx: z.RefinementCtx) 
 /** Minutes between two wall-clock readings, as the clock on the wall shows them (a change of clocks is the server's business). */
 export function localMinutesBetween(start: string, end: string): number {
   const toMs = (v: string) => Date.parse(`${v}:00Z`);
-  return Math.round((toMs(end) - toMs(start)) / 60_000);
+  const minutes = Math.round((toMs(end) - toMs(start)) / 60_000);
+  return Number.isFinite(minutes) ? minutes : 0;
 }
 
 export const bookingInput = z

@@ -98,6 +98,8 @@ export const visitStartInput = z.object({
   type: z.enum(E.VISIT_TYPES, 'Choose the visit type.'),
   visitedOn: isoDate.optional(),
   arrivedAt: z.iso.datetime({ offset: true }).optional(),
+  /** The booking this visit is made for (the round's "Start visit"); completing every booked appliance marks it done. */
+  bookingId: z.uuid('Not a valid booking id.').optional(),
 });
 
 export const outcomeInput = z.object({

@@ -18,6 +18,7 @@ import { createLogger } from '../../server/logger';
 import { routeTable, type RouteEntry } from '../../server/lib/route';
 import { MULTIPART_BODY } from '../../server/middleware/body-type';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
+import { insertBooking } from '../../server/db/factories/bookings';
 import { testConfig } from '../support/context';
 import { createOwnDatabase } from '../support/own-database';
 import { installWriteCounter } from '../support/write-counter';
@@ -76,6 +77,16 @@ beforeAll(async () => {
   const [freeTag, boilerTag] = tags.body.codes as string[];
   await ok(as.owner.post('/api/tags/assign').send({ code: boilerTag, applianceId: spare.id }), 'tag an appliance');
   const jpeg = await sharp({ create: { width: 40, height: 30, channels: 3, background: { r: 80, g: 80, b: 80 } } }).jpeg().toBuffer();
+  // A month ahead of the real clock, on the company's wall clock (New York): bookings refuse the past.
+  const ahead = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
+  const booking = await insertBooking(ctx.db, {
+    companyId: t.company.id,
+    siteId: site.id,
+    technicianId: t.technician.user.id,
+    applianceIds: [boiler.id],
+    start: `${ahead}T08:00`,
+    end: `${ahead}T09:00`,
+  });
   const photo = await ok(
     as.owner.post('/api/photos').field('applianceId', boiler.id).field('kind', 'nameplate').attach('files', jpeg, { filename: 'p.jpg', contentType: 'image/jpeg' }),
     'upload a photo',
@@ -129,6 +140,10 @@ beforeAll(async () => {
     'post /customers/:id/homeowner-invitation': `/customers/${t.customer.id}/homeowner-invitation`,
     // Nobody has invited the owner: a body that passes validation meets 404, which is as good a place to end.
     'post /invitations/:id/accept': `/invitations/${crypto.randomUUID()}/accept`,
+    'post /bookings': '/bookings',
+    'patch /bookings/:id': `/bookings/${booking.id}`,
+    'post /bookings/:id/cancel': `/bookings/${booking.id}/cancel`,
+    'post /bookings/:id/no-access': `/bookings/${booking.id}/no-access`,
   };
   // One valid body per route: the mutations below break it one piece at a time.
   samples = {
@@ -186,6 +201,10 @@ beforeAll(async () => {
     'post /team/invitations': { email: 'new.hand@example.test', role: 'technician' },
     'post /customers/:id/homeowner-invitation': { email: 'home.owner@example.test' },
     'post /invitations/:id/accept': { name: 'Rowan Tarn' },
+    'post /bookings': { applianceIds: [spare.id], technicianId: t.technician.user.id, start: `${ahead}T10:00`, end: `${ahead}T11:00`, source: 'phone' },
+    'patch /bookings/:id': { start: `${ahead}T08:00`, end: `${ahead}T09:30`, note: 'Ring twice' },
+    'post /bookings/:id/cancel': { reason: 'Customer away' },
+    'post /bookings/:id/no-access': { reason: 'Nobody home' },
   };
 }, 120_000);
 

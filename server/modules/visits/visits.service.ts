@@ -1,3 +1,4 @@
+import { assertBookingCovers, markBookingDoneIfVisited } from '../bookings/booking-visits';
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
@@ -50,6 +51,7 @@ export function visitsService(ctx: AppContext) {
         const existing = await visitsRepository.findOpenDraft(tx, actor.companyId, appliance.id, actor.userId);
         if (existing) return existing;
 
+        if (input.bookingId) await assertBookingCovers(tx, actor.companyId, input.bookingId, appliance.id);
         const today = await companyToday(tx, actor.companyId);
         if (input.visitedOn && input.visitedOn > today) throw validationFailed({ visitedOn: ['A visit cannot be dated in the future.'] });
         const template = await findTemplateFor(tx, actor.companyId, appliance.kind, appliance.fuel);
@@ -62,6 +64,7 @@ export function visitsService(ctx: AppContext) {
           arrivedAt: input.arrivedAt ? new Date(input.arrivedAt) : new Date(),
           checklist: (template?.items ?? []).map((item) => ({ ...item, mark: null, note: '' })),
           requiredReadings: requiredReadingsFor(template, input.type),
+          bookingId: input.bookingId ?? null,
           createdBy: actor.userId,
           updatedBy: actor.userId,
         });
@@ -113,6 +116,7 @@ export function visitsService(ctx: AppContext) {
         });
         await applyFindingsToComponents(tx, actor.companyId, actor.userId, row, results);
         await recomputeDueForAppliance(tx, actor.companyId, row.applianceId);
+        if (row.bookingId) await markBookingDoneIfVisited(tx, actor.companyId, row.bookingId, actor.userId);
         await appendCompletionEvents(tx, actor.companyId, actor.userId, row, results);
         await recordAudit(tx, {
           companyId: actor.companyId,

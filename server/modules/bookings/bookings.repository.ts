@@ -1,0 +1,180 @@
+import { and, asc, eq, gt, inArray, isNull, lt, sql } from 'drizzle-orm';
+import type { DbOrTx } from '../../db/client';
+import { appliances, bookingAppliances, bookings, companies, components, customers, memberships, serviceRequests, sites, users, visits } from '../../db/schema/index';
+
+export type BookingRow = typeof bookings.$inferSelect;
+
+export const bookingsRepository = {
+  async company(db: DbOrTx, companyId: string) {
+    const [row] = await db.select({ timeZone: companies.timeZone, bookingMinutes: companies.bookingMinutes }).from(companies).where(eq(companies.id, companyId));
+    return row ?? null;
+  },
+
+  async activeTechnician(db: DbOrTx, companyId: string, userId: string) {
+    const [row] = await db
+      .select({ id: users.id, name: users.name, role: memberships.role })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(and(eq(memberships.companyId, companyId), eq(memberships.userId, userId), isNull(memberships.deactivatedAt)));
+    return row ?? null;
+  },
+
+  technicians(db: DbOrTx, companyId: string) {
+    return db
+      .select({ id: users.id, name: users.name })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(and(eq(memberships.companyId, companyId), eq(memberships.role, 'technician'), isNull(memberships.deactivatedAt)))
+      .orderBy(asc(users.name));
+  },
+
+  appliancesOf(db: DbOrTx, companyId: string, ids: string[]) {
+    return db
+      .select({ id: appliances.id, siteId: appliances.siteId, kind: appliances.kind })
+      .from(appliances)
+      .where(and(eq(appliances.companyId, companyId), inArray(appliances.id, ids)));
+  },
+
+  async insert(db: DbOrTx, row: typeof bookings.$inferInsert, applianceIds: string[]) {
+    const [booking] = await db.insert(bookings).values(row).returning();
+    await db.insert(bookingAppliances).values(applianceIds.map((applianceId) => ({ bookingId: booking.id, applianceId, companyId: booking.companyId })));
+    return booking;
+  },
+
+  async find(db: DbOrTx, companyId: string, id: string, opts: { lock?: boolean } = {}) {
+    const q = db.select().from(bookings).where(and(eq(bookings.companyId, companyId), eq(bookings.id, id)));
+    const [row] = opts.lock ? await q.for('update') : await q;
+    return row ?? null;
+  },
+
+  async update(db: DbOrTx, companyId: string, id: string, patch: Partial<typeof bookings.$inferInsert>) {
+    const [row] = await db
+      .update(bookings)
+      .set({ ...patch, revision: sql`gen_random_uuid()::text` })
+      .where(and(eq(bookings.companyId, companyId), eq(bookings.id, id)))
+      .returning();
+    return row;
+  },
+
+  applianceIdsOf(db: DbOrTx, bookingId: string) {
+    return db.select({ applianceId: bookingAppliances.applianceId }).from(bookingAppliances).where(eq(bookingAppliances.bookingId, bookingId));
+  },
+
+  /** Bookings overlapping [from, to), live or not, in start order. */
+  inWindow(db: DbOrTx, companyId: string, from: Date, to: Date, technicianId?: string) {
+    return db
+      .select()
+      .from(bookings)
+      .where(
+        and(
+          eq(bookings.companyId, companyId),
+          lt(bookings.startsAt, to),
+          gt(bookings.endsAt, from),
+          technicianId ? eq(bookings.technicianId, technicianId) : undefined,
+        ),
+      )
+      .orderBy(asc(bookings.startsAt), asc(bookings.id));
+  },
+
+  /** A live booking of this technician overlapping the window, other than `exceptId`: named in the 409. */
+  async clash(db: DbOrTx, technicianId: string, startsAt: Date, endsAt: Date, exceptId?: string) {
+    const [row] = await db
+      .select({ id: bookings.id, startsAt: bookings.startsAt, endsAt: bookings.endsAt, street: sites.street, town: sites.town })
+      .from(bookings)
+      .innerJoin(sites, eq(sites.id, bookings.siteId))
+      .where(
+        and(
+          eq(bookings.technicianId, technicianId),
+          inArray(bookings.status, ['booked', 'confirmed', 'done']),
+          lt(bookings.startsAt, endsAt),
+          gt(bookings.endsAt, startsAt),
+          exceptId ? sql`${bookings.id} <> ${exceptId}` : undefined,
+        ),
+      )
+      .limit(1);
+    return row ?? null;
+  },
+
+  /** Everything a booking card shows, for many bookings at once. */
+  async details(db: DbOrTx, companyId: string, bookingIds: string[], dueBy: string) {
+    if (!bookingIds.length) return { heads: [], lines: [], parts: [], visitLinks: [] };
+    const heads = await db
+      .select({
+        id: bookings.id,
+        siteId: sites.id,
+        street: sites.street,
+        town: sites.town,
+        postalCode: sites.postalCode,
+        accessNotes: sites.accessNotes,
+        customerId: customers.id,
+        customerName: customers.name,
+        customerPhone: customers.phone,
+        technicianName: sql<string>`(select ${users.name} from ${users} where ${users.id} = ${bookings.technicianId})`,
+        bookedByName: sql<string | null>`(select ${users.name} from ${users} where ${users.id} = ${bookings.createdBy})`,
+      })
+      .from(bookings)
+      .innerJoin(sites, eq(sites.id, bookings.siteId))
+      .innerJoin(customers, eq(customers.id, sites.customerId))
+      .where(and(eq(bookings.companyId, companyId), inArray(bookings.id, bookingIds)));
+    const lines = await db
+      .select({
+        bookingId: bookingAppliances.bookingId,
+        applianceId: appliances.id,
+        kind: appliances.kind,
+        fuel: appliances.fuel,
+        lastOutcome: sql<string | null>`(select outcome from visits v where v.appliance_id = ${appliances.id} and v.status = 'completed' order by v.visited_on desc, v.completed_at desc limit 1)`,
+        lastVisitOn: sql<string | null>`(select max(visited_on)::text from visits v where v.appliance_id = ${appliances.id} and v.status = 'completed')`,
+      })
+      .from(bookingAppliances)
+      .innerJoin(appliances, eq(appliances.id, bookingAppliances.applianceId))
+      .where(and(eq(bookingAppliances.companyId, companyId), inArray(bookingAppliances.bookingId, bookingIds)));
+    const applianceIds = [...new Set(lines.map((l) => l.applianceId))];
+    const parts = applianceIds.length
+      ? await db
+          .select({
+            applianceId: components.applianceId,
+            typeCode: components.typeCode,
+            specKey: components.specKey,
+            dueOn: components.dueOn,
+            dueKind: components.dueKind,
+            conditionFailed: components.conditionFailed,
+          })
+          .from(components)
+          .where(
+            and(
+              eq(components.companyId, companyId),
+              inArray(components.applianceId, applianceIds),
+              isNull(components.removedOn),
+              sql`(${components.conditionFailed} or ${components.dueOn} <= ${dueBy})`,
+            ),
+          )
+          .orderBy(asc(components.dueOn))
+      : [];
+    const visitLinks = await db
+      .select({ bookingId: visits.bookingId, id: visits.id })
+      .from(visits)
+      .where(and(eq(visits.companyId, companyId), inArray(visits.bookingId, bookingIds)));
+    return { heads, lines, parts, visitLinks };
+  },
+
+  /** A service request answered by a booking is scheduled; false when it is not this company's. */
+  async claimServiceRequest(db: DbOrTx, companyId: string, id: string, actorId: string) {
+    const rows = await db
+      .update(serviceRequests)
+      .set({ status: 'scheduled', handledBy: actorId, handledAt: new Date() })
+      .where(and(eq(serviceRequests.companyId, companyId), eq(serviceRequests.id, id)))
+      .returning({ id: serviceRequests.id });
+    return rows.length > 0;
+  },
+
+  /** Marks a booking done when a visit started from it is completed (same transaction as the completion). */
+  async markDone(db: DbOrTx, companyId: string, bookingId: string, actorId: string) {
+    const [row] = await db
+      .update(bookings)
+      .set({ status: 'done', updatedBy: actorId, revision: sql`gen_random_uuid()::text` })
+      .where(and(eq(bookings.companyId, companyId), eq(bookings.id, bookingId), inArray(bookings.status, ['booked', 'confirmed'])))
+      .returning();
+    return row ?? null;
+  },
+
+};
