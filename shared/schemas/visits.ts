@@ -16,18 +16,31 @@ import { SWAP_CAUSES } from '../stats/swap-causes';
 import * as E from './enums';
 import { isoDate, optionalText, storableText } from './common';
 import { FLUE_TEMP_PLAUSIBLE_F, FLUE_TEMP_RANGE_MESSAGE, flueBelowAirMessage, isFlueBelowCombustionAir } from '../trade/plausible-readings';
+import { describeRange, READING_RANGES, type ReadingName } from '../trade/reading-ranges';
 
 const n = (label: string, min: number, max: number) =>
   z.number(`${label} must be a number.`).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`);
 
+/** A reading the trade computations take: the same range as shared/trade/reading-ranges.ts, named in the message. */
+const reading = (label: string, name: ReadingName) => {
+  const range: { min?: number; max?: number; minExclusive?: number; maxExclusive?: number } = READING_RANGES[name];
+  const message = `${label} must be ${describeRange(READING_RANGES[name])}.`;
+  let schema = z.number(`${label} must be a number.`);
+  if (range.min !== undefined) schema = schema.min(range.min, message);
+  if (range.max !== undefined) schema = schema.max(range.max, message);
+  if (range.minExclusive !== undefined) schema = schema.gt(range.minExclusive, message);
+  if (range.maxExclusive !== undefined) schema = schema.lt(range.maxExclusive, message);
+  return schema;
+};
+
 const combustionFields = z.object({
   o2Pct: n('O2', 0, 20.8),
-  coPpm: n('CO', 0, 100_000),
+  coPpm: reading('CO', 'coPpm'),
   flueTempF: z.number('Flue temperature must be a number.').min(FLUE_TEMP_PLAUSIBLE_F.min, FLUE_TEMP_RANGE_MESSAGE).max(FLUE_TEMP_PLAUSIBLE_F.max, FLUE_TEMP_RANGE_MESSAGE),
-  airTempF: n('Combustion-air temperature', -40, 200),
-  draftInWc: n('Draft', -2, 2).nullish(),
-  ambientCoPpm: n('Ambient CO', 0, 10_000).nullish(),
-  spillageSeconds: n('Spillage time', 0, 3600).nullish(),
+  airTempF: reading('Combustion-air temperature', 'airTempF'),
+  draftInWc: reading('Draft', 'draftInWc').nullish(),
+  ambientCoPpm: reading('Ambient CO', 'ambientCoPpm').nullish(),
+  spillageSeconds: reading('Spillage time', 'spillageSeconds').nullish(),
   steadyFiringMinutes: n('Minutes of steady firing', 0, 240).nullish(),
 });
 
@@ -47,12 +60,14 @@ export const readingsInput = z
     combustion: combustionReadings.nullish(),
     gasInput: z
       .object({
-        dialCubicFeet: n('Meter dial', 0.01, 100),
-        secondsPerRevolution: n('Seconds per revolution', 0.1, 36_000),
-        heatingValueBtuPerCubicFoot: n('Heating value', 100, 5000),
+        dialCubicFeet: reading('Meter dial', 'dialCubicFeet'),
+        secondsPerRevolution: reading('Seconds per revolution', 'secondsPerRevolution'),
+        heatingValueBtuPerCubicFoot: reading('Heating value', 'heatingValueBtuPerCubicFoot'),
       })
       .nullish(),
-    thermocouple: z.object({ openCircuitMv: n('Open-circuit mV', 0, 100).nullish(), closedCircuitMv: n('Closed-circuit mV', 0, 100).nullish() }).nullish(),
+    thermocouple: z
+      .object({ openCircuitMv: reading('Open-circuit mV', 'openCircuitMv').nullish(), closedCircuitMv: reading('Closed-circuit mV', 'closedCircuitMv').nullish() })
+      .nullish(),
     gaugeGlassLevel: storableText().trim().max(20).nullish(),
     lowWaterCutoff: z
       .object({

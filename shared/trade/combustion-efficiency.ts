@@ -7,6 +7,7 @@ import {
   type CombustionFuel,
 } from './fuels';
 import { sensibleEnthalpyKjPerMol, WATER_LATENT_HEAT_25C_KJ_PER_MOL } from './gas-enthalpy';
+import { requireReading } from './reading-ranges';
 import { requireNumber } from './trade-input-error';
 import { fahrenheitDeltaToKelvin, fahrenheitToKelvin } from './units';
 
@@ -23,7 +24,7 @@ const REFERENCE_K = 298.15; // heating values and the latent heat are stated at 
  */
 export function excessAirPctFromO2(fuel: CombustionFuel, o2Pct: number): number {
   const model = FUEL_MODELS[requireFuel('fuel', fuel)];
-  const x = requireNumber('o2Pct', o2Pct, { min: 0, maxExclusive: 20.9 }) / 100;
+  const x = requireReading('o2Pct', o2Pct) / 100;
   const s = stoichiometricO2Mol(model);
   return (100 * x * stoichiometricDryProductsMol(model)) / (s * (1 - x / AIR_O2_FRACTION));
 }

@@ -1,4 +1,6 @@
 import type { TradeFlag } from './trade-flag';
+import { requireReading } from './reading-ranges';
+import { requireNumber, requireOneOf } from './trade-input-error';
 import { inWcToPascal } from './units';
 
 export const VENT_TYPES = ['draft_hood', 'barometric_damper', 'power_vent', 'direct_vent'] as const;
@@ -30,7 +32,13 @@ const NATURAL_DRAFT: readonly VentType[] = ['draft_hood', 'barometric_damper'];
 
 export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
   const flags: TradeFlag[] = [];
-  const { coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType } = input;
+  const coPpm = requireReading('coPpm', input.coPpm);
+  const coAirFreePpm = requireNumber('coAirFreePpm', input.coAirFreePpm, { min: coPpm });
+  const optional = <T>(value: T | undefined, check: (v: unknown) => T) => (value === undefined ? undefined : check(value));
+  const draftInWc = optional(input.draftInWc, (v) => requireReading('draftInWc', v));
+  const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireReading('ambientCoPpm', v));
+  const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
+  const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
 
   if (ambientCoPpm !== undefined && ambientCoPpm > BPI_AMBIENT_CO_ABORT_PPM) {
     flags.push({

@@ -1,14 +1,10 @@
-import {
-  AIR_TEMP_RANGE_F,
-  combustionEfficiencyPct,
-  excessAirPctFromO2,
-  MAX_FLUE_TEMP_F,
-} from './combustion-efficiency';
+import { combustionEfficiencyPct, excessAirPctFromO2 } from './combustion-efficiency';
 import { combustionSafetyFlags, VENT_TYPES, type VentType } from './combustion-flags';
 import { co2MaxPct, FUEL_MODELS, METHOD_19_SOURCE, requireFuel, type CombustionFuel } from './fuels';
 import { SIEGERT_BASIS, siegertFlueLossPct, siegertSource } from './siegert';
 import type { TradeFlag } from './trade-flag';
-import { requireNumber, requireOneOf, TradeInputError } from './trade-input-error';
+import { requireReading } from './reading-ranges';
+import { requireOneOf, TradeInputError } from './trade-input-error';
 
 export { TradeInputError } from './trade-input-error';
 
@@ -48,31 +44,31 @@ export type CombustionAnalysis = {
 
 /** CO2 (% dry) from measured O2: CO2max·(20.9 − O2)/20.9. */
 export function co2PctFromO2(fuel: CombustionFuel, o2Pct: number): number {
-  const o2 = requireNumber('o2Pct', o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
+  const o2 = requireReading('o2Pct', o2Pct);
   return (co2MaxPct(fuel) * (METHOD_19_AIR_O2_PCT - o2)) / METHOD_19_AIR_O2_PCT;
 }
 
 /** CO corrected to zero O2 (air-free): CO·20.9/(20.9 − O2). */
 export function airFreeCoPpm(coPpm: number, o2Pct: number): number {
-  const co = requireNumber('coPpm', coPpm, { min: 0 });
-  const o2 = requireNumber('o2Pct', o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
+  const co = requireReading('coPpm', coPpm);
+  const o2 = requireReading('o2Pct', o2Pct);
   // Factor first: it is exactly 1 at 0 % O2 and never below 1, so rounding can't put the result under the reading.
   return co * (METHOD_19_AIR_O2_PCT / (METHOD_19_AIR_O2_PCT - o2));
 }
 
 export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
   const fuel = requireFuel('fuel', input.fuel);
-  const o2Pct = requireNumber('o2Pct', input.o2Pct, { min: 0, maxExclusive: METHOD_19_AIR_O2_PCT });
-  const coPpm = requireNumber('coPpm', input.coPpm, { min: 0 });
-  const airTempF = requireNumber('airTempF', input.airTempF, AIR_TEMP_RANGE_F);
-  const flueTempF = requireNumber('flueTempF', input.flueTempF, { max: MAX_FLUE_TEMP_F });
+  const o2Pct = requireReading('o2Pct', input.o2Pct);
+  const coPpm = requireReading('coPpm', input.coPpm);
+  const airTempF = requireReading('airTempF', input.airTempF);
+  const flueTempF = requireReading('flueTempF', input.flueTempF);
   if (flueTempF < airTempF) {
     throw new TradeInputError('flueTempF', `flue temperature ${flueTempF} °F is below the combustion-air temperature ${airTempF} °F`);
   }
   const optional = <T>(value: T | undefined, check: (v: unknown) => T) => (value === undefined ? undefined : check(value));
-  const draftInWc = optional(input.draftInWc, (v) => requireNumber('draftInWc', v));
-  const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireNumber('ambientCoPpm', v, { min: 0 }));
-  const spillageSeconds = optional(input.spillageSeconds, (v) => requireNumber('spillageSeconds', v, { min: 0 }));
+  const draftInWc = optional(input.draftInWc, (v) => requireReading('draftInWc', v));
+  const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireReading('ambientCoPpm', v));
+  const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
   if (input.condensing !== undefined && typeof input.condensing !== 'boolean') {
     throw new TradeInputError('condensing', `must be true or false, got ${String(input.condensing)}`);
@@ -94,12 +90,23 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
     });
   }
 
+  const efficiencyPct = combustionEfficiencyPct({ fuel, excessAirPct, flueMinusAirF: flueTempF - airTempF, airTempF });
+  // Physics, not a limit of ours: the flue cannot carry away more heat than the fuel gave. It also holds for condensing
+  // appliances, whose sample is judged the same way even though their efficiency is not reported.
+  if (efficiencyPct <= 0) {
+    throw new TradeInputError(
+      'o2Pct',
+      `O2 ${o2Pct} % with the flue ${flueTempF} °F and the air ${airTempF} °F means the flue carries away more heat than the fuel gives: ` +
+        'the probe is drawing air or the burner is not firing. Check the probe is in the flue and read again.',
+    );
+  }
+
   return {
     co2Pct: co2PctFromO2(fuel, o2Pct),
     co2MaxPct: co2MaxPct(fuel),
     excessAirPct,
     coAirFreePpm,
-    efficiencyPct: condensing ? null : combustionEfficiencyPct({ fuel, excessAirPct, flueMinusAirF: flueTempF - airTempF, airTempF }),
+    efficiencyPct: condensing ? null : efficiencyPct,
     efficiencyBasis: `HHV basis, heat-loss method, ${FUEL_MODELS[fuel].description}`,
     siegertLossPct: siegertFlueLossPct({ fuel, o2Pct, flueTempF, airTempF }),
     siegertBasis: SIEGERT_BASIS,

@@ -1,8 +1,14 @@
 import type { RatingComparison } from './gas-input';
 import type { TradeFlag } from './trade-flag';
+import { requireNumber, requireOneOf } from './trade-input-error';
 
 /** The flag a clocked gas input raises against the nameplate: over-firing always, under-firing past the company's tolerance. */
 export function gasInputRatingFlag(rating: RatingComparison, ratedBtuh: number, tolerancePct: number | null): TradeFlag | null {
+  requireOneOf('rating.status', rating.status, ['over_fired', 'under_fired', 'within_rating'] as const);
+  requireNumber('rating.deviationPct', rating.deviationPct, { min: -100 });
+  requireNumber('rating.allowedBtuPerHour', rating.allowedBtuPerHour, { minExclusive: 0 });
+  requireNumber('ratedBtuh', ratedBtuh, { minExclusive: 0 });
+  if (tolerancePct !== null) requireNumber('underFiringTolerancePct', tolerancePct, { min: 0, max: 100 });
   if (rating.status === 'over_fired') {
     return {
       code: 'gas_input_over_fired',

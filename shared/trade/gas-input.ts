@@ -1,3 +1,4 @@
+import { requireReading } from './reading-ranges';
 import { requireNumber } from './trade-input-error';
 
 /** Higher heating values, Btu per standard cubic foot. Source: 40 CFR Part 98, Subpart C, Table C-1. */
@@ -12,9 +13,9 @@ export function clockGasInput(input: {
   secondsPerRevolution: number;
   heatingValueBtuPerCubicFoot: number;
 }): { cubicFeetPerHour: number; inputBtuPerHour: number } {
-  const dial = requireNumber('dialCubicFeet', input.dialCubicFeet, { minExclusive: 0 });
-  const seconds = requireNumber('secondsPerRevolution', input.secondsPerRevolution, { minExclusive: 0 });
-  const heatingValue = requireNumber('heatingValueBtuPerCubicFoot', input.heatingValueBtuPerCubicFoot, { minExclusive: 0 });
+  const dial = requireReading('dialCubicFeet', input.dialCubicFeet);
+  const seconds = requireReading('secondsPerRevolution', input.secondsPerRevolution);
+  const heatingValue = requireReading('heatingValueBtuPerCubicFoot', input.heatingValueBtuPerCubicFoot);
   const cubicFeetPerHour = (3600 * dial) / seconds;
   return { cubicFeetPerHour, inputBtuPerHour: cubicFeetPerHour * heatingValue };
 }

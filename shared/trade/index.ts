@@ -11,6 +11,7 @@ export * from './combustion';
 export * from './gas-input';
 export * from './gas-input-rating-flag';
 export * from './plausible-readings';
+export * from './reading-ranges';
 export * from './makeup-water';
 export * from './gauge-glass';
 export * from './thermocouple';

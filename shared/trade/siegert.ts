@@ -1,5 +1,6 @@
 import { requireFuel, type CombustionFuel } from './fuels';
-import { requireNumber } from './trade-input-error';
+import { requireReading } from './reading-ranges';
+import { TradeInputError } from './trade-input-error';
 import { fahrenheitDeltaToKelvin } from './units';
 
 type SiegertCoefficients = { a2: number; b: number; confidence: string };
@@ -27,8 +28,9 @@ export function siegertSource(fuel: CombustionFuel): string {
 /** Siegert flue-gas loss qA, % of the lower heating value; temperatures enter as a °C difference. */
 export function siegertFlueLossPct(input: { fuel: CombustionFuel; o2Pct: number; flueTempF: number; airTempF: number }): number {
   const { a2, b } = SIEGERT_COEFFICIENTS[requireFuel('fuel', input.fuel)];
-  const o2 = requireNumber('o2Pct', input.o2Pct, { min: 0, maxExclusive: 21 });
-  const flue = requireNumber('flueTempF', input.flueTempF);
-  const air = requireNumber('airTempF', input.airTempF);
+  const o2 = requireReading('o2Pct', input.o2Pct);
+  const flue = requireReading('flueTempF', input.flueTempF);
+  const air = requireReading('airTempF', input.airTempF);
+  if (flue < air) throw new TradeInputError('flueTempF', `flue temperature ${flue} °F is below the combustion-air temperature ${air} °F`);
   return fahrenheitDeltaToKelvin(flue - air) * (a2 / (21 - o2) + b);
 }

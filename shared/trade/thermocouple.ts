@@ -1,4 +1,4 @@
-import { requireNumber } from './trade-input-error';
+import { requireReading } from './reading-ranges';
 
 export const THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV = { min: 25, max: 30 } as const;
 export const THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV = 18;
@@ -7,9 +7,6 @@ const TYPICAL_SOURCE = 'Basic HVAC, BCcampus open textbook, chapter 19 (read): o
 const REPLACE_SOURCE = 'from memory: replace below about 18 mV open circuit';
 const CLOSED_SOURCE = "closed-circuit minimums vary by gas valve: the valve manufacturer's instructions govern";
 
-/** A thermocouple makes tens of millivolts; readings far above that are a thermopile or a meter-range mistake. */
-const PLAUSIBLE_MAX_MV = 100;
-
 export type ThermocoupleAssessment = {
   status: 'replace' | 'below_typical' | 'typical' | 'above_typical' | 'see_manufacturer';
   reason: string;
@@ -17,9 +14,8 @@ export type ThermocoupleAssessment = {
 };
 
 export function assessThermocoupleMillivolts(input: { openCircuitMv?: number; closedCircuitMv?: number }): ThermocoupleAssessment {
-  const bounds = { min: 0, max: PLAUSIBLE_MAX_MV };
-  const open = input.openCircuitMv === undefined ? undefined : requireNumber('openCircuitMv', input.openCircuitMv, bounds);
-  const closed = input.closedCircuitMv === undefined ? undefined : requireNumber('closedCircuitMv', input.closedCircuitMv, bounds);
+  const open = input.openCircuitMv === undefined ? undefined : requireReading('openCircuitMv', input.openCircuitMv);
+  const closed = input.closedCircuitMv === undefined ? undefined : requireReading('closedCircuitMv', input.closedCircuitMv);
   const closedNote = closed === undefined ? '' : ` Closed circuit ${closed} mV: ${CLOSED_SOURCE}.`;
   const { min, max } = THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV;
 
