@@ -66,7 +66,14 @@ describe('checklist templates', () => {
     const res = await as.technician.get('/api/checklist-templates');
     expect(res.status).toBe(200);
     const list: Template[] = res.body;
-    expect(list.map((x) => `${x.applianceKind}/${x.fuel}`).sort()).toEqual(['hot_water_boiler/null', 'hot_water_boiler/oil_no2', 'steam_boiler/null', 'steam_boiler/oil_no2']);
+    expect(list.map((x) => `${x.applianceKind}/${x.fuel}`).sort()).toEqual([
+      'furnace/null',
+      'hot_water_boiler/null',
+      'hot_water_boiler/oil_no2',
+      'steam_boiler/null',
+      'steam_boiler/oil_no2',
+      'water_heater/null',
+    ]);
     for (const tpl of list) {
       expect(new Set(tpl.items.map((i) => i.key)).size).toBe(tpl.items.length);
       for (const item of tpl.items) for (const r of item.readings ?? []) expect(readingKeys).toContain(r);
@@ -87,7 +94,7 @@ describe('checklist templates', () => {
   it('findTemplateFor prefers the fuel-specific template', async () => {
     expect((await findTemplateFor(ctx.db, t.company.id, 'steam_boiler', 'oil_no2'))!.fuel).toBe('oil_no2');
     expect((await findTemplateFor(ctx.db, t.company.id, 'steam_boiler', 'propane'))!.fuel).toBeNull();
-    expect(await findTemplateFor(ctx.db, t.company.id, 'furnace', 'natural_gas')).toBeNull();
+    expect((await findTemplateFor(ctx.db, t.company.id, 'furnace', 'natural_gas'))!.applianceKind).toBe('furnace');
   });
 
   it('lets a manager replace a template; stored row and audit follow', async () => {

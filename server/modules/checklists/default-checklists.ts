@@ -13,6 +13,13 @@ const SCALDING = 'Blowdown water and steam are scalding: drain to a safe place a
 const RELIEF =
   'Valve discharge is scalding. The valve needs a full-size discharge pipe to a safe place; a valve not opened for years may not reseat, so be ready to replace it.';
 
+const CO_ALARM: ChecklistItemTemplate = {
+  key: 'co_alarm',
+  section: 'Carbon monoxide',
+  label: 'Check a carbon-monoxide alarm is present near the sleeping rooms and test that it sounds; note its age.',
+  caution: `Carbon monoxide has no smell: an alarm missing or not working is told to the occupant. Where alarms are required is set by local codes. ${FOLLOW}`,
+};
+
 type Item = ChecklistItemTemplate;
 
 const steamWaterSide: Item[] = [
@@ -34,8 +41,27 @@ const steamWaterSide: Item[] = [
     key: 'water_level',
     section: 'Gauge glass',
     label: 'Record the water level in the gauge glass with the boiler cold (as a fraction of the glass, e.g. 1/2).',
-    caution: 'An empty glass means the water is below the safe level: do not fire the boiler until the level is restored and the cause found.',
+    caution:
+      'An empty glass means the water is below the safe level: do not fire the boiler until the level is restored and the cause found. Never add cold water to a hot boiler whose glass shows no water: let it cool first, or the shock can crack it or flash to steam.',
     readings: ['gaugeGlassLevel'],
+  },
+  {
+    key: 'lwco_slow_drain',
+    section: 'Low-water cutoff',
+    label: 'Beside the quick blowdown, run a slow-drain test: with the burner firing, drain the boiler slowly and record the glass level at which the cutoff stops the burner.',
+    caution: `${SCALDING} Stop the test and shut the burner off by hand if the level reaches the bottom of the glass with the burner still firing. ${FOLLOW}`,
+  },
+  {
+    key: 'auto_water_feeder',
+    section: 'Low-water cutoff',
+    label: 'Where an automatic water feeder is fitted, check it feeds when the level drops and stops at the set level; record feeder counter or meter.',
+    caution: 'A feeder that runs often hides a leak or a failed cutoff; it does not replace the low-water cutoff.',
+  },
+  {
+    key: 'high_limit_manual_reset',
+    section: 'Pressure controls',
+    label: 'Test the manual-reset high-limit pressure control: raise pressure (or lower its setting) until it trips; confirm the burner stops and stays off until reset by hand.',
+    caution: `If it does not trip, shut the boiler down: it is the backup to the operating control. ${FOLLOW}`,
   },
   {
     key: 'pressure_control',
@@ -67,6 +93,20 @@ const steamSystem: Item[] = [
     caution: `${RELIEF} ${FOLLOW}`,
   },
   {
+    key: 'safety_valve_set_pressure',
+    section: 'Safety valve',
+    label: 'Confirm the safety valve tag shows a set pressure of 15 psig or less on a low-pressure steam boiler.',
+    // Source: ASME Boiler and Pressure Vessel Code Section IV, low-pressure steam boilers at 15 psi or less
+    caution: `A valve set higher than the boiler allows must be replaced, not adjusted. ${FOLLOW}`,
+  },
+  {
+    key: 'safety_valve_try_lever',
+    section: 'Safety valve',
+    label: 'Try-lever test: with the boiler steaming, lift the try lever fully, let it snap shut, and check it reseats without seepage.',
+    caution: `${RELIEF} Wear gloves and eye protection and stand clear of the discharge. ${FOLLOW}`,
+  },
+  CO_ALARM,
+  {
     key: 'makeup_water',
     section: 'Water use',
     label: 'Record the makeup water added since the last visit (feeder meter or water added by hand); high use points to a leak.',
@@ -89,6 +129,38 @@ const hotWaterSide: Item[] = [
     label: 'Record the cold fill pressure and check the fill valve holds it.',
     readings: ['fillPressurePsi'],
   },
+  {
+    key: 'expansion_precharge_vs_fill',
+    section: 'Water side',
+    label: 'Compare the expansion tank pre-charge with the static fill pressure at the tank: they should match; adjust the pre-charge with the tank isolated and drained.',
+    caution: 'Isolate and cool the tank before draining it: boiler water is hot enough to scald.',
+  },
+  { key: 'air_elimination', section: 'Water side', label: 'Check the air eliminator or air separator vents air and does not leak water.' },
+  {
+    key: 'hw_makeup_water',
+    section: 'Water use',
+    label: 'Record makeup water added since the last visit (fill meter where fitted); high use points to a leak.',
+    readings: ['makeupWater'],
+  },
+  {
+    key: 'hw_lwco',
+    section: 'Controls',
+    label: 'Where a low-water cutoff is fitted, test it stops the burner as its manufacturer\'s instructions say.',
+    caution: `Water drained from the test is hot enough to scald. ${FOLLOW}`,
+  },
+  {
+    key: 'relief_valve_lift',
+    section: 'Relief valve',
+    label: 'Lift-test the relief valve by its lever: water flows freely and the valve reseats without dripping.',
+    caution: `${RELIEF} Stand clear of the discharge. ${FOLLOW}`,
+  },
+  {
+    key: 'anti_scald',
+    section: 'Domestic hot water',
+    label: 'Where the boiler heats domestic water, check the anti-scald (mixing) valve and record the hot-water temperature at a tap.',
+    caution: `Water above about 120 °F can scald quickly, most of all children and the elderly. ${FOLLOW}`,
+  },
+  CO_ALARM,
   {
     key: 'relief_valve',
     section: 'Relief valve',
@@ -114,14 +186,50 @@ const gasBurner: Item[] = [
   {
     key: 'pilot_thermocouple',
     section: 'Burner and pilot',
-    label: 'Check the pilot flame envelops the thermocouple tip; measure the thermocouple (open- and closed-circuit millivolts).',
+    label: 'Standing pilot only: check the pilot flame envelops the thermocouple tip; measure the thermocouple (open- and closed-circuit millivolts).',
     readings: ['thermocouple'],
   },
   {
     key: 'pilot_relight',
     section: 'Burner and pilot',
-    label: 'Relight the pilot by the lighting instructions on the boiler: hold the pilot button about 30 seconds so the thermocouple proves the flame.',
+    label: 'Standing pilot only: relight the pilot by the lighting instructions on the boiler: hold the pilot button about 30 seconds so the thermocouple proves the flame.',
     caution: `If you smell gas, do not light anything: shut off the gas, ventilate and find the leak first. ${FOLLOW}`,
+  },
+  {
+    key: 'pilot_outage',
+    section: 'Burner and pilot',
+    label: "Standing pilot only: pilot-outage test: put out the pilot and confirm the gas valve closes within the time the valve maker publishes.",
+    caution: `If the valve does not close, shut off the gas and leave the appliance off. ${MAKE_SAFE} ${FOLLOW}`,
+  },
+  {
+    key: 'electronic_ignition',
+    section: 'Burner and pilot',
+    label: 'Spark or hot-surface ignition only: check the igniter (spark gap or hot-surface element), flame sensing (flame current) and that the control locks out on failed ignition.',
+    caution: `Hot-surface igniters are fragile and hot: do not touch them. ${FOLLOW}`,
+  },
+  {
+    key: 'rollout_spill_switch',
+    section: 'Safety switches',
+    label: 'Test the flame rollout switch and the spill (draft) switch: each stops the burner when tripped.',
+    caution: `Never bypass or jumper a safety switch; a tripped switch means a fault to find. ${MAKE_SAFE} ${FOLLOW}`,
+  },
+  {
+    key: 'manifold_vs_nameplate',
+    section: 'Gas supply',
+    label: 'Compare the manifold pressure with the pressure on the nameplate and set it to the nameplate for the gas in use.',
+    caution: FOLLOW,
+  },
+  {
+    key: 'combustion_air',
+    section: 'Gas supply',
+    label: 'Check the combustion-air openings are present, open and sized as local codes require.',
+    caution: `Starved combustion air makes carbon monoxide. ${FOLLOW}`,
+  },
+  {
+    key: 'vent_damper',
+    section: 'Venting',
+    label: 'Where a vent damper is fitted, check it opens fully before the burner fires (interlock) and the burner cannot fire with it shut.',
+    caution: `${MAKE_SAFE} ${FOLLOW}`,
   },
   {
     key: 'gas_pressure',
@@ -141,7 +249,7 @@ const combustionAndVenting = (ventCheck: string): Item[] => [
   {
     key: 'combustion_test',
     section: 'Combustion and draft',
-    label: 'Run a combustion test after several minutes of steady firing: O2, CO, flue and combustion-air temperature.',
+    label: 'Run a combustion test after several minutes of steady firing: O2, CO, flue and combustion-air temperature. On a draft-hood appliance take the flue sample before the draft hood.',
     caution: `${MAKE_SAFE} ${FOLLOW}`,
     readings: ['combustion'],
   },
@@ -182,7 +290,25 @@ const oilBurner: Item[] = [
     caution: 'Do not reset a locked-out primary control again and again: unburned oil collects in the chamber and can ignite violently.',
   },
   { key: 'pump_pressure', section: 'Oil burner', label: 'Set and record the pump pressure to the nozzle rating.', readings: ['oil'] },
-  { key: 'smoke_test', section: 'Combustion and draft', label: 'Run a smoke test before the final air adjustment and record the smoke spot.', readings: ['oil'] },
+  {
+    key: 'pump_vacuum',
+    section: 'Oil burner',
+    label: "Measure the pump vacuum at the inlet; a high vacuum points to a blocked filter or line; compare with the pump maker's limit.",
+  },
+  {
+    key: 'emergency_switch',
+    section: 'Oil supply',
+    label: 'Check the emergency shut-off switch (outside the boiler room door) stops the burner.',
+    caution: FOLLOW,
+  },
+  {
+    key: 'smoke_test',
+    section: 'Combustion and draft',
+    label: "Run a smoke test before the final air adjustment and record the smoke spot; it should be within the burner maker's limit (commonly no more than No. 1 on a modern flame-retention burner).",
+    // common practice: smoke spot no more than No. 1 on flame-retention oil burners
+    caution: FOLLOW,
+    readings: ['oil'],
+  },
   {
     key: 'oil_drafts',
     section: 'Combustion and draft',
@@ -195,6 +321,48 @@ const oilBurner: Item[] = [
     label: 'Check the oil tank, lines and fittings for leaks and the tank for water or sludge.',
     caution: 'An oil leak near the burner is a fire hazard: stop the burner and repair before leaving it running.',
   },
+];
+
+const waterHeater: Item[] = [
+  {
+    key: 'tp_relief_valve',
+    section: 'Relief valve',
+    label: 'Check the temperature-and-pressure relief valve: rating on its tag, full-size discharge pipe to a safe place, no seepage; lift-test by its lever.',
+    caution: `${RELIEF} ${FOLLOW}`,
+  },
+  {
+    key: 'tank_flush',
+    section: 'Tank',
+    label: 'Flush sediment from the tank at the drain valve; check the anode rod where the maker calls for it.',
+    caution: 'Tank water is hot enough to scald: run it to a safe drain and keep clear of the hose end.',
+  },
+  {
+    key: 'wh_anti_scald',
+    section: 'Domestic hot water',
+    label: 'Record the hot-water temperature at a tap and check the thermostat setting and any mixing valve.',
+    caution: `Water above about 120 °F can scald quickly, most of all children and the elderly. ${FOLLOW}`,
+  },
+  { key: 'wh_expansion', section: 'Tank', label: 'Where a thermal expansion tank is fitted, check its pre-charge matches the house water pressure.' },
+  CO_ALARM,
+];
+
+const warmAirFurnace: Item[] = [
+  { key: 'air_filter', section: 'Air side', label: 'Replace or clean the air filter; record its size.' },
+  { key: 'blower', section: 'Air side', label: 'Clean the blower wheel and check its motor current against the nameplate.', caution: 'Shut off power at the furnace switch before opening the blower door.' },
+  { key: 'temperature_rise', section: 'Air side', label: "Measure the temperature rise (supply minus return) and compare it with the range on the furnace's rating plate." },
+  {
+    key: 'heat_exchanger',
+    section: 'Heat exchanger',
+    label: 'Inspect the heat exchanger for cracks, holes and rust-through; watch the flame for change when the blower starts.',
+    caution: `A broken heat exchanger can put carbon monoxide into the air stream. ${MAKE_SAFE} ${FOLLOW}`,
+  },
+  {
+    key: 'furnace_high_limit',
+    section: 'Controls',
+    label: 'Check the high-limit switch stops the burner when the air temperature reaches its setting (e.g. with the blower stopped).',
+    caution: FOLLOW,
+  },
+  CO_ALARM,
 ];
 
 export type DefaultChecklist = { name: string; applianceKind: ApplianceKind; fuel: Fuel | null; items: Item[]; requiredReadings: RequiredReadingsByVisitType };
@@ -234,6 +402,20 @@ export const DEFAULT_CHECKLISTS: DefaultChecklist[] = [
     applianceKind: 'hot_water_boiler',
     fuel: 'oil_no2',
     items: [...hotWaterSide, ...oilBurner, ...combustionAndVenting(OIL_VENT)],
+    requiredReadings: FIRED_ANNUAL,
+  },
+  {
+    name: 'Storage water heater, gas-fired: annual maintenance',
+    applianceKind: 'water_heater',
+    fuel: null,
+    items: [...waterHeater, ...gasBurner, ...combustionAndVenting(GAS_VENT)],
+    requiredReadings: FIRED_ANNUAL,
+  },
+  {
+    name: 'Warm-air furnace, gas-fired: annual maintenance',
+    applianceKind: 'furnace',
+    fuel: null,
+    items: [...warmAirFurnace, ...gasBurner, ...combustionAndVenting(GAS_VENT)],
     requiredReadings: FIRED_ANNUAL,
   },
 ];
