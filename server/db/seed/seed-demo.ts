@@ -10,6 +10,7 @@ import { applyDemoCompanyPolicies } from './demo-company-policies';
 import { recomputeDueForCompany } from '../../modules/due/due.repository';
 import { seedDemoMakeupWater } from './demo-makeup-water';
 import { demoClock } from './demo-clock';
+import { seedDemoBookings } from './demo-bookings';
 import { addYears } from '../../../shared/trade/iso-date';
 
 /**
@@ -47,6 +48,12 @@ export async function seedDemo(db: DbOrTx, { now = new Date() }: { now?: Date } 
     await seedDemoMakeupWater(tx, { companyId: demo.id, homeownerCustomerId: homeownerCustomer.id, clock });
     await applyDemoCompanyPolicies(tx, demo.id);
     await recomputeDueForCompany(tx, demo.id, { today: clock.today });
+    await seedDemoBookings(tx, {
+      companyId: demo.id,
+      technicianIds: DEMO_MEMBERS.filter((m) => m.company === 'demo' && m.role === 'technician').map((m) => userIds[m.email]),
+      managerId: userIds['manager@demo.test'],
+      clock,
+    });
   });
   return { seeded: true };
 }
