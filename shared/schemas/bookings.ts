@@ -7,7 +7,7 @@
  *   POST  /bookings                          BookingDto      bookings:book (technicians: only themselves)
  *   GET   /bookings?from&to&technicianId     BookingListDto  bookings:read (the week board; from/to are dates, at most 31 days)
  *   GET   /bookings/:id                      BookingDto      bookings:read
- *   PATCH /bookings/:id                      BookingDto      bookings:manage (move: start, end, technician, note)
+ *   POST  /bookings/:id/move                 BookingDto      bookings:manage (a new window, technician, note)
  *   POST  /bookings/:id/confirm              BookingDto      bookings:manage
  *   POST  /bookings/:id/cancel               BookingDto      bookings:manage (reason)
  *   POST  /bookings/:id/no-access            BookingDto      bookings:book (the booked technician, or the office; reason)

@@ -132,7 +132,7 @@ describe('booking a visit', () => {
     expect(followUp.status).toBe(201);
     expect((await as.technician.post(`/api/bookings/${followUp.body.id}/cancel`).send({ reason: 'no' })).status).toBe(403);
     expect((await otherAs.manager.get(`/api/bookings/${followUp.body.id}`)).status).toBe(404);
-    expect((await otherAs.manager.patch(`/api/bookings/${followUp.body.id}`).send({ start: '2026-12-01T09:00', end: '2026-12-01T10:00' })).status).toBe(404);
+    expect((await otherAs.manager.post(`/api/bookings/${followUp.body.id}/move`).send({ start: '2026-12-01T09:00', end: '2026-12-01T10:00' })).status).toBe(404);
     expect((await as.manager.post('/api/bookings').send(book({ applianceIds: [otherBoilerId] }))).status).toBe(404);
   });
 });
@@ -140,14 +140,14 @@ describe('booking a visit', () => {
 describe('moving, cancelling, the round and the load list', () => {
   it('moves a booking, then refuses to move it once cancelled', async () => {
     const made = await as.manager.post('/api/bookings').send(book({ applianceIds: [elsewhereId], start: '2026-12-01T13:00', end: '2026-12-01T14:00' }));
-    const moved = await as.manager.patch(`/api/bookings/${made.body.id}`).send({ start: '2026-12-02T08:00', end: '2026-12-02T09:00', technicianId: t.manager.user.id });
+    const moved = await as.manager.post(`/api/bookings/${made.body.id}/move`).send({ start: '2026-12-02T08:00', end: '2026-12-02T09:00', technicianId: t.manager.user.id });
     expect(moved.status).toBe(200);
     expect(moved.body).toMatchObject({ start: '2026-12-02T08:00', technician: { id: t.manager.user.id } });
     expect(await stored(made.body.id)).toMatchObject({ technicianId: t.manager.user.id, startsAt: new Date('2026-12-02T13:00:00Z') });
 
     const cancelled = await as.manager.post(`/api/bookings/${made.body.id}/cancel`).send({ reason: 'Customer away' });
     expect(cancelled.body).toMatchObject({ status: 'cancelled', statusReason: 'Customer away' });
-    const again = await as.manager.patch(`/api/bookings/${made.body.id}`).send({ start: '2026-12-03T08:00', end: '2026-12-03T09:00' });
+    const again = await as.manager.post(`/api/bookings/${made.body.id}/move`).send({ start: '2026-12-03T08:00', end: '2026-12-03T09:00' });
     expect(again.status).toBe(400);
     expect(again.body.error.details._[0]).toMatch(/cancelled/);
     expect((await stored(made.body.id)).startsAt).toEqual(new Date('2026-12-02T13:00:00Z'));

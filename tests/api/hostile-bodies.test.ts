@@ -141,7 +141,7 @@ beforeAll(async () => {
     // Nobody has invited the owner: a body that passes validation meets 404, which is as good a place to end.
     'post /invitations/:id/accept': `/invitations/${crypto.randomUUID()}/accept`,
     'post /bookings': '/bookings',
-    'patch /bookings/:id': `/bookings/${booking.id}`,
+    'post /bookings/:id/move': `/bookings/${booking.id}/move`,
     'post /bookings/:id/cancel': `/bookings/${booking.id}/cancel`,
     'post /bookings/:id/no-access': `/bookings/${booking.id}/no-access`,
   };
@@ -202,7 +202,7 @@ beforeAll(async () => {
     'post /customers/:id/homeowner-invitation': { email: 'home.owner@example.test' },
     'post /invitations/:id/accept': { name: 'Rowan Tarn' },
     'post /bookings': { applianceIds: [spare.id], technicianId: t.technician.user.id, start: `${ahead}T10:00`, end: `${ahead}T11:00`, source: 'phone' },
-    'patch /bookings/:id': { start: `${ahead}T08:00`, end: `${ahead}T09:30`, note: 'Ring twice' },
+    'post /bookings/:id/move': { start: `${ahead}T08:00`, end: `${ahead}T09:30`, note: 'Ring twice' },
     'post /bookings/:id/cancel': { reason: 'Customer away' },
     'post /bookings/:id/no-access': { reason: 'Nobody home' },
   };

@@ -21,8 +21,8 @@ export function bookingRoutes(ctx: AppContext) {
   );
   defineRoute(
     router,
-    'patch',
-    '/bookings/:id',
+    'post',
+    '/bookings/:id/move',
     { access: { permission: 'bookings:manage' }, schemas: { params: uuidParam, body: bookingMoveInput } },
     ({ params, body }, _req, res) => service.move(currentMember(res), params.id, body),
   );

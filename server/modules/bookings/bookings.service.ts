@@ -138,9 +138,10 @@ export function bookingsService(ctx: AppContext) {
     async create(actor: Member, input: BookingInput & { source: NonNullable<BookingInput['source']> }): Promise<BookingDto> {
       const timeZone = await timeZoneOf(ctx.db, actor.companyId);
       const { startsAt, endsAt } = windowOf(timeZone, input);
-      await technicianFor(ctx.db, actor, input.technicianId);
+      // Another company's appliances answer 404 before anything about the technician is said.
       const found = await repo.appliancesOf(ctx.db, actor.companyId, input.applianceIds);
       if (found.length !== input.applianceIds.length) throw notFound('Appliance');
+      await technicianFor(ctx.db, actor, input.technicianId);
       const siteIds = new Set(found.map((a) => a.siteId));
       if (siteIds.size > 1) throw validationFailed({ applianceIds: ['All the appliances in one booking must be at one site.'] });
       const row = await guarded(timeZone, input.technicianId, startsAt, endsAt, undefined, async (tx) => {

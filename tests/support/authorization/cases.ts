@@ -1,5 +1,6 @@
 import crypto from 'node:crypto';
 import type { AppContext } from '../../../server/context';
+import { insertBooking } from '../../../server/db/factories/bookings';
 import { completeVisitBody } from '../../../bench/lib/complete-visit-body';
 import { draftVisit, memberInvitation, newAppliance, ok, shareLinkOn, spareTechnician, uniqueJpeg, type World } from './world';
 
@@ -38,6 +39,28 @@ const str = (v: unknown) => String(v);
 const randomShareToken = () => crypto.randomBytes(32).toString('base64url');
 const PAST_DAY = '2024-03-01';
 const serviceRequestBody = { contactName: 'Matrix caller', contactPhone: '555-0142', message: 'The radiators are cold upstairs.' };
+/** A date some days ahead of the real clock (the matrix runs on it), as the company's calendar would write it. */
+const daysAhead = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
+/** Each booking the matrix makes gets an hour of its own, so no two clash for the one technician. */
+let windowCounter = 0;
+function nextWindow() {
+  windowCounter += 1;
+  const day = daysAhead(2 + Math.floor(windowCounter / 20));
+  const hour = String(windowCounter % 20).padStart(2, '0');
+  return { start: `${day}T${hour}:00`, end: `${day}T${hour}:45` };
+}
+async function freshBooking(ctx: AppContext, w: World) {
+  const { start, end } = nextWindow();
+  const booking = await insertBooking(ctx.db, {
+    companyId: w.companyId,
+    siteId: w.siteId,
+    technicianId: w.tenant.technician.user.id,
+    applianceIds: [w.applianceId],
+    start,
+    end,
+  });
+  return { bookingId: booking.id };
+}
 const uniqueEmail = (what: string) => `${what}-${crypto.randomUUID()}@example.test`;
 
 async function visitOnNewAppliance(ctx: AppContext, w: World, components: Parameters<typeof newAppliance>[2] = []) {
@@ -292,4 +315,17 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     status: 200,
   },
   'patch /service-requests/:id': { params: (c) => ({ id: c.target.serviceRequestId }), body: () => ({ status: 'scheduled' }), status: 200 },
+  'post /bookings': {
+    body: (c) => ({ applianceIds: [c.target.spareApplianceId], technicianId: c.target.tenant.technician.user.id, ...nextWindow(), source: 'phone' }),
+    status: 201,
+    crossTenant: 404,
+  },
+  'get /bookings': { query: () => ({ from: daysAhead(1), to: daysAhead(7) }), status: 200 },
+  'get /bookings/:id': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), status: 200 },
+  'post /bookings/:id/move': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), body: () => nextWindow(), status: 200 },
+  'post /bookings/:id/confirm': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), status: 200 },
+  'post /bookings/:id/cancel': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), body: () => ({ reason: 'Customer away' }), status: 200 },
+  'post /bookings/:id/no-access': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), body: () => ({ reason: 'Nobody home' }), status: 200 },
+  'get /rounds': { query: () => ({ date: daysAhead(1) }), status: 200 },
+  'get /load-list': { query: () => ({ from: daysAhead(1), to: daysAhead(7) }), status: 200 },
 };
