@@ -3,6 +3,7 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { HttpError, forbidden, notFound, validationFailed } from '../../lib/http-error';
 import { instantOfLocalDateTime, todayInTimeZone } from '../../../shared/dates';
 import { formatInstant } from '../../../shared/format/dates';
+import { addDays } from '../../../shared/trade/iso-date';
 import {
   MAX_BOOKING_DAYS_AHEAD,
   MAX_BOOKING_MINUTES,
@@ -129,7 +130,7 @@ export function bookingsService(ctx: AppContext) {
 
   async function rangeRows(companyId: string, timeZone: string, from: string, to: string, technicianId?: string) {
     const start = instantOfLocalDateTime(timeZone, `${from}T00:00`);
-    const endDay = new Date(Date.parse(`${to}T00:00:00Z`) + DAY_MS).toISOString().slice(0, 10);
+    const endDay = addDays(to, 1);
     const end = instantOfLocalDateTime(timeZone, `${endDay}T00:00`);
     return repo.inWindow(ctx.db, companyId, start, end, technicianId);
   }

@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { BOOKING_STATUS_LABELS, type BookingDto, type LoadListDto } from '@shared/schemas/bookings';
 import { todayInTimeZone } from '@shared/dates';
 import { formatCalendarDate } from '@shared/format/dates';
+import { addDays } from '@shared/trade/iso-date';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
@@ -10,7 +11,6 @@ import { Page, Spinner } from '@/components/ui/page';
 import { useMe } from '@/lib/auth';
 import { useRound } from '../api/get-round';
 
-const nextDay = (date: string) => new Date(Date.parse(`${date}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
 const clock = (local: string) => local.slice(11, 16);
 
 /** The technician's day: bookings in time order with address, access notes, what is due, and the parts to load. */
@@ -19,7 +19,7 @@ export function RoundPage() {
   // The company's day, not the phone's: a round is booked on the office's calendar.
   const today = todayInTimeZone(me.data?.company?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone);
   const [day, setDay] = useState<'today' | 'tomorrow'>('today');
-  const date = day === 'today' ? today : nextDay(today);
+  const date = day === 'today' ? today : addDays(today, 1);
   const round = useRound(date);
   return (
     <Page title="Round" subtitle={formatCalendarDate(date, { long: true })}>
