@@ -206,3 +206,14 @@ export const bookingMinutesSetting = z.object(
   ) as Record<ApplianceKind, z.ZodNumber>,
 );
 export type BookingMinutesSetting = z.infer<typeof bookingMinutesSetting>;
+
+/** The next live booking of one appliance, as its life record shows it. `isToday` lets the record start the booked visit. */
+export type NextBookingDto = {
+  id: string;
+  status: BookingStatus;
+  start: string;
+  end: string;
+  timeZone: string;
+  technician: { id: string; name: string };
+  isToday: boolean;
+};

@@ -26,6 +26,7 @@ import { z } from 'zod';
 import * as E from './enums';
 import { isoDate, nonEmptyPatch, optionalText, requiredText, storableText } from './common';
 import { READING_KEYS } from './visits';
+import type { NextBookingDto } from './bookings';
 
 const optionalInt = (label: string, min: number, max: number) =>
   z.coerce
@@ -204,6 +205,8 @@ export type ApplianceRecordDto = {
   lastVisit: { id: string; visitedOn: string; type: E.VisitType; outcome: E.VisitOutcome | null } | null;
   /** An open draft visit, so a technician can carry on where they stopped. */
   openDraftVisitId: string | null;
+  /** The next booked visit; on its day, "Start visit" links the visit to it. */
+  nextBooking: NextBookingDto | null;
   /** The latest completed visit ended "shut down as unsafe": shown first on the record. */
   unsafe: { visitId: string; visitedOn: string; reason: string | null } | null;
   /** Filled by the due engine; an empty list (never invented items) until it has run. */

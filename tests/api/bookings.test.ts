@@ -178,6 +178,9 @@ describe('moving, cancelling, the round and the load list', () => {
     expect(made.status).toBe(201);
     const wrong = await as.technician.post('/api/visits').send({ applianceId: heaterId, type: 'annual_maintenance', bookingId: made.body.id });
     expect(wrong.status).toBe(400);
+    // The record offers the booked visit on its day: 15:00 today in New York.
+    const record = await as.technician.get(`/api/appliances/${boilerId}`);
+    expect(record.body.nextBooking).toMatchObject({ id: made.body.id, start: '2026-11-18T15:00', end: '2026-11-18T16:00', isToday: true });
     const started = await as.technician.post('/api/visits').send({ applianceId: boilerId, type: 'annual_maintenance', bookingId: made.body.id });
     expect(started.status).toBe(200);
     expect((await ctx.db.select().from(visits).where(eq(visits.id, started.body.id)))[0].bookingId).toBe(made.body.id);
@@ -186,6 +189,8 @@ describe('moving, cancelling, the round and the load list', () => {
     expect((await stored(made.body.id)).status).toBe('done');
     const dto = await as.manager.get(`/api/bookings/${made.body.id}`);
     expect(dto.body).toMatchObject({ status: 'done', visitIds: [started.body.id] });
+    const after = await as.technician.get(`/api/appliances/${boilerId}`);
+    expect(after.body.nextBooking?.id).not.toBe(made.body.id);
   });
 
   it('records no access with its reason', async () => {

@@ -1,6 +1,7 @@
 import type { DbOrTx } from '../../db/client';
 import { notFound } from '../../lib/http-error';
 import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/records';
+import { nextBookingOf } from '../bookings/next-booking';
 import { companyToday } from '../due/company-today';
 import { customersRepository } from '../customers/customers.repository';
 import { toCustomerDto } from '../customers/customers.service';
@@ -43,13 +44,14 @@ function toApplianceDto(a: ApplianceRow, replaced: ApplianceRow | null): Applian
 export async function loadApplianceRecord(db: DbOrTx, companyId: string, applianceId: string): Promise<ApplianceRecordDto> {
   const appliance = await appliancesRepository.find(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
-  const [site, today, replaced, componentRows, lastVisit, draft] = await Promise.all([
+  const [site, today, replaced, componentRows, lastVisit, draft, nextBooking] = await Promise.all([
     sitesRepository.find(db, companyId, appliance.siteId),
     companyToday(db, companyId),
     appliancesRepository.findReplaced(db, companyId, applianceId),
     appliancesRepository.components(db, companyId, applianceId),
     appliancesRepository.latestVisit(db, companyId, applianceId, 'completed'),
     appliancesRepository.latestVisit(db, companyId, applianceId, 'draft'),
+    nextBookingOf(db, companyId, applianceId),
   ]);
   const customer = site && (await customersRepository.find(db, companyId, site.customerId));
   if (!site || !customer) throw notFound('Appliance');
@@ -69,6 +71,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
     components: componentDtos,
     lastVisit: lastVisit && { id: lastVisit.id, visitedOn: lastVisit.visitedOn, type: lastVisit.type, outcome: lastVisit.outcome },
     openDraftVisitId: draft?.id ?? null,
+    nextBooking,
     unsafe:
       lastVisit?.outcome === 'shut_down_unsafe' ? { visitId: lastVisit.id, visitedOn: lastVisit.visitedOn, reason: lastVisit.outcomeReason } : null,
     due,

@@ -4,7 +4,7 @@ import type { VisitDto } from '@shared/schemas/visits';
 import type { VisitType } from '@shared/schemas/enums';
 import { applianceKeys } from '@/lib/resources/appliances';
 
-export const startVisit = (input: { applianceId: string; type: VisitType }) => api<VisitDto>('/visits', { method: 'POST', body: input });
+export const startVisit = (input: { applianceId: string; type: VisitType; bookingId?: string }) => api<VisitDto>('/visits', { method: 'POST', body: input });
 
 export function useStartVisit() {
   const qc = useQueryClient();

@@ -8,6 +8,7 @@ import { can } from '@shared/policy';
 import { LABELS } from '@shared/schemas/enums';
 import { useApplianceRecord } from '@/lib/resources/appliances';
 import { applianceTitle, formatDate } from '../lib/labels';
+import { bookingWindowWords } from '../lib/booking-words';
 import { CombustionTrend } from './combustion-trend';
 import { ComponentsList } from './components-list';
 import { DueList } from './due-list';
@@ -60,7 +61,12 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
         </Notice>
       )}
       {a.status !== 'in_service' && <Notice title={LABELS.applianceStatus[a.status]}>This appliance is marked {LABELS.applianceStatus[a.status].toLowerCase()}.</Notice>}
-      {can(me.data?.principal, 'visits:record') && a.status !== 'removed' && <StartVisit applianceId={a.id} openDraftVisitId={r.openDraftVisitId} />}
+      {r.nextBooking && (
+        <p className="font-semibold">
+          Next booked visit: {bookingWindowWords(r.nextBooking)}
+        </p>
+      )}
+      {can(me.data?.principal, 'visits:record') && a.status !== 'removed' && <StartVisit applianceId={a.id} openDraftVisitId={r.openDraftVisitId} booking={r.nextBooking} />}
       <RecordHeader record={r} />
       <DueList due={r.due} />
       <EndOfLife endOfLife={r.endOfLife} ageYears={r.ageYears} />

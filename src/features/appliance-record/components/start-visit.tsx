@@ -3,9 +3,12 @@ import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { LABELS, VISIT_TYPES, type VisitType } from '@shared/schemas/enums';
+import type { NextBookingDto } from '@shared/schemas/bookings';
 import { useStartVisit } from '../api/start-visit';
 
-export function StartVisit({ applianceId, openDraftVisitId }: { applianceId: string; openDraftVisitId: string | null }) {
+type Props = { applianceId: string; openDraftVisitId: string | null; booking: NextBookingDto | null };
+
+export function StartVisit({ applianceId, openDraftVisitId, booking }: Props) {
   const navigate = useNavigate();
   const start = useStartVisit();
   const [type, setType] = useState<VisitType>('annual_maintenance');
@@ -17,6 +20,8 @@ export function StartVisit({ applianceId, openDraftVisitId }: { applianceId: str
       </Button>
     );
   }
+  // On the booked day the visit belongs to the booking, so completing it marks the booking done.
+  const bookingId = booking?.isToday ? booking.id : undefined;
   return (
     <div className="flex flex-col gap-2">
       {start.isError && (
@@ -27,9 +32,9 @@ export function StartVisit({ applianceId, openDraftVisitId }: { applianceId: str
       <Button
         className="min-h-14 w-full text-xl"
         disabled={start.isPending}
-        onClick={() => start.mutate({ applianceId, type }, { onSuccess: (visit) => navigate(`/visits/${visit.id}`) })}
+        onClick={() => start.mutate({ applianceId, type, bookingId }, { onSuccess: (visit) => navigate(`/visits/${visit.id}`) })}
       >
-        {start.isPending ? 'Starting…' : 'Start visit'}
+        {start.isPending ? 'Starting…' : bookingId ? 'Start the booked visit' : 'Start visit'}
       </Button>
       <label className="flex items-center gap-2 text-sm font-semibold">
         Visit type

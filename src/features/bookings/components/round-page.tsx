@@ -10,6 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
 import { useMe } from '@/lib/auth';
 import { useRound } from '../api/get-round';
+import { NoAccessForm } from './no-access-form';
 
 const clock = (local: string) => local.slice(11, 16);
 
@@ -80,6 +81,8 @@ function BookingCard({ booking: b }: { booking: BookingDto }) {
           </li>
         ))}
       </ul>
+      {(b.status === 'booked' || b.status === 'confirmed') && <NoAccessForm bookingId={b.id} />}
+      {b.statusReason && <p className="text-sm">Reason: {b.statusReason}</p>}
     </Card>
   );
 }
