@@ -13,7 +13,7 @@ export type BenchMeta = {
   counts: Record<string, number>;
 };
 
-const COUNTED = ['companies', 'customers', 'sites', 'appliances', 'components', 'visits', 'part_swaps', 'photos', 'tags', 'timeline_events'];
+const COUNTED = ['companies', 'customers', 'sites', 'appliances', 'components', 'visits', 'part_swaps', 'photos', 'tags', 'timeline_events', 'bookings'];
 
 export async function writeBenchMeta(client: pg.ClientBase, meta: Omit<BenchMeta, 'counts'>): Promise<BenchMeta> {
   const counts: Record<string, number> = {};

@@ -15,6 +15,7 @@ import { buildNameLists } from './name-lists';
 import { buildPrototypes } from './prototypes';
 import { prototypeSteps, recordSteps } from './load-records';
 import { runStep } from './run-steps';
+import { bookingSteps } from './load-bookings';
 import { createSeededFunctions, seededUuid } from './seeded-sql';
 import { dropSecondaryIndexes, LOADED_TABLES, recreateIndexes } from './indexes';
 import { insertBenchUsers, BENCH_PASSWORD, type BenchCompanyUsers } from './bench-users';
@@ -84,7 +85,7 @@ export async function generateBenchData(opts: GenerateOptions): Promise<BenchMet
     const indexDefs = await dropSecondaryIndexes(client);
     lap(`dropped ${indexDefs.length} secondary indexes for the load`, t);
 
-    for (const step of [...prototypeSteps(protos), ...recordSteps({ today, names })]) {
+    for (const step of [...prototypeSteps(protos), ...recordSteps({ today, names }), ...bookingSteps({ today, timeZone: TIME_ZONE })]) {
       t = Date.now();
       await runStep(client, step);
       lap(step.name, t);

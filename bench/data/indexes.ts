@@ -1,6 +1,6 @@
 import type pg from 'pg';
 
-export const LOADED_TABLES = ['customers', 'sites', 'appliances', 'components', 'visits', 'part_swaps', 'timeline_events', 'photos', 'tags'];
+export const LOADED_TABLES = ['customers', 'sites', 'appliances', 'components', 'visits', 'part_swaps', 'timeline_events', 'photos', 'tags', 'bookings', 'booking_appliances'];
 
 /**
  * Drops the secondary indexes of the bulk-loaded tables (building them once after the load is much faster than

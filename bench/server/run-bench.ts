@@ -23,6 +23,7 @@ import { loadSamples } from './samples';
 import { measureClientHalf } from './client-half';
 import { crewRows, FULL_CREW, QUICK_CREW, type CrewScale } from './crew-figures';
 import { importRows } from './import-figure';
+import { bookingRows } from './booking-figures';
 
 export type RunOptions = {
   databaseUrl: string;
@@ -41,6 +42,8 @@ export type RunOptions = {
   crewOnly?: boolean;
   /** Only the import figures (written to <date>-import.json). */
   importOnly?: boolean;
+  /** Only the booking figures (written to <date>-bookings.json). */
+  bookingsOnly?: boolean;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -81,6 +84,11 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
           figures.push(...(await crewRows(run, scale, opts.crew ?? (scale.quick ? QUICK_CREW : FULL_CREW), log)));
           return;
         }
+        if (opts.bookingsOnly) {
+          await warmUp(run, scale);
+          figures.push(...(await bookingRows(run, scale)));
+          return;
+        }
         log('Warming up…');
         await warmUp(run, scale);
         log('Latency at fixed rates (timeline, search, due, stock)…');
@@ -88,6 +96,8 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
         figures.push(...latencyRows(big));
         log('Tag resolution…');
         figures.push(await tagRow(run, scale));
+        log('Bookings: week board, round with load list, insert…');
+        figures.push(...(await bookingRows(run, scale)));
         log('Throughput at 50 connections, then pgbench on the same SQL…');
         figures.push(...(await throughputRows(run, scale)));
 
@@ -117,11 +127,11 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
       });
     }
 
-    if (!opts.crewOnly) {
+    if (!opts.crewOnly && !opts.bookingsOnly) {
       log('Import…');
       figures.push(...(await importRows({ databaseUrl: opts.databaseUrl, s3Endpoint: s3.endpoint, s3Bucket: S3_BUCKET }, scale, log)));
     }
-    if (!opts.crewOnly && !opts.importOnly) {
+    if (!opts.crewOnly && !opts.importOnly && !opts.bookingsOnly) {
       log('Photo pipeline…');
       const storage = createObjectStorage({ S3_ENDPOINT: s3.endpoint, S3_REGION: 'us-east-1', S3_BUCKET, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
       try {
@@ -162,7 +172,7 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   const print = opts.print ?? ((text: string) => console.log(text));
   print(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
   if (p) print(`Due query plan:\n${p.text}\n`);
-  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : opts.importOnly ? 'import' : null, {
+  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : opts.importOnly ? 'import' : opts.bookingsOnly ? 'bookings' : null, {
     date: new Date().toISOString(),
     quick: opts.quick,
     crewOnly: Boolean(opts.crewOnly),

@@ -17,6 +17,9 @@ const SERVER_FIGURES = [
   'Due in next 90 days, first page of 100: p99',
   'Stock counts, next 90 days',
   'Tag resolution (GET /api/public/tags/:code): p99',
+  'Week board, 25 technicians: p99',
+  'Round with its load list: p99',
+  'Booking (insert with the no-clash check): p50',
   'Timeline throughput',
   'pgbench, the same timeline SQL',
   'Timeline throughput / pgbench',
@@ -41,21 +44,30 @@ describe('bench smoke (1,000 appliances, --quick)', () => {
     const serverUrl = inject('databaseUrl');
     const meta = await generateBenchData({ serverUrl, database: DATABASE, appliances: 1000, seed: 7 });
     const databaseUrl = databaseUrlOn(serverUrl, DATABASE);
+    let bookingsBefore = -1;
 
     const client = new pg.Client({ connectionString: databaseUrl });
     await client.connect();
     try {
-      const { rows } = await client.query<{ appliances: number; events: number; due: number; tags: number; companies: number }>(`
+      const { rows } = await client.query<{ appliances: number; events: number; due: number; tags: number; companies: number; bookings: number; clashes: number }>(`
         select (select count(*)::int from appliances where company_id = $1) as appliances,
                (select count(*)::int from timeline_events where company_id = $1) as events,
                (select count(*)::int from components where company_id = $1 and due_on is not null) as due,
                (select count(*)::int from tags where company_id = $1 and status = 'assigned') as tags,
-               (select count(*)::int from companies) as companies`, [meta.companyId]);
+               (select count(*)::int from companies) as companies,
+               (select count(*)::int from bookings where company_id = $1) as bookings,
+               (select count(*)::int from bookings a join bookings b on a.technician_id = b.technician_id and a.id < b.id
+                  and tstzrange(a.starts_at, a.ends_at) && tstzrange(b.starts_at, b.ends_at)) as clashes`, [meta.companyId]);
       expect(rows[0].appliances).toBe(1000);
       expect(rows[0].companies).toBe(51);
       expect(rows[0].events).toBeGreaterThan(10_000);
       expect(rows[0].due).toBeGreaterThan(0);
       expect(rows[0].tags).toBeGreaterThan(900);
+      // 25 technicians × 4 windows × the working days of 8 weeks either side (80 or 81 of them), none overlapping.
+      expect(rows[0].bookings).toBeGreaterThanOrEqual(25 * 4 * 80);
+      expect(rows[0].bookings).toBeLessThanOrEqual(25 * 4 * 81);
+      expect(rows[0].clashes).toBe(0);
+      bookingsBefore = rows[0].bookings;
     } finally {
       await client.end();
     }
@@ -73,6 +85,16 @@ describe('bench smoke (1,000 appliances, --quick)', () => {
     // Correctness, not speed: the concurrent technicians lose and duplicate nothing and get no error.
     expect(byName.get('Concurrent technicians: errors')!.value).toBe(0);
     expect(byName.get('Concurrent technicians: visits lost or duplicated')!.value).toBe(0);
+    // Every timed booking was created, and removed again so the data set stays as generated.
+    expect(byName.get('Booking (insert with the no-clash check): p50')!.note).not.toMatch(/not created/);
+    const after = new pg.Client({ connectionString: databaseUrl });
+    await after.connect();
+    try {
+      const { rows } = await after.query<{ n: number }>('select count(*)::int as n from bookings where company_id = $1', [meta.companyId]);
+      expect(rows[0].n).toBe(bookingsBefore);
+    } finally {
+      await after.end();
+    }
     expect(path.dirname(file)).toBe(outDir);
     const written = JSON.parse(fs.readFileSync(file, 'utf8')) as { figures: BenchFigure[]; database: { appliances: number } };
     expect(written.figures.map((f) => f.figure)).toEqual(figures.map((f) => f.figure));
