@@ -73,6 +73,8 @@ export type ServiceRequestDto = {
   handledAt: string | null;
   handledByName: string | null;
   customerName: string | null;
+  /** The booking made from this request, once there is one. */
+  booking: { id: string; startsAt: string } | null;
   appliance: { id: string; title: string; address: string };
 };
 export type ServiceRequestPage = { items: ServiceRequestDto[]; nextCursor: string | null; newCount: number };

@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditLog, bookings, timelineEvents, visits } from '../../server/db/schema/index';
+import { auditLog, bookings, serviceRequests, timelineEvents, visits } from '../../server/db/schema/index';
 import { insertAppliance, insertComponent, insertSite } from '../../server/db/factories/records';
 import { testApp } from '../support/context';
 import { runFileAt } from '../support/clock';
@@ -191,6 +191,20 @@ describe('moving, cancelling, the round and the load list', () => {
     expect(dto.body).toMatchObject({ status: 'done', visitIds: [started.body.id] });
     const after = await as.technician.get(`/api/appliances/${boilerId}`);
     expect(after.body.nextBooking?.id).not.toBe(made.body.id);
+  });
+
+  it('books from a service request: the request is scheduled and shows its booking', async () => {
+    const [request] = await ctx.db
+      .insert(serviceRequests)
+      .values({ companyId: t.company.id, applianceId: elsewhereId, customerId: t.customer.id, via: 'homeowner_account', contactName: 'Ines Varga', message: 'No heat upstairs' })
+      .returning();
+    const made = await as.manager.post('/api/bookings').send(book({ applianceIds: [elsewhereId], source: 'service_request', serviceRequestId: request.id, start: '2026-12-01T13:00', end: '2026-12-01T14:00' }));
+    expect(made.status).toBe(201);
+    expect(await stored(made.body.id)).toMatchObject({ serviceRequestId: request.id, source: 'service_request' });
+    const list = await as.manager.get('/api/service-requests');
+    const item = list.body.items.find((i: { id: string }) => i.id === request.id);
+    // Source: 15 U.S.C. 260a: 13:00 in New York on Dec 1 is 18:00 UTC.
+    expect(item).toMatchObject({ status: 'scheduled', booking: { id: made.body.id, startsAt: '2026-12-01T18:00:00Z' } });
   });
 
   it('records no access with its reason', async () => {

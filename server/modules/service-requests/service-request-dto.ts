@@ -21,6 +21,7 @@ export function serviceRequestDto(r: ListedServiceRequest): ServiceRequestDto {
     handledAt: q.handledAt?.toISOString() ?? null,
     handledByName: r.handledByName,
     customerName: r.customerName,
+    booking: r.booking ? { id: r.booking.split('|')[0], startsAt: r.booking.split('|')[1] } : null,
     appliance: {
       id: q.applianceId,
       title: `${LABELS.applianceKind[r.applianceKind]}, ${LABELS.fuel[r.applianceFuel].toLowerCase()}`,

@@ -16,6 +16,9 @@ const listColumns = {
   street: sites.street,
   town: sites.town,
   officeMailStatus: outgoingMail.status,
+  /** The live booking that answers the request, latest first ("id|starts_at" to keep one subquery). */
+  booking: sql<string | null>`(select b.id::text || '|' || to_char(b.starts_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS"Z"') from bookings b
+    where b.service_request_id = ${serviceRequests.id} and b.status in ('booked', 'confirmed', 'done') order by b.starts_at desc limit 1)`,
 };
 /** The office's e-mail about the request (one per request). */
 const officeMail = and(eq(outgoingMail.kind, 'service_request'), eq(outgoingMail.refId, serviceRequests.id));

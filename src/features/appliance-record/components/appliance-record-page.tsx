@@ -1,5 +1,5 @@
 import { lazy, Suspense, useEffect } from 'react';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { Page, Spinner } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/lib/auth';
@@ -9,6 +9,7 @@ import { LABELS } from '@shared/schemas/enums';
 import { useApplianceRecord } from '@/lib/resources/appliances';
 import { applianceTitle, formatDate } from '../lib/labels';
 import { bookingWindowWords } from '../lib/booking-words';
+import { bookingHref } from '@/lib/booking-link';
 import { CombustionTrend } from './combustion-trend';
 import { ComponentsList } from './components-list';
 import { DueList } from './due-list';
@@ -65,6 +66,14 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
         <p className="font-semibold">
           Next booked visit: {bookingWindowWords(r.nextBooking)}
         </p>
+      )}
+      {can(me.data?.principal, 'bookings:book') && a.status !== 'removed' && (
+        <Link
+          className="no-print inline-flex min-h-tap items-center font-semibold underline"
+          to={bookingHref({ applianceIds: [a.id], source: can(me.data?.principal, 'bookings:manage') ? 'life_record' : 'follow_up' })}
+        >
+          {can(me.data?.principal, 'bookings:manage') ? 'Book a visit' : 'Book a follow-up visit'}
+        </Link>
       )}
       {can(me.data?.principal, 'visits:record') && a.status !== 'removed' && <StartVisit applianceId={a.id} openDraftVisitId={r.openDraftVisitId} booking={r.nextBooking} />}
       <RecordHeader record={r} />

@@ -5,6 +5,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { LABELS } from '@shared/schemas/enums';
 import { useMe } from '@/lib/auth';
 import { can } from '@shared/policy';
+import { bookingHref } from '@/lib/booking-link';
 import { useAnnualServiceDue } from '../api/get-annual-service-due';
 import { useReminders } from '../api/get-reminders';
 import { AnnualReminderCell, currentAnnualReminder } from './annual-reminder-cell';
@@ -15,6 +16,7 @@ export function AnnualServiceDue() {
   const reminders = useReminders(200);
   const me = useMe();
   const canSend = can(me.data?.principal, 'reminders:send');
+  const canBook = can(me.data?.principal, 'bookings:manage');
   if (due.isPending) return <Spinner />;
   if (!due.data) return null;
   return (
@@ -31,6 +33,7 @@ export function AnnualServiceDue() {
                 <th className="pr-3">Customer</th>
                 <th className="pr-3">Contact</th>
                 <th className="pr-3">Reminder e-mail</th>
+                {canBook && <th className="no-print pr-3">Booking</th>}
               </tr>
             </thead>
             <tbody>
@@ -54,6 +57,13 @@ export function AnnualServiceDue() {
                   <td className="py-2 pr-3">
                     <AnnualReminderCell item={i} reminder={currentAnnualReminder(i, reminders.data?.items)} canSend={canSend} />
                   </td>
+                  {canBook && (
+                    <td className="no-print py-2 pr-3">
+                      <Link className="inline-flex min-h-tap items-center font-semibold underline" to={bookingHref({ applianceIds: [i.applianceId], source: 'annual_service' })}>
+                        Book<span className="sr-only"> the annual service at {i.street}</span>
+                      </Link>
+                    </td>
+                  )}
                 </tr>
               ))}
             </tbody>

@@ -9,6 +9,9 @@ import { LABELS, APPLIANCE_KINDS, type ApplianceKind } from '@shared/schemas/enu
 import type { DueItemStatus } from '@shared/schemas/due';
 import { useDue } from '../api/get-due';
 import { useTechnicians } from '@/lib/resources/members';
+import { bookingHref } from '@/lib/booking-link';
+import { useMe } from '@/lib/auth';
+import { can } from '@shared/policy';
 import { StockForecast } from './stock-forecast';
 import { AnnualServiceDue } from './annual-service-due';
 import { ReplacementProspects } from './replacement-prospects';
@@ -39,6 +42,7 @@ export function DueListPage() {
   };
   const due = useDue(query);
   const resetPaging = () => setCursors([]);
+  const canBook = can(useMe().data?.principal, 'bookings:manage');
 
   return (
     <Page
@@ -111,6 +115,7 @@ export function DueListPage() {
                     <th className="pr-3">Part</th>
                     <th className="pr-3">Customer and site</th>
                     <th className="pr-3">Technician</th>
+                    {canBook && <th className="no-print pr-3">Booking</th>}
                   </tr>
                 </thead>
                 <tbody>
@@ -135,6 +140,13 @@ export function DueListPage() {
                         </p>
                       </td>
                       <td className="pr-3">{item.site.assignedTechnicianName ?? '—'}</td>
+                      {canBook && (
+                        <td className="no-print pr-3">
+                          <Link className="inline-flex min-h-tap items-center font-semibold underline" to={bookingHref({ applianceIds: [item.appliance.id], source: 'due_list' })}>
+                            Book<span className="sr-only"> {item.typeLabel} at {item.site.street}</span>
+                          </Link>
+                        </td>
+                      )}
                     </tr>
                   ))}
                 </tbody>

@@ -1,6 +1,7 @@
 import { formatInstant } from '@shared/format/dates';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
+import { bookingHref } from '@/lib/booking-link';
 import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import { SERVICE_REQUEST_STATUS_LABELS, type ServiceRequestDto, type ServiceRequestStatus } from '@shared/schemas/service-requests';
 
@@ -12,8 +13,10 @@ export function ServiceRequestCard({
   highlighted,
   busy,
   onStatus,
+  canBook = false,
 }: {
   request: ServiceRequestDto;
+  canBook?: boolean;
   highlighted: boolean;
   busy: boolean;
   onStatus: (status: 'scheduled' | 'closed') => void;
@@ -59,6 +62,7 @@ export function ServiceRequestCard({
             : 'The e-mail about this request was not sent; it is only in this list.'}
         </p>
       )}
+      {r.booking && <p className="font-semibold">Booked for {when(r.booking.startsAt)}</p>}
       {r.handledAt && (
         <p className="text-sm text-iron-muted">
           Marked {SERVICE_REQUEST_STATUS_LABELS[r.status].toLowerCase()} {when(r.handledAt)}
@@ -67,8 +71,16 @@ export function ServiceRequestCard({
       )}
       {r.status !== 'closed' && (
         <div className="flex flex-wrap gap-2">
+          {r.status === 'new' && canBook && (
+            <Link
+              className="inline-flex min-h-tap items-center rounded-plate bg-iron px-4 font-semibold text-plate hover:bg-iron-soft"
+              to={bookingHref({ applianceIds: [r.appliance.id], source: 'service_request', serviceRequestId: r.id })}
+            >
+              Book a visit
+            </Link>
+          )}
           {r.status === 'new' && (
-            <Button disabled={busy} onClick={() => onStatus('scheduled')}>
+            <Button variant={canBook ? 'secondary' : 'primary'} disabled={busy} onClick={() => onStatus('scheduled')}>
               Mark scheduled
             </Button>
           )}

@@ -4,6 +4,8 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
 import { describeFailure } from '@/lib/form-errors';
+import { useMe } from '@/lib/auth';
+import { can } from '@shared/policy';
 import { SERVICE_REQUEST_STATUS_LABELS, SERVICE_REQUEST_STATUSES } from '@shared/schemas/service-requests';
 import { useServiceRequests, type ServiceRequestFilter } from '../api/list-service-requests';
 import { useUpdateServiceRequest } from '../api/update-service-request';
@@ -24,6 +26,7 @@ export function ServiceRequestsPage() {
   const filter: ServiceRequestFilter = isFilter(asked) ? asked : linked ? 'all' : 'new';
   const list = useServiceRequests(filter);
   const update = useUpdateServiceRequest();
+  const canBook = can(useMe().data?.principal, 'bookings:manage');
   const [failure, setFailure] = useState<string | null>(null);
   const items = list.data?.pages.flatMap((p) => p.items) ?? [];
 
@@ -74,6 +77,7 @@ export function ServiceRequestsPage() {
               highlighted={r.id === linked}
               busy={update.isPending && update.variables?.id === r.id}
               onStatus={(status) => setStatus(r.id, status)}
+              canBook={canBook}
             />
           ))}
         </ul>
