@@ -15,15 +15,19 @@ export type BookingNoticeWords = {
   what: string;
   /** The previous window, for a move. */
   before?: { startsAt: Date; endsAt: Date } | null;
+  /** Whether any appliance burns gas (natural gas or propane): the gas line is shown only then. */
+  burnsGas: boolean;
   replyUrl: string | null;
   unsubscribeUrl: string;
 };
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
-/** Shown in every e-mail about a visit to gas or oil equipment: short, and deferring to local practice. */
-export const SAFETY_LINE =
-  'If you smell gas, leave the house first and call your gas utility’s emergency number from outside, or follow your local emergency practice. Do not wait for our visit.';
+/** The usual cautions, short and deferring to local practice (common practice). */
+export const GAS_SAFETY_LINE =
+  'If you smell gas, leave the house and call your gas utility’s emergency number from outside, or follow your local emergency practice. Do not wait for our visit.';
+export const CO_SAFETY_LINE = 'If a carbon monoxide alarm sounds, get everyone into fresh air and call for help from outside.';
+const safetyLines = (w: BookingNoticeWords) => [...(w.burnsGas ? [GAS_SAFETY_LINE] : []), CO_SAFETY_LINE];
 
 const PREPARE = [
   'Clear a path to the boiler room or wherever the equipment stands, and leave about 3 feet around it free.',
@@ -83,7 +87,7 @@ function lines(w: BookingNoticeWords): string[] {
           '',
         ]
       : ['The attached calendar file takes the visit out of your calendar.', '']),
-    SAFETY_LINE,
+    ...safetyLines(w),
     '',
     `Thank you, ${w.company.name} (${w.company.phone})`,
     '',
@@ -111,7 +115,7 @@ export function bookingNoticeHtml(w: BookingNoticeWords): string {
           ...(w.replyUrl ? [`<p>Does this time not suit you? <a href="${e(w.replyUrl)}">Tell us why and when would be better</a>, and the office will call you.</p>`] : []),
         ]
       : ['<p>The attached calendar file takes the visit out of your calendar.</p>']),
-    `<p><strong>${e(SAFETY_LINE)}</strong></p>`,
+    `<p><strong>${safetyLines(w).map(e).join('<br>')}</strong></p>`,
     `<p>Thank you,<br>${e(w.company.name)} (${e(w.company.phone)})</p>`,
     `<p style="font-size: 0.9em;">You get this e-mail because ${e(w.company.name)} services your heating equipment. <a href="${e(w.unsubscribeUrl)}">Stop e-mails from us</a>.</p>`,
     '</body></html>',

@@ -61,6 +61,7 @@ export async function queueBookingNotice(
     timeZone: c.timeZone,
     technicianFirstName: firstName(c.technicianName),
     what,
+    burnsGas: c.appliances.some((a) => a.fuel === 'natural_gas' || a.fuel === 'propane'),
     before: opts.before ?? null,
     replyUrl: kind === 'cancelled' ? null : `${base}/booking-reply/${bookingReplyToken(deps.config.BETTER_AUTH_SECRET, bookingId)}`,
     unsubscribeUrl: `${base}/unsubscribe/${unsubscribe}`,
