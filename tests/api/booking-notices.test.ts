@@ -100,6 +100,10 @@ describe('the homeowner’s e-mails about a booking', () => {
       end: '2026-11-24T16:00:00.000Z',
     });
     expect(booked.uid).toContain(id);
+    // The development outbox shows the owner the invitation's own text.
+    const outbox = await as.owner.get('/api/dev/outbox?limit=200');
+    const inOutbox = outbox.body.find((m: { to: string[] }) => m.to.includes(h.email));
+    expect(inOutbox.attachments).toEqual([expect.objectContaining({ filename: 'visit.ics', contentType: 'text/calendar', text: expect.stringContaining('METHOD:REQUEST') })]);
 
     const moved = await as.manager.post(`/api/bookings/${id}/move`).send({ start: '2026-11-25T13:00', end: '2026-11-25T14:30' });
     expect(moved.status).toBe(200);
