@@ -32,7 +32,7 @@ const book = (applianceId: string, start: string, end: string) =>
 const noticesOf = (bookingId: string) => ctx.db.select().from(bookingNotices).where(eq(bookingNotices.bookingId, bookingId));
 const storedBooking = (id: string) => ctx.db.select().from(bookings).where(eq(bookings.id, id)).then((r) => r[0]);
 
-type ParsedIcs = { method: string; uid: string; sequence: number; summary: string; tzid: string; start: string; end: string; vtimezone: boolean };
+type ParsedIcs = { method: string; uid: string; sequence: number; summary: string; tzid: string; start: string; end: string; vtimezone: boolean; attendee: string; status: string };
 
 /** Reads the .ics back with ical.js (an independent parser), turning DTSTART/DTEND into instants through the file's own VTIMEZONE. */
 function readIcs(text: string): ParsedIcs {
@@ -50,6 +50,9 @@ function readIcs(text: string): ParsedIcs {
     start: event.startDate.toJSDate().toISOString(),
     end: event.endDate.toJSDate().toISOString(),
     vtimezone: Boolean(vtimezone),
+    // URI schemes are case-insensitive (RFC 3986, 3.1).
+    attendee: String(vevent.getFirstPropertyValue('attendee')).replace(/^mailto:/i, 'mailto:'),
+    status: String(vevent.getFirstPropertyValue('status')),
   };
 }
 
@@ -100,6 +103,7 @@ describe('the homeowner’s e-mails about a booking', () => {
       end: '2026-11-24T16:00:00.000Z',
     });
     expect(booked.uid).toContain(id);
+    expect(booked).toMatchObject({ attendee: `mailto:${h.email}`, status: 'CONFIRMED' });
     // The development outbox shows the owner the invitation's own text.
     const outbox = await as.owner.get('/api/dev/outbox?limit=200');
     const inOutbox = outbox.body.find((m: { to: string[] }) => m.to.includes(h.email));
@@ -126,7 +130,7 @@ describe('the homeowner’s e-mails about a booking', () => {
     mails = await mailsTo(h.email);
     expect(mails).toHaveLength(3);
     const cancelMail = mails.find((m) => m.ics?.method === 'CANCEL')!;
-    expect(cancelMail.ics).toMatchObject({ uid: booked.uid, sequence: 2, start: '2026-11-25T18:00:00.000Z' });
+    expect(cancelMail.ics).toMatchObject({ uid: booked.uid, sequence: 2, start: '2026-11-25T18:00:00.000Z', status: 'CANCELLED' });
     expect(cancelMail.text).not.toContain('/booking-reply/');
   });
 

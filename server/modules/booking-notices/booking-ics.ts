@@ -1,4 +1,4 @@
-import ical, { ICalCalendarMethod, ICalEventStatus } from 'ical-generator';
+import ical, { ICalAttendeeRole, ICalAttendeeStatus, ICalCalendarMethod, ICalEventStatus } from 'ical-generator';
 import { getVtimezoneComponent } from '@touch4it/ical-timezones';
 import { DateTime } from 'luxon';
 
@@ -15,6 +15,8 @@ export type BookingIcsInput = {
   location: string;
   description: string;
   organizer: { name: string; email: string };
+  /** The homeowner; RFC 5546 (3.2.2) names the attendees of a REQUEST. No reply is asked for: the e-mail's link is the way to answer. */
+  attendee: { name: string; email: string };
   stamp: Date;
 };
 
@@ -44,6 +46,7 @@ export function bookingIcs(input: BookingIcsInput): string {
     location: input.location,
     description: input.description,
     organizer: input.organizer,
+    attendees: [{ ...input.attendee, role: ICalAttendeeRole.REQ, status: ICalAttendeeStatus.ACCEPTED, rsvp: false }],
     status: input.method === 'CANCEL' ? ICalEventStatus.CANCELLED : ICalEventStatus.CONFIRMED,
   });
   return cal.toString();

@@ -78,6 +78,7 @@ export async function queueBookingNotice(
     location: address,
     description: `${c.companyName} looks after ${what}. Call ${c.companyPhone} about this visit.`,
     organizer: { name: c.companyName, email: addressOf(deps.config.MAIL_FROM) },
+    attendee: { name: c.customerName, email: c.email! },
     stamp: new Date(),
   });
   const mailId = await deps.mail.enqueue(
