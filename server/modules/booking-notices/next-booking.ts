@@ -4,7 +4,8 @@ import { bookingAppliances, bookings, companies, users } from '../../db/schema/i
 import { localDateTimeOf } from '../../../shared/dates';
 import type { NextBookingDto } from '../../../shared/schemas/booking-notices';
 
-const firstName = (name: string) => name.trim().split(/\s+/)[0] || name;
+/** The homeowner is told who knocks, not more. */
+export const firstName = (name: string) => name.trim().split(/\s+/)[0] || name;
 
 /** A booking as the homeowner reads it: the date and window on the company's clocks, the technician's first name only. */
 export function homeownerBooking(b: { startsAt: Date; endsAt: Date; status: string }, technicianName: string, timeZone: string): NextBookingDto {

@@ -9,11 +9,11 @@ import { bookingIcs } from './booking-ics';
 import { bookingNoticeHtml, bookingNoticeSubject, bookingNoticeText } from './booking-notice-mail';
 import { bookingNoticesRepository as repo } from './booking-notices.repository';
 import { bookingReplyToken } from './booking-reply-token';
+import { firstName } from './next-booking';
 
 export type NoticeDeps = { mail: Pick<MailQueue, 'enqueue'>; config: Pick<AppConfig, 'BASE_URL' | 'BETTER_AUTH_SECRET' | 'MAIL_FROM'> };
 export type QueuedNotice = { outcome: BookingNoticeOutcome; mailId: string | null } | null;
 
-const firstName = (name: string) => name.trim().split(/\s+/)[0] || name;
 const addressOf = (mailFrom: string) => mailFrom.match(/<([^>]+)>/)?.[1] ?? mailFrom.trim();
 const joinWords = (words: string[]) => (words.length <= 1 ? words.join('') : `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`);
 
