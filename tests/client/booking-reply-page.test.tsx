@@ -47,6 +47,7 @@ describe('the “this time does not suit me” page', () => {
     // Source: 15 U.S.C. 260a: New York is on standard time (UTC−5) in late November, so 14:00Z reads 9:00 AM.
     expect(await screen.findByText('Tuesday, November 24, 2026, 9:00 AM to 11:00 AM')).toBeTruthy();
     expect(screen.getByText(/Rowan from Wrenfield/)).toBeTruthy();
+    expect(document.title).toBe('Your booked visit · Lifeplate');
 
     fireEvent.submit(screen.getByRole('button', { name: 'Send to the office' }).closest('form')!);
     expect(await screen.findByText(/Tell us why the time does not suit you/)).toBeTruthy();

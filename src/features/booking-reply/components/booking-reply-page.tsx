@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { LogoMark } from '@/components/ui/logo-mark';
 import { Notice } from '@/components/ui/notice';
-import { Spinner } from '@/components/ui/page';
+import { Spinner, useDocumentTitle } from '@/components/ui/page';
 import { TextAreaField, TextField } from '@/components/ui/field';
 import { describeFailure } from '@/lib/form-errors';
 import type { FieldErrors } from '@/lib/api-client';
@@ -84,6 +84,7 @@ export function BookingReplyPage() {
   const { token = '' } = useParams();
   const page = useBookingReply(token);
   const b = page.data?.booking;
+  useDocumentTitle('Your booked visit');
   return (
     <div className="min-h-screen">
       <header className="bg-header text-header-text">
