@@ -8,6 +8,9 @@ import { parseConfig } from '../server/config';
 import { runMigrations } from '../server/db/migrate';
 import { createDb } from '../server/db/client';
 import { seedDemo } from '../server/db/seed/seed-demo';
+import { queueDemoBookingConfirmations } from '../server/db/seed/demo-booking-confirmations';
+import { createMailer } from '../server/lib/mailer';
+import { createMailQueue } from '../server/modules/mail/mail-queue';
 import { DEMO_MEMBERS, DEMO_HOMEOWNER, DEMO_PASSWORD } from '../server/db/seed/demo-accounts';
 import { buildClientIfStale } from './lib/client-build';
 import { startLocalServices } from './lib/local-services';
@@ -68,8 +71,15 @@ async function main() {
     await runMigrations(config.DATABASE_URL);
     const { db, pool } = createDb(config.DATABASE_URL, { max: 2 });
     const { seeded } = await seedDemo(db);
-    await pool.end();
     log(seeded ? 'Seeded the demo scenario.' : 'Demo data already present.');
+    // The homeowners' confirmations of the seeded bookings, once: sent now to the mail fake, else by the app's mail job.
+    const mailer = createMailer(config);
+    const mail = createMailQueue({ db, mailer, secret: config.BETTER_AUTH_SECRET, logger: { warn: (_obj: unknown, msg?: string) => log(msg ?? 'mail warning') } });
+    const confirmations = await queueDemoBookingConfirmations(db, { mail, config });
+    for (const id of confirmations) await mail.deliver(id);
+    mailer.close();
+    if (confirmations.length) log(`Queued ${confirmations.length} booking confirmations for the demo homeowners (see /outbox).`);
+    await pool.end();
 
     if (!dev) await buildClientIfStale(CLIENT_DIST);
     // A child process, so a crash of the app leaves this one to say so and start it again.

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { Router } from 'express';
 import { bookingRoutes } from './modules/bookings/bookings.routes';
+import { bookingReplyRoutes } from './modules/booking-notices/booking-reply.routes';
 import compression from 'compression';
 import { toNodeHandler } from 'better-auth/node';
 import type { ViteDevServer } from 'vite';
@@ -101,6 +102,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(serviceRequestRoutes(ctx));
   api.use(importRoutes(ctx));
   api.use(bookingRoutes(ctx));
+  api.use(bookingReplyRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -10,6 +10,8 @@ const CAPABILITY_PATHS: [RegExp, string][] = [
   [/^\/api\/share\/[^/]+/i, '/api/share/[token]'],
   [/^\/unsubscribe\/[^/]+/i, '/unsubscribe/[token]'],
   [/^\/api\/unsubscribe\/[^/]+/i, '/api/unsubscribe/[token]'],
+  [/^\/booking-reply\/[^/]+/i, '/booking-reply/[token]'],
+  [/^\/api\/booking-reply\/[^/]+/i, '/api/booking-reply/[token]'],
   [/^\/welcome\/[^/]+/i, '/welcome/[invitation]'],
   [/^\/api\/invitations\/[^/]+/i, '/api/invitations/[invitation]'],
   [/^\/api\/auth\/reset-password\/[^/]+/i, '/api/auth/reset-password/[token]'],

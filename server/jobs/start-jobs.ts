@@ -4,6 +4,7 @@ import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE, photoSweepJob } from './photo-swee
 import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
 import { MAIL_CRON, MAIL_QUEUE, mailJob } from './mail-job';
 import { IMPORT_CRON, IMPORT_QUEUE, importJob } from './import-job';
+import { BOOKING_REMINDERS_CRON, BOOKING_REMINDERS_QUEUE, bookingRemindersJob } from './booking-reminders-job';
 
 export const JOBS_SCHEMA = 'pgboss';
 
@@ -17,6 +18,13 @@ type Job = {
 const JOBS: Job[] = [
   // A retry is safe: the unique key keeps a reminder from being recorded (and so sent) twice.
   { queue: REMINDERS_QUEUE, cron: REMINDERS_CRON, options: { expireInSeconds: 4 * 3600, retryLimit: 2, retryDelay: 600 }, run: remindersJob },
+  // The same guard: booking_notices' key (booking, kind, revision) keeps a retried run from sending a reminder twice.
+  {
+    queue: BOOKING_REMINDERS_QUEUE,
+    cron: BOOKING_REMINDERS_CRON,
+    options: { expireInSeconds: 3600, retryLimit: 2, retryDelay: 600 },
+    run: bookingRemindersJob,
+  },
   // Each message keeps its own tries and backoff in outgoing_mail; this retries a run that failed as a whole (database away).
   { queue: MAIL_QUEUE, cron: MAIL_CRON, options: { expireInSeconds: 15 * 60, retryLimit: 3, retryDelay: 30, retryBackoff: true }, run: mailJob },
   // Each import claims itself by status, so a run that overlaps another finds nothing to claim.

@@ -10,6 +10,7 @@ export const ROBOTS_TXT = [
   'Disallow: /t/',
   'Disallow: /my/',
   'Disallow: /unsubscribe/',
+  'Disallow: /booking-reply/',
   'Disallow: /welcome/',
   'Disallow: /api/',
   '',

@@ -22,6 +22,12 @@ export const CLIENT_ROUTES: readonly ClientRoute[] = [
     pattern: /^\/unsubscribe\/([^/]+)\/?$/,
     modules: ['src/features/reminders/components/unsubscribe-page.tsx'],
   },
+  {
+    name: 'booking-reply',
+    path: '/booking-reply/:token',
+    pattern: /^\/booking-reply\/([^/]+)\/?$/,
+    modules: ['src/features/booking-reply/components/booking-reply-page.tsx'],
+  },
   { name: 'tag', path: '/t/:code', pattern: /^\/t\/([^/]+)\/?$/, modules: ['src/features/tags/components/tag-landing-page.tsx'] },
   {
     name: 'welcome',

@@ -47,6 +47,13 @@ export function serveClient(ctx: AppContext, clientDir: string) {
     res.type('html').send(render(matchClientRoute(req.path)?.route ?? null, preloadScriptTag(queries), rootMarkup));
   };
 
+  // The "this time does not suit me" page of a booking e-mail: a capability page like the share page.
+  router.get('/booking-reply/:token', (req, res) => {
+    res.setHeader('X-Robots-Tag', 'noindex, nofollow');
+    res.setHeader('Cache-Control', 'private, no-store');
+    sendHtml(req, res);
+  });
+
   router.get('/s/:token', async (req, res) => {
     // A capability page: never indexed, never stored by anyone but the holder's browser.
     res.setHeader('X-Robots-Tag', 'noindex, nofollow');

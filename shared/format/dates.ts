@@ -36,6 +36,14 @@ export function formatInstant(iso: string | Date, timeZone: string, locale = COM
   return f.format(typeof iso === 'string' ? new Date(iso) : iso);
 }
 
+/** "Tuesday, November 24, 2026, 9:00 AM to 11:00 AM": a booked window, read on the company's clocks. */
+export function formatVisitWindow(startsAt: string | Date, endsAt: string | Date, timeZone: string, locale = COMPANY_LOCALE): string {
+  const day = format(locale, { weekday: 'long', year: 'numeric', month: 'long', day: 'numeric', timeZone });
+  const time = format(locale, { hour: 'numeric', minute: '2-digit', timeZone });
+  const [start, end] = [startsAt, endsAt].map((d) => (typeof d === 'string' ? new Date(d) : d));
+  return `${day.format(start)}, ${time.format(start)} to ${time.format(end)}`;
+}
+
 /** Whole days from `today` to `isoDate` (both yyyy-mm-dd): positive in the future. */
 export const daysFromToday = (isoDate: string, today: string) => dayNumber(isoDate) - dayNumber(today);
 

@@ -2,7 +2,7 @@
  * E-mail goes out through a durable queue (the outgoing_mail table): tried at once, and retried with backoff by a
  * scheduled job while the mail server is away. Screens show `queued` until the server has taken the message.
  */
-export const MAIL_KINDS = ['invitation', 'sign_in', 'service_request', 'visit_report'] as const;
+export const MAIL_KINDS = ['invitation', 'sign_in', 'service_request', 'visit_report', 'booking_notice'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
 /** `sending` is a claimed try in progress; `cancelled` is a message a newer one replaced (a fresh invitation link). */

@@ -52,4 +52,6 @@ export const unsubscribeParams = z.object({ token: storableText().min(1).max(200
 export type UnsubscribeStatusDto = { companyName: string; companyPhone: string; optedOut: boolean };
 
 export const outboxQuery = z.object({ limit: z.coerce.number().int().min(1).max(200).default(50) });
-export type OutboxMessageDto = { id: string; to: string[]; subject: string; date: string; text: string; html: string | null };
+/** A file sent with a message; `text` holds a calendar invitation's own text (text/calendar), so it can be read here. */
+export type OutboxAttachmentDto = { filename: string; contentType: string; size: number; text: string | null };
+export type OutboxMessageDto = { id: string; to: string[]; subject: string; date: string; text: string; html: string | null; attachments: OutboxAttachmentDto[] };

@@ -13,7 +13,7 @@ import { z } from 'zod';
 import { optionalText, storableText } from './common';
 import { CONTACT_NEEDED_MESSAGE, NAME_NEEDED_MESSAGE, SERVICE_REQUEST_LIMITS as MAX } from './service-request-limits';
 
-export const SERVICE_REQUEST_VIAS = ['share_link', 'homeowner_account'] as const;
+export const SERVICE_REQUEST_VIAS = ['share_link', 'homeowner_account', 'booking_reply'] as const;
 export type ServiceRequestVia = (typeof SERVICE_REQUEST_VIAS)[number];
 export const SERVICE_REQUEST_STATUSES = ['new', 'scheduled', 'closed'] as const;
 export type ServiceRequestStatus = (typeof SERVICE_REQUEST_STATUSES)[number];

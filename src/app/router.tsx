@@ -59,6 +59,14 @@ export function appRoutes(): RouteObject[] {
         return { element: <UnsubscribePage /> };
       },
     },
+    // From a booking e-mail: "this time does not suit me", no sign-in, outside the shell, its own small chunk.
+    {
+      path: '/booking-reply/:token',
+      lazy: async () => {
+        const { BookingReplyPage } = await import('@/features/booking-reply/components/booking-reply-page');
+        return { element: <BookingReplyPage /> };
+      },
+    },
     // Opened by anyone who scans a tag, signed in or not: the page itself decides what each person sees.
     {
       path: '/t/:code',

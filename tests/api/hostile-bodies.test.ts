@@ -19,6 +19,7 @@ import { routeTable, type RouteEntry } from '../../server/lib/route';
 import { MULTIPART_BODY } from '../../server/middleware/body-type';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { insertBooking } from '../../server/db/factories/bookings';
+import { bookingReplyToken } from '../../server/modules/booking-notices/booking-reply-token';
 import { testConfig } from '../support/context';
 import { createOwnDatabase } from '../support/own-database';
 import { installWriteCounter } from '../support/write-counter';
@@ -87,6 +88,15 @@ beforeAll(async () => {
     start: `${ahead}T08:00`,
     end: `${ahead}T09:00`,
   });
+  // A booking of its own for the homeowner's reply, so the cancel route's fuzzing does not close it.
+  const replyBooking = await insertBooking(ctx.db, {
+    companyId: t.company.id,
+    siteId: site.id,
+    technicianId: t.owner.user.id,
+    applianceIds: [boiler.id],
+    start: `${ahead}T13:00`,
+    end: `${ahead}T14:00`,
+  });
   const photo = await ok(
     as.owner.post('/api/photos').field('applianceId', boiler.id).field('kind', 'nameplate').attach('files', jpeg, { filename: 'p.jpg', contentType: 'image/jpeg' }),
     'upload a photo',
@@ -144,6 +154,7 @@ beforeAll(async () => {
     'post /bookings/:id/move': `/bookings/${booking.id}/move`,
     'post /bookings/:id/cancel': `/bookings/${booking.id}/cancel`,
     'post /bookings/:id/no-access': `/bookings/${booking.id}/no-access`,
+    'post /booking-reply/:token': `/booking-reply/${bookingReplyToken(ctx.config.BETTER_AUTH_SECRET, replyBooking.id)}`,
   };
   // One valid body per route: the mutations below break it one piece at a time.
   samples = {
@@ -205,6 +216,7 @@ beforeAll(async () => {
     'post /bookings/:id/move': { start: `${ahead}T08:00`, end: `${ahead}T09:30`, note: 'Ring twice' },
     'post /bookings/:id/cancel': { reason: 'Customer away' },
     'post /bookings/:id/no-access': { reason: 'Nobody home' },
+    'post /booking-reply/:token': { contactName: 'Ada Fenwick', contactPhone: '555-0142', reason: 'At work that morning', preferredTimes: 'Weekday afternoons' },
   };
 }, 120_000);
 

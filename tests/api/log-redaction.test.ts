@@ -11,6 +11,8 @@ import { redactUrl } from '../../server/log-redaction';
 import { users } from '../../server/db/schema/index';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { unsubscribeToken } from '../../server/modules/reminders/unsubscribe-token';
+import { bookingReplyToken } from '../../server/modules/booking-notices/booking-reply-token';
+import { insertBooking } from '../../server/db/factories/bookings';
 import { testConfig } from '../support/context';
 import { eventually, parsedMailTo, uniqueEmail } from '../support/outbox';
 import { agentsFor, createTenant, type Tenant } from '../support/tenant';
@@ -50,6 +52,11 @@ describe('request logs', () => {
     expect((await request(app).get(`/api/unsubscribe/${unsubscribe}`)).status).toBe(200);
     await request(app).get(`/unsubscribe/${unsubscribe}`);
 
+    const booking = await insertBooking(ctx.db, { companyId: t.company.id, siteId: site.id, technicianId: t.technician.user.id, applianceIds: [boiler.id] });
+    const reply = bookingReplyToken(ctx.config.BETTER_AUTH_SECRET, booking.id);
+    expect((await request(app).get(`/api/booking-reply/${reply}`)).status).toBe(200);
+    await request(app).get(`/booking-reply/${reply}`);
+
     const invitee = uniqueEmail();
     const invited = await as.manager.post('/api/team/invitations').send({ email: invitee, role: 'technician' });
     expect(invited.status).toBe(201);
@@ -61,8 +68,9 @@ describe('request logs', () => {
     expect(opened.status).toBe(302);
     expect((await agent.get(`/api/invitations/${invited.body.id}`)).status).toBe(200);
 
-    for (const secret of [shareToken, unsubscribe, magicToken, invited.body.id]) expect(log()).not.toContain(secret);
-    for (const shown of ['/api/share/[token]', '/s/[token]', '/api/unsubscribe/[token]', '/unsubscribe/[token]', 'token=[token]', '/api/invitations/[invitation]']) {
+    for (const secret of [shareToken, unsubscribe, reply.split('.')[1], magicToken, invited.body.id]) expect(log()).not.toContain(secret);
+    const shownPaths = ['/api/share/[token]', '/s/[token]', '/api/unsubscribe/[token]', '/unsubscribe/[token]', '/api/booking-reply/[token]', '/booking-reply/[token]'];
+    for (const shown of [...shownPaths, 'token=[token]', '/api/invitations/[invitation]']) {
       expect(log()).toContain(shown);
     }
     // The redirect's Location and the callback in the link's URL name the welcome page, not the invitation.

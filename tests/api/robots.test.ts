@@ -33,7 +33,7 @@ describe('GET /robots.txt', () => {
     const rules = parseRobots(res.text);
     expect(rules[0]).toEqual({ field: 'user-agent', value: '*' });
     const disallowed = rules.filter((r) => r.field === 'disallow').map((r) => r.value);
-    expect(disallowed).toEqual(expect.arrayContaining(['/s/', '/t/', '/my/', '/unsubscribe/', '/api/']));
+    expect(disallowed).toEqual(expect.arrayContaining(['/s/', '/t/', '/my/', '/unsubscribe/', '/booking-reply/', '/api/']));
     expect(rules.every((r) => ['user-agent', 'disallow'].includes(r.field))).toBe(true);
   });
 
@@ -41,5 +41,13 @@ describe('GET /robots.txt', () => {
     const res = await request(app).get('/due');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/html/);
+  });
+
+  it('serves a booking e-mail’s reply page unindexed and unstored, like the share page', async () => {
+    const res = await request(app).get(`/booking-reply/${crypto.randomUUID()}.abc`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/^text\/html/);
+    expect(res.headers['x-robots-tag']).toBe('noindex, nofollow');
+    expect(res.headers['cache-control']).toBe('private, no-store');
   });
 });

@@ -17,6 +17,8 @@ const PUBLIC = new Set([
   'get /share/:token/life-record.pdf',
   'get /unsubscribe/:token',
   'post /unsubscribe/:token',
+  'get /booking-reply/:token',
+  'post /booking-reply/:token',
 ]);
 
 describe('deny by default', () => {

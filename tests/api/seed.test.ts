@@ -14,6 +14,11 @@ import {
   visits,
 } from '../../server/db/schema/index';
 import { seedDemo } from '../../server/db/seed/seed-demo';
+import { queueDemoBookingConfirmations } from '../../server/db/seed/demo-booking-confirmations';
+import { bookingNotices, bookings, outgoingMail } from '../../server/db/schema/index';
+import { open } from '../../server/lib/sealed-box';
+import type { Mail } from '../../server/lib/mailer';
+import { MAIL_SEAL_PURPOSE } from '../../server/modules/mail/mail-queue';
 import { serviceLifeService } from '../../server/modules/service-life/service-life.service';
 import { DEMO_COMPANY, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
 import { todayInTimeZone } from '../../shared/dates';
@@ -227,5 +232,29 @@ describe('demo seed', () => {
     expect(refused).toEqual([]);
     expect(rows.every(({ visit }) => visit.status === 'completed')).toBe(true);
     expect(rows.some(({ visit }) => visit.requiredReadings.includes('combustion'))).toBe(true);
+  });
+  it('queues the homeowners’ confirmations of the seeded future bookings once, each with its calendar invitation', async () => {
+    const [demo] = await ctx.db.select().from(companies).where(eq(companies.name, DEMO_COMPANY.name));
+    const ahead = await ctx.db
+      .select({ id: bookings.id })
+      .from(bookings)
+      .where(and(eq(bookings.companyId, demo.id), inArray(bookings.status, ['booked', 'confirmed']), sql`${bookings.startsAt} >= ${SEEDED_AT.toISOString()}::timestamptz`));
+    expect(ahead.length).toBeGreaterThan(10);
+    const deps = { mail: ctx.mail, config: ctx.config };
+    const mailIds = await queueDemoBookingConfirmations(ctx.db, deps, { now: SEEDED_AT });
+    expect(mailIds.length).toBeGreaterThan(0);
+    const notices = await ctx.db.select().from(bookingNotices).where(eq(bookingNotices.companyId, demo.id));
+    expect(notices.map((n) => n.bookingId).sort()).toEqual(ahead.map((b) => b.id).sort());
+    expect(new Set(notices.map((n) => n.kind))).toEqual(new Set(['booked']));
+    // A restart finds every booking announced and queues nothing more.
+    expect(await queueDemoBookingConfirmations(ctx.db, deps, { now: SEEDED_AT })).toEqual([]);
+    expect(await ctx.db.select().from(bookingNotices).where(eq(bookingNotices.companyId, demo.id))).toHaveLength(notices.length);
+    const [row] = await ctx.db.select().from(outgoingMail).where(eq(outgoingMail.id, mailIds[0]));
+    expect(row).toMatchObject({ kind: 'booking_notice', companyId: demo.id, status: 'queued' });
+    const mail = JSON.parse(open(ctx.config.BETTER_AUTH_SECRET, MAIL_SEAL_PURPOSE, row.sealed!)) as Mail;
+    expect(mail.headers?.['X-Lifeplate-Company']).toBe(demo.id);
+    const ics = Buffer.from(mail.attachments![0].content, 'base64').toString('utf8');
+    expect(ics).toContain('METHOD:REQUEST');
+    expect(ics).toContain('DTSTART;TZID=America/New_York:');
   });
 });

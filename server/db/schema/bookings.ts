@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { check, index, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { check, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { BOOKING_SOURCES, BOOKING_STATUSES } from '../../../shared/schemas/bookings';
 import { users } from './auth';
 import { createdAt, createdBy, id, updatedAt, updatedBy } from './columns';
@@ -38,6 +38,8 @@ export const bookings = pgTable(
     statusReason: text('status_reason'),
     /** Bumped on every change; the day-before reminder and the change e-mails are keyed by it. */
     revision: text('revision').notNull().default(sql`gen_random_uuid()::text`),
+    /** Counts the changes (0 when booked, +1 with every change): the calendar invitation's SEQUENCE (RFC 5545, 3.8.7.4). */
+    sequence: integer('sequence').notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),

@@ -1,9 +1,10 @@
-import { index, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, pgEnum, pgTable, text, timestamp, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import { SERVICE_REQUEST_STATUSES, SERVICE_REQUEST_VIAS } from '../../../shared/schemas/service-requests';
 import { users } from './auth';
 import { companies } from './companies';
 import { appliances, customers } from './records';
 import { shareLinks } from './share-links';
+import { bookings } from './bookings';
 import { createdAt, id, updatedAt } from './columns';
 
 export const serviceRequestVia = pgEnum('service_request_via', SERVICE_REQUEST_VIAS);
@@ -24,6 +25,8 @@ export const serviceRequests = pgTable(
     via: serviceRequestVia('via').notNull(),
     shareLinkId: uuid('share_link_id').references(() => shareLinks.id, { onDelete: 'set null' }),
     requesterUserId: uuid('requester_user_id').references(() => users.id, { onDelete: 'set null' }),
+    /** The booked visit a homeowner answered "this time does not suit me" to (via booking_reply). */
+    aboutBookingId: uuid('about_booking_id').references((): AnyPgColumn => bookings.id, { onDelete: 'set null' }),
     contactName: text('contact_name').notNull(),
     contactPhone: text('contact_phone'),
     contactEmail: text('contact_email'),

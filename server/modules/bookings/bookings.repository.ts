@@ -50,7 +50,7 @@ export const bookingsRepository = {
   async update(db: DbOrTx, companyId: string, id: string, patch: Partial<typeof bookings.$inferInsert>) {
     const [row] = await db
       .update(bookings)
-      .set({ ...patch, revision: sql`gen_random_uuid()::text` })
+      .set({ ...patch, revision: sql`gen_random_uuid()::text`, sequence: sql`${bookings.sequence} + 1` })
       .where(and(eq(bookings.companyId, companyId), eq(bookings.id, id)))
       .returning();
     return row;

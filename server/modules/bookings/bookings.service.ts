@@ -20,6 +20,7 @@ import { appendTimelineEvent } from '../timeline/timeline.repository';
 import { bookingDtos, loadList } from './booking-dto';
 import { bookingsRepository as repo, type BookingRow } from './bookings.repository';
 import { isExclusionViolation } from './pg-error';
+import { queueBookingNotice, type QueuedNotice } from '../booking-notices/queue-booking-notice';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 const DAY_MS = 86_400_000;
@@ -118,6 +119,16 @@ export function bookingsService(ctx: AppContext) {
     });
   }
 
+  /** The homeowner's e-mail is tried once the booking change has committed; the mail-delivery job retries it. */
+  async function deliverNotice(notice: QueuedNotice) {
+    if (!notice?.mailId) return;
+    try {
+      await ctx.mail.deliver(notice.mailId);
+    } catch (err) {
+      ctx.logger.warn({ err, mailId: notice.mailId }, 'the booking e-mail stays queued');
+    }
+  }
+
   async function findLive(tx: Tx, actor: Member, id: string, verb: string) {
     const booking = await repo.find(tx, actor.companyId, id, { lock: true });
     if (!booking) throw notFound('Booking');
@@ -164,9 +175,10 @@ export function bookingsService(ctx: AppContext) {
           input.applianceIds,
         );
         await recordChange(tx, actor, booking, 'booked', timeZone, { source: booking.source });
-        return booking;
+        return { booking, notice: await queueBookingNotice(ctx, tx, booking.id, 'booked') };
       });
-      return one(ctx.db, actor.companyId, row);
+      await deliverNotice(row.notice);
+      return one(ctx.db, actor.companyId, row.booking);
     },
 
     async get(actor: Member, id: string): Promise<BookingDto> {
@@ -194,9 +206,10 @@ export function bookingsService(ctx: AppContext) {
         await recordChange(tx, actor, moved, 'moved', timeZone, {
           from: { startsAt: before.startsAt.toISOString(), endsAt: before.endsAt.toISOString(), technicianId: before.technicianId },
         });
-        return moved;
+        return { moved, notice: await queueBookingNotice(ctx, tx, id, 'moved', { before }) };
       });
-      return one(ctx.db, actor.companyId, row);
+      await deliverNotice(row.notice);
+      return one(ctx.db, actor.companyId, row.moved);
     },
 
     async confirm(actor: Member, id: string): Promise<BookingDto> {
@@ -219,9 +232,11 @@ export function bookingsService(ctx: AppContext) {
           throw forbidden('Only the booked technician or the office can record no access.');
         const row = await repo.update(tx, actor.companyId, id, { status, statusReason: reason, updatedBy: actor.userId });
         await recordChange(tx, actor, row, status, timeZone, { reason });
-        return row;
+        // No access is the technician's record of a visit that happened; only a cancellation owes the homeowner an e-mail.
+        return { row, notice: status === 'cancelled' ? await queueBookingNotice(ctx, tx, id, 'cancelled') : null };
       });
-      return one(ctx.db, actor.companyId, row);
+      await deliverNotice(row.notice);
+      return one(ctx.db, actor.companyId, row.row);
     },
 
     async list(actor: Member, q: { from: string; to: string; technicianId?: string }): Promise<BookingListDto> {

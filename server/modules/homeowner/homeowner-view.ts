@@ -6,6 +6,7 @@ import { loadApplianceRecord } from '../appliances/appliance-record';
 import { typeLabelFor } from '../due/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
+import { nextBookingOf } from '../booking-notices/next-booking';
 
 const MEANING = {
   replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
@@ -18,10 +19,11 @@ const MEANING = {
  */
 export async function buildHomeownerView(db: DbOrTx, companyId: string, applianceId: string): Promise<HomeownerViewDto> {
   const record = await loadApplianceRecord(db, companyId, applianceId);
-  const [company, visitRows, photoRows] = await Promise.all([
+  const [company, visitRows, photoRows, nextBooking] = await Promise.all([
     repo.company(db, companyId),
     repo.completedVisits(db, companyId, applianceId),
     repo.visiblePhotos(db, companyId, applianceId),
+    nextBookingOf(db, companyId, applianceId),
   ]);
   const swaps = await repo.swapsFor(
     db,
@@ -44,6 +46,7 @@ export async function buildHomeownerView(db: DbOrTx, companyId: string, applianc
       fuel: a.fuel,
     },
     unsafe: record.unsafe && { visitedOn: record.unsafe.visitedOn, reason: record.unsafe.reason },
+    nextBooking,
     nextAnnualServiceDue: lastAnnual ? addMonths(lastAnnual.visitedOn, 12) : null,
     comingDue: record.due
       .filter((d) => d.status !== 'ok')

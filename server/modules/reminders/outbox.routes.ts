@@ -36,6 +36,12 @@ export function outboxRoutes(ctx: AppContext) {
           date: (parsed.date ?? new Date(m.receivedAt)).toISOString(),
           text: parsed.text ?? '',
           html: typeof parsed.html === 'string' ? parsed.html : null,
+          attachments: parsed.attachments.map((a) => ({
+            filename: a.filename ?? 'attachment',
+            contentType: a.contentType,
+            size: a.size,
+            text: a.contentType === 'text/calendar' ? a.content.toString('utf8') : null,
+          })),
         };
       }),
     );

@@ -25,6 +25,7 @@ export type ApplianceForMail = {
 const VIA_WORDS: Record<ServiceRequestVia, string> = {
   share_link: 'the share link for this appliance (no sign-in)',
   homeowner_account: 'the homeowner’s own sign-in',
+  booking_reply: 'the “this time does not suit me” link in a booking e-mail',
 };
 
 const escapeHtml = (s: string) =>

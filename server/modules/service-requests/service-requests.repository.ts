@@ -47,8 +47,13 @@ export const serviceRequestsRepository = {
   async lockFor(db: DbOrTx, key: string) {
     await db.execute(sql`select pg_advisory_xact_lock(hashtextextended(${`service-request:${key}`}, 0))`);
   },
-  async countSince(db: DbOrTx, by: { shareLinkId: string } | { requesterUserId: string }, since: Date) {
-    const who = 'shareLinkId' in by ? eq(serviceRequests.shareLinkId, by.shareLinkId) : eq(serviceRequests.requesterUserId, by.requesterUserId);
+  async countSince(db: DbOrTx, by: { shareLinkId: string } | { requesterUserId: string } | { aboutBookingId: string }, since: Date) {
+    const who =
+      'shareLinkId' in by
+        ? eq(serviceRequests.shareLinkId, by.shareLinkId)
+        : 'requesterUserId' in by
+          ? eq(serviceRequests.requesterUserId, by.requesterUserId)
+          : eq(serviceRequests.aboutBookingId, by.aboutBookingId);
     const [row] = await db.select({ n: count() }).from(serviceRequests).where(and(who, gte(serviceRequests.createdAt, since)));
     return row?.n ?? 0;
   },

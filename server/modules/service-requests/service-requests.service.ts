@@ -19,12 +19,23 @@ import { serviceRequestsRepository as repo } from './service-requests.repository
 type Source = { companyId: string; applianceId: string } & (
   | { via: Extract<ServiceRequestVia, 'share_link'>; shareLinkId: string }
   | { via: Extract<ServiceRequestVia, 'homeowner_account'>; requesterUserId: string }
+  | { via: Extract<ServiceRequestVia, 'booking_reply'>; bookingId: string }
 );
 type Input = { contactName: string; contactPhone?: string | null; contactEmail?: string | null; preferredTimes?: string | null; message?: string | null };
 type Member = { companyId: string; userId: string };
 
 const DAY_MS = 86_400_000;
-const VIA_SUMMARY: Record<ServiceRequestVia, string> = { share_link: 'through the share link', homeowner_account: 'from their sign-in' };
+const VIA_SUMMARY: Record<ServiceRequestVia, string> = {
+  share_link: 'through the share link',
+  homeowner_account: 'from their sign-in',
+  booking_reply: 'about a booked time that does not suit them',
+};
+const whoOf = (source: Source) =>
+  source.via === 'share_link'
+    ? { shareLinkId: source.shareLinkId }
+    : source.via === 'homeowner_account'
+      ? { requesterUserId: source.requesterUserId }
+      : { aboutBookingId: source.bookingId };
 
 export function serviceRequestsService(ctx: AppContext) {
   /** Written in the request's own transaction, so a request is never stored without its e-mail to the office. */
@@ -54,7 +65,7 @@ export function serviceRequestsService(ctx: AppContext) {
       const { row, mailId } = await ctx.db.transaction(async (tx) => {
         const appliance = await repo.applianceContext(tx, source.companyId, source.applianceId);
         if (!appliance) throw notFound('Appliance');
-        const who = source.via === 'share_link' ? { shareLinkId: source.shareLinkId } : { requesterUserId: source.requesterUserId };
+        const who = whoOf(source);
         await repo.lockFor(tx, Object.values(who)[0]);
         if ((await repo.countSince(tx, who, new Date(Date.now() - DAY_MS))) >= SHARE_LINK_REQUESTS_PER_DAY) {
           throw new HttpError(
@@ -70,6 +81,7 @@ export function serviceRequestsService(ctx: AppContext) {
           customerId: appliance.customerId,
           via: source.via,
           shareLinkId: source.via === 'share_link' ? source.shareLinkId : null,
+          aboutBookingId: source.via === 'booking_reply' ? source.bookingId : null,
           requesterUserId: actorId,
           contactName: input.contactName,
           contactPhone: input.contactPhone ?? null,

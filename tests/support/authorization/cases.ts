@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import type { AppContext } from '../../../server/context';
 import { insertBooking } from '../../../server/db/factories/bookings';
+import { bookingReplyToken } from '../../../server/modules/booking-notices/booking-reply-token';
 import { completeVisitBody } from '../../../bench/lib/complete-visit-body';
 import { draftVisit, memberInvitation, newAppliance, ok, shareLinkOn, spareTechnician, uniqueJpeg, type World } from './world';
 
@@ -60,6 +61,12 @@ async function freshBooking(ctx: AppContext, w: World) {
     end,
   });
   return { bookingId: booking.id };
+}
+/** The signed link of a booking e-mail, for a fresh booking in the caller's own company; a forged one for a caller who holds none. */
+async function bookingReplyLink(ctx: AppContext, own: World | null) {
+  if (!own) return { token: `${crypto.randomUUID()}.${randomShareToken()}` };
+  const { bookingId } = await freshBooking(ctx, own);
+  return { token: bookingReplyToken(ctx.config.BETTER_AUTH_SECRET, bookingId) };
 }
 const uniqueEmail = (what: string) => `${what}-${crypto.randomUUID()}@example.test`;
 
@@ -267,6 +274,16 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   'get /unsubscribe/:token': { params: (c) => ({ token: c.own?.unsubscribeToken ?? `${crypto.randomUUID()}.${randomShareToken()}` }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
   'post /unsubscribe/:token': { params: (c) => ({ token: c.own?.unsubscribeToken ?? `${crypto.randomUUID()}.${randomShareToken()}` }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
   'get /dev/outbox': { status: 200 },
+  // The signed link in a booking e-mail is the key, as with share links; a fresh booking per cell keeps the daily limit out of it.
+  'get /booking-reply/:token': { freshInOwn: bookingReplyLink, params: (c) => ({ token: str(c.fresh.token) }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
+  'post /booking-reply/:token': {
+    freshInOwn: bookingReplyLink,
+    params: (c) => ({ token: str(c.fresh.token) }),
+    body: () => ({ contactName: 'Matrix caller', reason: 'At work then', preferredTimes: 'Weekday afternoons' }),
+    status: 201,
+    as: { signedOut: 404 },
+    crossTenant: 201,
+  },
   // A live link opens its own appliance's homeowner-visible photos; another company's link never opens this one.
   'get /share/:token/photos/:photoId/:variant': {
     params: (c) => ({ token: c.own?.shareToken ?? randomShareToken(), photoId: c.target.photoId, variant: 'thumb' }),

@@ -1,4 +1,4 @@
-import { formatCalendarDate } from '@shared/format/dates';
+import { formatCalendarDate, formatVisitWindow } from '@shared/format/dates';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -37,6 +37,12 @@ export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; sour
         {view.lifeExpectancy && <p className="mt-1 text-sm text-iron-muted">{view.lifeExpectancy}</p>}
       </Card>
       <Card title="What is coming up">
+        {view.nextBooking && (
+          <p className="mb-2" data-testid="next-booking">
+            Your next visit is booked for <strong>{formatVisitWindow(view.nextBooking.startsAt, view.nextBooking.endsAt, view.nextBooking.timeZone)}</strong>
+            {view.nextBooking.status === 'confirmed' ? ' (confirmed)' : ''}. {view.nextBooking.technicianFirstName} will come.
+          </p>
+        )}
         {view.nextAnnualServiceDue && (
           <p className="mb-2">
             Next yearly service due by <strong>{date(view.nextAnnualServiceDue)}</strong>.

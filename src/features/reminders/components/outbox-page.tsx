@@ -31,6 +31,14 @@ export function OutboxPage() {
               <summary className="min-h-tap cursor-pointer font-semibold">Text part</summary>
               <pre className="whitespace-pre-wrap text-sm">{m.text}</pre>
             </details>
+            {m.attachments.map((a) => (
+              <details key={a.filename} className="mt-2">
+                <summary className="min-h-tap cursor-pointer font-semibold">
+                  Attached: {a.filename} ({a.contentType}, {Math.max(1, Math.round(a.size / 1024))} KB)
+                </summary>
+                {a.text !== null && <pre className="whitespace-pre-wrap text-sm">{a.text}</pre>}
+              </details>
+            ))}
             {m.html && (
               <details className="mt-2" open>
                 <summary className="min-h-tap cursor-pointer font-semibold">HTML part</summary>

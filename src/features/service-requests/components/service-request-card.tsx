@@ -32,7 +32,7 @@ export function ServiceRequestCard({
         <StatusBadge status={BADGE[r.status]}>{SERVICE_REQUEST_STATUS_LABELS[r.status]}</StatusBadge>
       </div>
       <p className="text-sm text-iron-muted">
-        {when(r.createdAt)} · {r.via === 'share_link' ? 'through a share link' : 'from the homeowner’s sign-in'}
+        {when(r.createdAt)} · {r.via === 'share_link' ? 'through a share link' : r.via === 'booking_reply' ? 'about a booked time that does not suit them' : 'from the homeowner’s sign-in'}
         {r.customerName ? ` · customer: ${r.customerName}` : ''}
       </p>
       <p>
