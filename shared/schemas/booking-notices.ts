@@ -39,7 +39,7 @@ export const bookingReplyInput = z
 export type BookingReplyInput = z.input<typeof bookingReplyInput>;
 
 /** The visit as the homeowner sees it: the date and window in the company's zone, the technician's first name only. */
-export type NextBookingDto = {
+export type HomeownerBookingDto = {
   date: string;
   /** Wall-clock start and end in the company's zone, like "09:00" and "10:30". */
   from: string;
@@ -53,7 +53,7 @@ export type NextBookingDto = {
 
 export type BookingReplyPageDto = {
   company: { name: string; phone: string };
-  booking: NextBookingDto & { address: string };
+  booking: HomeownerBookingDto & { address: string };
   customerName: string;
 };
 

@@ -213,6 +213,8 @@ export type NextBookingDto = {
   status: BookingStatus;
   start: string;
   end: string;
+  startsAt: string;
+  endsAt: string;
   timeZone: string;
   technician: { id: string; name: string };
   isToday: boolean;

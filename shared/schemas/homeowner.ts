@@ -13,7 +13,7 @@
  */
 import { z } from 'zod';
 import { optionalText, storableText } from './common';
-import type { NextBookingDto } from './booking-notices';
+import type { HomeownerBookingDto } from './booking-notices';
 
 export const shareLinkInput = z.object({
   expiresInDays: z.number('Give a number of days.').int('Whole days.').min(1, 'At least 1 day.').max(1825, 'At most 5 years.').default(365),
@@ -68,7 +68,7 @@ export type HomeownerViewDto = {
   };
   unsafe: { visitedOn: string; reason: string | null } | null;
   /** The next booked or confirmed visit for this appliance, on the company's clocks; null when none is booked. */
-  nextBooking: NextBookingDto | null;
+  nextBooking: HomeownerBookingDto | null;
   nextAnnualServiceDue: string | null;
   comingDue: { part: string; what: 'inspect' | 'replace'; dueOn: string; meaning: string }[];
   lifeExpectancy: string | null;

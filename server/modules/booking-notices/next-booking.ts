@@ -1,14 +1,13 @@
-import { and, asc, eq, gt, inArray } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { bookingAppliances, bookings, companies, users } from '../../db/schema/index';
+import { nextBookingOf } from '../bookings/next-booking';
 import { localDateTimeOf } from '../../../shared/dates';
-import type { NextBookingDto } from '../../../shared/schemas/booking-notices';
+import type { HomeownerBookingDto } from '../../../shared/schemas/booking-notices';
 
 /** The homeowner is told who knocks, not more. */
 export const firstName = (name: string) => name.trim().split(/\s+/)[0] || name;
 
 /** A booking as the homeowner reads it: the date and window on the company's clocks, the technician's first name only. */
-export function homeownerBooking(b: { startsAt: Date; endsAt: Date; status: string }, technicianName: string, timeZone: string): NextBookingDto {
+export function homeownerBooking(b: { startsAt: Date; endsAt: Date; status: string }, technicianName: string, timeZone: string): HomeownerBookingDto {
   const start = localDateTimeOf(timeZone, b.startsAt);
   const end = localDateTimeOf(timeZone, b.endsAt);
   return {
@@ -23,23 +22,8 @@ export function homeownerBooking(b: { startsAt: Date; endsAt: Date; status: stri
   };
 }
 
-/** The next booked or confirmed visit covering this appliance that has not ended yet, or null. */
-export async function nextBookingOf(db: DbOrTx, companyId: string, applianceId: string, now = new Date()): Promise<NextBookingDto | null> {
-  const [row] = await db
-    .select({ startsAt: bookings.startsAt, endsAt: bookings.endsAt, status: bookings.status, technicianName: users.name, timeZone: companies.timeZone })
-    .from(bookingAppliances)
-    .innerJoin(bookings, eq(bookings.id, bookingAppliances.bookingId))
-    .innerJoin(users, eq(users.id, bookings.technicianId))
-    .innerJoin(companies, eq(companies.id, bookings.companyId))
-    .where(
-      and(
-        eq(bookingAppliances.companyId, companyId),
-        eq(bookingAppliances.applianceId, applianceId),
-        inArray(bookings.status, ['booked', 'confirmed']),
-        gt(bookings.endsAt, now),
-      ),
-    )
-    .orderBy(asc(bookings.startsAt))
-    .limit(1);
-  return row ? homeownerBooking(row, row.technicianName, row.timeZone) : null;
+/** The appliance's next booked visit (as its life record shows it), told the homeowner's way. */
+export async function nextHomeownerBookingOf(db: DbOrTx, companyId: string, applianceId: string, now = new Date()): Promise<HomeownerBookingDto | null> {
+  const next = await nextBookingOf(db, companyId, applianceId, now);
+  return next && homeownerBooking({ startsAt: new Date(next.startsAt), endsAt: new Date(next.endsAt), status: next.status }, next.technician.name, next.timeZone);
 }

@@ -40,6 +40,8 @@ export async function nextBookingOf(db: DbOrTx, companyId: string, applianceId: 
     status: row.status,
     start,
     end: localDateTimeOf(row.timeZone, row.endsAt),
+    startsAt: row.startsAt.toISOString(),
+    endsAt: row.endsAt.toISOString(),
     timeZone: row.timeZone,
     technician: { id: row.technicianId, name: row.technicianName },
     isToday: start.slice(0, 10) === todayInTimeZone(row.timeZone, now),

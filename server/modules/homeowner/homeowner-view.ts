@@ -6,7 +6,7 @@ import { loadApplianceRecord } from '../appliances/appliance-record';
 import { typeLabelFor } from '../due/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
-import { nextBookingOf } from '../booking-notices/next-booking';
+import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
 
 const MEANING = {
   replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
@@ -23,7 +23,7 @@ export async function buildHomeownerView(db: DbOrTx, companyId: string, applianc
     repo.company(db, companyId),
     repo.completedVisits(db, companyId, applianceId),
     repo.visiblePhotos(db, companyId, applianceId),
-    nextBookingOf(db, companyId, applianceId),
+    nextHomeownerBookingOf(db, companyId, applianceId),
   ]);
   const swaps = await repo.swapsFor(
     db,
