@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { nonEmptyPatch, requiredText, storableText } from './common';
 import { MEMBER_ROLES } from './roles';
+import { bookingMinutesSetting, type BookingMinutesSetting } from './bookings';
 
 const timeZones = new Set(Intl.supportedValuesOf('timeZone'));
 
@@ -18,13 +19,28 @@ export const companySettingsInput = nonEmptyPatch(
       .max(50, 'At most 50 %.')
       .nullable()
       .optional(),
+    /** Window lengths by appliance kind; the kinds named replace the stored ones, the rest stay. */
+    bookingMinutes: z
+      .strictObject(bookingMinutesSetting.partial().shape, {
+        error: (iss) => (iss.code === 'unrecognized_keys' ? 'Not an appliance kind: window lengths are set per kind (steam boiler, water heater…).' : undefined),
+      })
+      .optional(),
   }),
 );
 export type CompanySettingsInput = z.infer<typeof companySettingsInput>;
 
 export const memberRoleInput = z.object({ role: z.enum(MEMBER_ROLES, 'Choose owner, manager or technician.') });
 
-export type CompanyDto = { id: string; name: string; phone: string; timeZone: string; today: string; underFiringTolerancePct: number | null };
+export type CompanyDto = {
+  id: string;
+  name: string;
+  phone: string;
+  timeZone: string;
+  today: string;
+  underFiringTolerancePct: number | null;
+  /** Every kind, the company's own minutes over the defaults. */
+  bookingMinutes: BookingMinutesSetting;
+};
 export type MemberDto = {
   id: string;
   userId: string;

@@ -1,4 +1,4 @@
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
 import { companies } from '../../db/schema/index';
 import type { CompanySettingsInput } from '../../../shared/schemas/company';
@@ -9,7 +9,10 @@ export const companyRepository = {
     return row ?? null;
   },
   async update(db: DbOrTx, companyId: string, input: CompanySettingsInput) {
-    const [row] = await db.update(companies).set(input).where(eq(companies.id, companyId)).returning();
+    const { bookingMinutes, ...rest } = input;
+    // The kinds named replace the stored ones in place (jsonb ||), so two settings saved at once both stay.
+    const minutes = bookingMinutes ? { bookingMinutes: sql`${companies.bookingMinutes} || ${JSON.stringify(bookingMinutes)}::jsonb` } : {};
+    const [row] = await db.update(companies).set({ ...rest, ...minutes }).where(eq(companies.id, companyId)).returning();
     return row ?? null;
   },
 };

@@ -3,15 +3,19 @@ import { notFound } from '../../lib/http-error';
 import { companyRepository } from './company.repository';
 import { todayInTimeZone } from '../../../shared/dates';
 import type { CompanyDto, CompanySettingsInput } from '../../../shared/schemas/company';
+import { DEFAULT_BOOKING_MINUTES, type BookingMinutesSetting } from '../../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.repository';
 
-const toDto = (c: { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null }): CompanyDto => ({
+type CompanyRow = { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null; bookingMinutes: Partial<BookingMinutesSetting> };
+
+const toDto = (c: CompanyRow): CompanyDto => ({
   id: c.id,
   name: c.name,
   phone: c.phone,
   timeZone: c.timeZone,
   today: todayInTimeZone(c.timeZone),
   underFiringTolerancePct: c.underFiringTolerancePct,
+  bookingMinutes: { ...DEFAULT_BOOKING_MINUTES, ...c.bookingMinutes },
 });
 
 export function companyService(ctx: AppContext) {

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import type { CompanyDto } from '@shared/schemas/company';
+import { LABELS, type ApplianceKind } from '@shared/schemas/enums';
 import { Page, Spinner } from '@/components/ui/page';
 import { Card } from '@/components/ui/card';
 import { Button } from '@/components/ui/button';
@@ -20,13 +21,18 @@ export function CompanySettingsPage() {
 function CompanySettingsForm({ company }: { company: CompanyDto }) {
   const update = useUpdateCompany();
   const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone, tolerance: company.underFiringTolerancePct?.toString() ?? '' });
+  const kinds = Object.keys(company.bookingMinutes) as ApplianceKind[];
+  const [minutes, setMinutes] = useState<Record<ApplianceKind, string>>(
+    Object.fromEntries(kinds.map((k) => [k, String(company.bookingMinutes[k])])) as Record<ApplianceKind, string>,
+  );
   const details = update.error instanceof ApiError ? update.error.details : undefined;
 
   async function submit(e: FormEvent) {
     e.preventDefault();
     const { tolerance, ...rest } = form;
     const underFiringTolerancePct = tolerance.trim() === '' ? null : Number(tolerance);
-    await update.mutateAsync({ ...rest, underFiringTolerancePct }).catch(() => {});
+    const bookingMinutes = Object.fromEntries(kinds.map((k) => [k, Number(minutes[k])]));
+    await update.mutateAsync({ ...rest, underFiringTolerancePct, bookingMinutes }).catch(() => {});
   }
 
   return (
@@ -55,6 +61,20 @@ function CompanySettingsForm({ company }: { company: CompanyDto }) {
             onChange={(e) => setForm({ ...form, tolerance: e.target.value })}
             error={details?.underFiringTolerancePct}
           />
+          <fieldset className="flex flex-col gap-3">
+            <legend className="text-sm font-semibold">Booking window by appliance (minutes)</legend>
+            <p className="text-xs text-iron-muted">A new booking proposes this length; the office can change it on each booking.</p>
+            {kinds.map((k) => (
+              <TextField
+                key={k}
+                label={LABELS.applianceKind[k]}
+                inputMode="numeric"
+                value={minutes[k]}
+                onChange={(e) => setMinutes({ ...minutes, [k]: e.target.value })}
+                error={details?.[`bookingMinutes.${k}`]}
+              />
+            ))}
+          </fieldset>
           <Button type="submit" disabled={update.isPending}>
             {update.isPending ? 'Saving…' : 'Save'}
           </Button>
