@@ -1,6 +1,6 @@
 import { and, asc, eq, gt, inArray, isNull, lt, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { appliances, bookingAppliances, bookings, companies, components, customers, memberships, serviceRequests, sites, users, visits } from '../../db/schema/index';
+import { appliances, bookingAppliances, bookings, companies, components, memberships, serviceRequests, sites, users, visits } from '../../db/schema/index';
 
 export type BookingRow = typeof bookings.$inferSelect;
 
@@ -95,65 +95,83 @@ export const bookingsRepository = {
     return row ?? null;
   },
 
-  /** Everything a booking card shows, for many bookings at once. */
-  async details(db: DbOrTx, companyId: string, bookingIds: string[], dueBy: string) {
-    if (!bookingIds.length) return { heads: [], lines: [], parts: [], visitLinks: [] };
-    const heads = await db
-      .select({
-        id: bookings.id,
-        siteId: sites.id,
-        street: sites.street,
-        town: sites.town,
-        postalCode: sites.postalCode,
-        accessNotes: sites.accessNotes,
-        customerId: customers.id,
-        customerName: customers.name,
-        customerPhone: customers.phone,
-        technicianName: sql<string>`(select ${users.name} from ${users} where ${users.id} = ${bookings.technicianId})`,
-        bookedByName: sql<string | null>`(select ${users.name} from ${users} where ${users.id} = ${bookings.createdBy})`,
-      })
-      .from(bookings)
-      .innerJoin(sites, eq(sites.id, bookings.siteId))
-      .innerJoin(customers, eq(customers.id, sites.customerId))
-      .where(and(eq(bookings.companyId, companyId), inArray(bookings.id, bookingIds)));
-    const lines = await db
-      .select({
-        bookingId: bookingAppliances.bookingId,
-        applianceId: appliances.id,
-        kind: appliances.kind,
-        fuel: appliances.fuel,
-        lastOutcome: sql<string | null>`(select outcome from visits v where v.appliance_id = ${appliances.id} and v.status = 'completed' order by v.visited_on desc, v.completed_at desc limit 1)`,
-        lastVisitOn: sql<string | null>`(select max(visited_on)::text from visits v where v.appliance_id = ${appliances.id} and v.status = 'completed')`,
-      })
-      .from(bookingAppliances)
-      .innerJoin(appliances, eq(appliances.id, bookingAppliances.applianceId))
-      .where(and(eq(bookingAppliances.companyId, companyId), inArray(bookingAppliances.bookingId, bookingIds)));
-    const applianceIds = [...new Set(lines.map((l) => l.applianceId))];
-    const parts = applianceIds.length
-      ? await db
-          .select({
-            applianceId: components.applianceId,
-            typeCode: components.typeCode,
-            specKey: components.specKey,
-            dueOn: components.dueOn,
-            dueKind: components.dueKind,
-            conditionFailed: components.conditionFailed,
-          })
-          .from(components)
-          .where(
-            and(
-              eq(components.companyId, companyId),
-              inArray(components.applianceId, applianceIds),
-              isNull(components.removedOn),
-              sql`(${components.conditionFailed} or ${components.dueOn} <= ${dueBy})`,
-            ),
-          )
-          .orderBy(asc(components.dueOn))
-      : [];
-    const visitLinks = await db
-      .select({ bookingId: visits.bookingId, id: visits.id })
-      .from(visits)
-      .where(and(eq(visits.companyId, companyId), inArray(visits.bookingId, bookingIds)));
+  /**
+   * Everything a booking card shows, for many bookings at once: five independent queries run side by side, each
+   * keyed by one array parameter (`= any($1)`), so a week board of hundreds of bookings plans and runs quickly.
+   */
+  async details(db: DbOrTx, companyId: string, rows: Pick<BookingRow, 'id' | 'siteId' | 'technicianId' | 'createdBy'>[], dueBy: string) {
+    if (!rows.length) return { heads: [], lines: [], parts: [], visitLinks: [] };
+    const bookingIds = rows.map((r) => r.id);
+    const siteIds = [...new Set(rows.map((r) => r.siteId))];
+    const userIds = [...new Set(rows.flatMap((r) => [r.technicianId, r.createdBy]).filter((id): id is string => Boolean(id)))];
+    const anyOf = (ids: string[]) => sql`any(${sql.param(ids)}::uuid[])`;
+    const [siteRows, userRows, lines, parts, visitLinks] = await Promise.all([
+      db
+        .select({
+          siteId: sites.id,
+          street: sites.street,
+          town: sites.town,
+          postalCode: sites.postalCode,
+          accessNotes: sites.accessNotes,
+          customerId: sites.customerId,
+          customerName: sql<string>`customer.name`,
+          customerPhone: sql<string | null>`customer.phone`,
+        })
+        .from(sites)
+        // A lateral lookup keeps this a few hundred index probes; a hash join would read every customer.
+        .innerJoin(sql`lateral (select c.name, c.phone from customers c where c.id = ${sites.customerId} limit 1) customer`, sql`true`)
+        .where(and(eq(sites.companyId, companyId), sql`${sites.id} = ${anyOf(siteIds)}`)),
+      db.select({ id: users.id, name: users.name }).from(users).where(sql`${users.id} = ${anyOf(userIds)}`),
+      db
+        .select({
+          bookingId: bookingAppliances.bookingId,
+          applianceId: appliances.id,
+          kind: appliances.kind,
+          fuel: appliances.fuel,
+          lastOutcome: sql<string | null>`last_visit.outcome`,
+          lastVisitOn: sql<string | null>`last_visit.visited_on::text`,
+        })
+        .from(bookingAppliances)
+        .innerJoin(appliances, eq(appliances.id, bookingAppliances.applianceId))
+        .leftJoin(
+          sql`lateral (select v.outcome, v.visited_on from visits v where v.appliance_id = ${appliances.id} and v.status = 'completed'
+            order by v.visited_on desc, v.completed_at desc limit 1) last_visit`,
+          sql`true`,
+        )
+        .where(and(eq(bookingAppliances.companyId, companyId), sql`${bookingAppliances.bookingId} = ${anyOf(bookingIds)}`)),
+      db
+        .selectDistinct({
+          id: components.id,
+          applianceId: components.applianceId,
+          typeCode: components.typeCode,
+          specKey: components.specKey,
+          dueOn: components.dueOn,
+          dueKind: components.dueKind,
+          conditionFailed: components.conditionFailed,
+        })
+        .from(components)
+        .innerJoin(bookingAppliances, eq(bookingAppliances.applianceId, components.applianceId))
+        .where(
+          and(
+            eq(components.companyId, companyId),
+            sql`${bookingAppliances.bookingId} = ${anyOf(bookingIds)}`,
+            isNull(components.removedOn),
+            sql`(${components.conditionFailed} or ${components.dueOn} <= ${dueBy})`,
+          ),
+        )
+        .orderBy(asc(components.dueOn), asc(components.id)),
+      db
+        .select({ bookingId: visits.bookingId, id: visits.id })
+        .from(visits)
+        .where(and(eq(visits.companyId, companyId), sql`${visits.bookingId} = ${anyOf(bookingIds)}`)),
+    ]);
+    const siteOf = new Map(siteRows.map((r) => [r.siteId, r]));
+    const nameOf = new Map(userRows.map((u) => [u.id, u.name]));
+    const heads = rows.flatMap((r) => {
+      const site = siteOf.get(r.siteId);
+      if (!site) return [];
+      return [{ id: r.id, ...site, technicianName: nameOf.get(r.technicianId) ?? '', bookedByName: r.createdBy ? (nameOf.get(r.createdBy) ?? null) : null }];
+    });
     return { heads, lines, parts, visitLinks };
   },
 

@@ -45,7 +45,7 @@ export function bookingsService(ctx: AppContext) {
   async function dtos(db: DbOrTx, companyId: string, rows: BookingRow[], timeZone: string, dueBy?: string) {
     const lastEnd = rows.reduce((max, b) => Math.max(max, b.endsAt.getTime()), 0);
     const due = dueBy ?? todayInTimeZone(timeZone, new Date(lastEnd || Date.now()));
-    const details = await repo.details(db, companyId, rows.map((b) => b.id), due);
+    const details = await repo.details(db, companyId, rows, due);
     return { list: bookingDtos(rows, details, timeZone), details };
   }
 
