@@ -44,7 +44,8 @@ export function BookForm({ appliances, siteId: _siteId, defaultTechnicianId, boo
   function submit(e: FormEvent) {
     e.preventDefault();
     const start = `${date}T${time}`;
-    create.mutate({ applianceIds: chosen, technicianId: tech, start, end: addMinutesToLocal(start, length), source }, { onSuccess: onBooked });
+    // mutateAsync: the refetch after the booking removes this item from the queue, unmounting the form before mutate's own callback would run.
+    create.mutateAsync({ applianceIds: chosen, technicianId: tech, start, end: addMinutesToLocal(start, length), source }).then(onBooked, () => undefined);
   }
 
   return (

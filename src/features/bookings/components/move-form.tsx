@@ -23,7 +23,7 @@ export function MoveForm({ booking, technicians, onMoved }: { booking: BookingDt
   function submit(e: FormEvent) {
     e.preventDefault();
     const start = `${date}T${time}`;
-    move.mutate({ id: booking.id, input: { start, end: addMinutesToLocal(start, length), technicianId } }, { onSuccess: onMoved });
+    move.mutateAsync({ id: booking.id, input: { start, end: addMinutesToLocal(start, length), technicianId } }).then(onMoved, () => undefined);
   }
 
   return (
