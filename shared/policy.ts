@@ -19,6 +19,8 @@ export const PERMISSIONS = {
   'bookings:read': ['owner', 'manager', 'technician'],
   'bookings:book': ['owner', 'manager', 'technician'],
   'bookings:manage': ['owner', 'manager'],
+  // Planning the week (the week board's unbooked queue) is the office's work; technicians see their own round.
+  'bookings:plan': ['owner', 'manager'],
   // The development outbox holds other people's sign-in and invitation links: whoever opens one is signed in as them.
   'dev:outbox': ['owner'],
 } as const satisfies Record<string, readonly MemberRole[]>;

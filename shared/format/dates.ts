@@ -23,6 +23,11 @@ const dayNumber = (isoDate: string) => {
   return Date.UTC(y, m - 1, d) / MS_PER_DAY;
 };
 
+/** "Mon, Nov 23" for a day on the week board. */
+export function formatWeekday(isoDate: string, locale = COMPANY_LOCALE): string {
+  return format(locale, { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+}
+
 /** "Jan 6, 2027" for a calendar date; `long` gives "January 6, 2027". A missing date reads "—". */
 export function formatCalendarDate(isoDate: string | null | undefined, opts: { long?: boolean; locale?: string } = {}): string {
   if (!isoDate) return '—';

@@ -13,14 +13,14 @@
  *   POST  /bookings/:id/no-access            BookingDto      bookings:book (the booked technician, or the office; reason)
  *   GET   /rounds?date&technicianId          RoundDto        bookings:read (technicianId defaults to the caller)
  *   GET   /load-list?from&to&technicianId    LoadListDto     bookings:read
- *   GET   /bookings/unbooked?from&to&…       UnbookedPage    bookings:read (due in the window, not yet booked)
+ *   GET   /bookings/unbooked?from&to&…       UnbookedPageDto bookings:plan (office: due by `to`, not yet booked; paged)
  *
  * A technician cannot be in two live bookings at once: the database refuses it (exclusion constraint) and the API
  * answers 409 `booking_clash` naming the other booking.
  */
 import { z } from 'zod';
 import { isoDate, optionalText, requiredText, storableText } from './common';
-import type { ApplianceKind, Fuel, VisitOutcome } from './enums';
+import { APPLIANCE_KINDS, FUELS, type ApplianceKind, type Fuel, type VisitOutcome } from './enums';
 
 export const BOOKING_STATUSES = ['booked', 'confirmed', 'done', 'cancelled', 'no_access'] as const;
 export type BookingStatus = (typeof BOOKING_STATUSES)[number];
@@ -137,6 +137,40 @@ export const bookingListQuery = dateRange;
 export type BookingListQuery = z.input<typeof bookingListQuery>;
 export const loadListQuery = dateRange;
 export type LoadListQuery = z.input<typeof loadListQuery>;
+/** The unbooked queue: due (or overdue, or failed at the last check) by `to`, with no live booking still ahead. */
+export const unbookedQuery = z
+  .object({
+    from: isoDate,
+    to: isoDate,
+    applianceKind: z.enum(APPLIANCE_KINDS, 'Choose a kind of appliance.').optional(),
+    fuel: z.enum(FUELS, 'Choose a fuel.').optional(),
+    town: storableText().trim().max(120, 'At most 120 characters.').optional(),
+    search: storableText().trim().max(120, 'At most 120 characters.').optional(),
+    technicianId: uuid.optional(),
+    after: storableText().max(100).optional(),
+    limit: z.coerce.number('Give a number.').int('Whole numbers only.').min(1, 'At least 1.').max(100, 'At most 100.').default(50),
+  })
+  .refine((v) => v.to >= v.from, { path: ['to'], message: 'The last day must be on or after the first.' });
+export type UnbookedQuery = z.input<typeof unbookedQuery>;
+
+export type UnbookedItemDto = {
+  appliance: { id: string; kind: ApplianceKind; fuel: Fuel; title: string };
+  site: { id: string; street: string; town: string; assignedTechnicianId: string | null; assignedTechnicianName: string | null };
+  customer: { id: string; name: string };
+  /** The earliest due date among its parts (today for a part that failed at the last check). */
+  firstDueOn: string;
+  overdue: boolean;
+  /** What is due, in words, as a booking card says it. */
+  due: string[];
+};
+/** A page of the queue, with what the booking form needs: the team and the company's window lengths. */
+export type UnbookedPageDto = {
+  items: UnbookedItemDto[];
+  nextCursor: string | null;
+  technicians: { id: string; name: string }[];
+  bookingMinutes: BookingMinutesSetting;
+};
+
 export const roundQuery = z.object({ date: isoDate, technicianId: uuid.optional() });
 export type RoundQuery = z.input<typeof roundQuery>;
 

@@ -6,6 +6,7 @@ type NavItem = { to: string; label: string; permission?: Permission; homeowner?:
 const ITEMS: NavItem[] = [
   { to: '/', label: 'Find' },
   { to: '/round', label: 'Round', permission: 'bookings:read' },
+  { to: '/week', label: 'Week board', permission: 'bookings:plan' },
   { to: '/scan', label: 'Scan tag', permission: 'records:read' },
   { to: '/service-requests', label: 'Service requests', permission: 'records:read' },
   { to: '/due', label: 'Due list', permission: 'catalog:manage' },

@@ -6,13 +6,13 @@ import { typeLabelFor } from '../due/type-label';
 import type { BookingRow, bookingsRepository } from './bookings.repository';
 
 type Details = Awaited<ReturnType<typeof bookingsRepository.details>>;
-type Part = Details['parts'][number];
+export type Part = Details['parts'][number];
 
-const partLabel = (p: Part) => [typeLabelFor(p.typeCode), p.specKey].filter(Boolean).join(', ');
+export const partLabel = (p: Part) => [typeLabelFor(p.typeCode), p.specKey].filter(Boolean).join(', ');
 /** Wanted on the van: due for replacement by the booking's day, or failed when last looked at. Inspections need no part. */
 const wantsPart = (p: Part) => p.conditionFailed || p.dueKind === 'replacement';
 
-function dueWords(p: Part): string {
+export function dueWords(p: Part): string {
   if (p.conditionFailed) return `${partLabel(p)}: failed at the last check, replace`;
   const when = p.dueOn ? ` (due ${formatCalendarDate(p.dueOn)})` : '';
   return `${partLabel(p)}: ${p.dueKind === 'replacement' ? 'replace' : 'inspect'}${when}`;

@@ -3,18 +3,24 @@ import type { AppContext } from '../../context';
 import { defineRoute } from '../../lib/route';
 import { currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
-import { bookingInput, bookingListQuery, bookingMoveInput, bookingReasonInput, loadListQuery, roundQuery } from '../../../shared/schemas/bookings';
+import { bookingInput, bookingListQuery, bookingMoveInput, bookingReasonInput, loadListQuery, roundQuery, unbookedQuery } from '../../../shared/schemas/bookings';
 import { bookingsService } from './bookings.service';
+import { unbookedService } from './unbooked.service';
 
 export function bookingRoutes(ctx: AppContext) {
   const router = Router();
   const service = bookingsService(ctx);
+  const unbooked = unbookedService(ctx);
 
   defineRoute(router, 'post', '/bookings', { access: { permission: 'bookings:book' }, schemas: { body: bookingInput }, status: 201 }, ({ body }, _req, res) =>
     service.create(currentMember(res), body),
   );
   defineRoute(router, 'get', '/bookings', { access: { permission: 'bookings:read' }, schemas: { query: bookingListQuery } }, ({ query }, _req, res) =>
     service.list(currentMember(res), query),
+  );
+  // Before /bookings/:id, which would read "unbooked" as an id.
+  defineRoute(router, 'get', '/bookings/unbooked', { access: { permission: 'bookings:plan' }, schemas: { query: unbookedQuery } }, ({ query }, _req, res) =>
+    unbooked.list(currentMember(res).companyId, query),
   );
   defineRoute(router, 'get', '/bookings/:id', { access: { permission: 'bookings:read' }, schemas: { params: uuidParam } }, ({ params }, _req, res) =>
     service.get(currentMember(res), params.id),

@@ -338,6 +338,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     crossTenant: 404,
   },
   'get /bookings': { query: () => ({ from: daysAhead(1), to: daysAhead(7) }), status: 200 },
+  'get /bookings/unbooked': { query: () => ({ from: daysAhead(1), to: daysAhead(7) }), status: 200 },
   'get /bookings/:id': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), status: 200 },
   'post /bookings/:id/move': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), body: () => nextWindow(), status: 200 },
   'post /bookings/:id/confirm': { freshInTarget: freshBooking, params: (c) => ({ id: str(c.fresh.bookingId) }), status: 200 },

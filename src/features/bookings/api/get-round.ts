@@ -5,6 +5,8 @@ import type { RoundDto } from '@shared/schemas/bookings';
 export const bookingKeys = {
   all: ['bookings'] as const,
   round: (date: string, technicianId?: string) => [...bookingKeys.all, 'round', { date, technicianId }] as const,
+  board: (from: string, to: string) => [...bookingKeys.all, 'board', { from, to }] as const,
+  unbooked: (query: object) => [...bookingKeys.all, 'unbooked', query] as const,
 };
 
 export const getRound = (date: string, technicianId?: string) => api<RoundDto>('/rounds', { query: { date, ...(technicianId ? { technicianId } : {}) } });
