@@ -63,6 +63,7 @@ export const OFFICE_SCREENS: readonly string[] = [
   'src/features/customers/components/customer-detail-page.tsx',
   'src/features/due/components/due-list-page.tsx',
   'src/features/bookings/components/week-board-page.tsx',
+  'src/features/bookings/components/book-page.tsx',
   'src/features/catalog/components/catalog-page.tsx',
   'src/features/team/components/team-page.tsx',
   'src/features/company/components/company-settings-page.tsx',

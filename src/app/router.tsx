@@ -133,6 +133,7 @@ export function appRoutes(): RouteObject[] {
         guardedPage('customers/new', 'records:write', async () => (await import('@/features/customers/components/new-customer-page')).NewCustomerPage),
         guardedPage('customers/:id', 'records:read', async () => (await import('@/features/customers/components/customer-detail-page')).CustomerDetailPage),
         guardedPage('week', 'bookings:plan', async () => (await import('@/features/bookings/components/week-board-page')).WeekBoardPage),
+        guardedPage('book', 'bookings:book', async () => (await import('@/features/bookings/components/book-page')).BookPage),
         guardedPage('round', 'bookings:read', async () => (await import('@/features/bookings/components/round-page')).RoundPage),
         guardedPage('due', 'records:read', async () => (await import('@/features/due/components/due-list-page')).DueListPage),
         guardedPage('scan', 'records:read', async () => (await import('@/features/tags/components/scan-page')).ScanPage),

@@ -6,7 +6,7 @@ import { typeLabelFor } from '../due/type-label';
 import type { BookingRow, bookingsRepository } from './bookings.repository';
 
 type Details = Awaited<ReturnType<typeof bookingsRepository.details>>;
-export type Part = Details['parts'][number];
+export type Part = Omit<Details['parts'][number], 'id'>;
 
 export const partLabel = (p: Part) => [typeLabelFor(p.typeCode), p.specKey].filter(Boolean).join(', ');
 /** Wanted on the van: due for replacement by the booking's day, or failed when last looked at. Inspections need no part. */

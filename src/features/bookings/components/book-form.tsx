@@ -20,6 +20,12 @@ export type BookFormProps = {
   bookingMinutes?: BookingMinutesSetting;
   defaultDate: string;
   source?: BookingSource;
+  /** Which of the site's appliances start ticked (default: all of them). */
+  initiallyChosen?: string[];
+  /** A technician books follow-ups for themselves only: the form offers no one else. */
+  onlyTechnicianId?: string;
+  /** The homeowner's request this booking answers (it is then marked scheduled). */
+  serviceRequestId?: string;
   onBooked: (booking: BookingDto) => void;
   onCancel?: () => void;
 };
@@ -27,9 +33,22 @@ export type BookFormProps = {
 const clock = (local: string) => local.slice(11, 16);
 
 /** Books one or more appliances at one site; shows the chosen technician's round that day so gaps are visible. */
-export function BookForm({ appliances, siteId: _siteId, defaultTechnicianId, bookingMinutes = DEFAULT_BOOKING_MINUTES, defaultDate, source = 'due_list', onBooked, onCancel }: BookFormProps) {
-  const technicians = useTechnicians();
-  const [chosen, setChosen] = useState<string[]>(appliances.map((a) => a.id));
+export function BookForm({
+  appliances,
+  siteId: _siteId,
+  defaultTechnicianId,
+  bookingMinutes = DEFAULT_BOOKING_MINUTES,
+  defaultDate,
+  source = 'due_list',
+  initiallyChosen,
+  onlyTechnicianId,
+  serviceRequestId,
+  onBooked,
+  onCancel,
+}: BookFormProps) {
+  const team = useTechnicians();
+  const technicians = { ...team, data: onlyTechnicianId ? team.data?.filter((t) => t.userId === onlyTechnicianId) : team.data };
+  const [chosen, setChosen] = useState<string[]>(initiallyChosen?.filter((id) => appliances.some((a) => a.id === id)) ?? appliances.map((a) => a.id));
   const [technicianId, setTechnicianId] = useState<string>(defaultTechnicianId ?? '');
   const tech = technicianId || technicians.data?.[0]?.userId || '';
   const [date, setDate] = useState(defaultDate);
@@ -45,7 +64,7 @@ export function BookForm({ appliances, siteId: _siteId, defaultTechnicianId, boo
     e.preventDefault();
     const start = `${date}T${time}`;
     // mutateAsync: the refetch after the booking removes this item from the queue, unmounting the form before mutate's own callback would run.
-    create.mutateAsync({ applianceIds: chosen, technicianId: tech, start, end: addMinutesToLocal(start, length), source }).then(onBooked, () => undefined);
+    create.mutateAsync({ applianceIds: chosen, technicianId: tech, start, end: addMinutesToLocal(start, length), source, ...(serviceRequestId ? { serviceRequestId } : {}) }).then(onBooked, () => undefined);
   }
 
   return (
