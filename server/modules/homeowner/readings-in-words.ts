@@ -6,7 +6,7 @@ type Results = {
   combustion?: { efficiencyPct: number | null; coAirFreePpm: number };
   gasInput?: { inputBtuPerHour: number; rating?: { status: string } };
   thermocouple?: { status?: string };
-  gaugeGlass?: { fraction: number };
+  gaugeGlass?: { fraction: number | null };
   lowWaterCutoff?: { passed: boolean };
 };
 
@@ -40,8 +40,9 @@ export function readingsInWords(raw: Record<string, unknown>): { words: string[]
     );
   }
   if (r.gaugeGlass) {
-    numbers.gaugeGlassFraction = Number(r.gaugeGlass.fraction.toFixed(3));
-    words.push(r.gaugeGlass.fraction > 0 ? 'Water showed in the gauge glass.' : 'No water showed in the gauge glass.');
+    const fraction = r.gaugeGlass.fraction;
+    if (fraction !== null) numbers.gaugeGlassFraction = Number(fraction.toFixed(3));
+    words.push(fraction === null || fraction > 0 ? 'Water showed in the gauge glass.' : 'No water showed in the gauge glass.');
   }
   if (r.gasInput?.rating?.status === 'over_fired') words.push('The burner was burning more gas than its rating; the technician adjusted or noted it.');
   if (r.thermocouple?.status === 'replace') words.push('The pilot safety sensor (thermocouple) was weak.');
