@@ -138,7 +138,7 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClo
       outcomeReason = 'Told the customer the thermocouple is weak (16 mV) and the pilot may drop out; replacement booked for the next call.';
     }
     const readings = demoReadings(f, shape, wear, overrides);
-    const results = resultsToStore(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction });
+    const results = resultsToStore(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction, kind: shape.kind });
     const checklist = checklistFor(f, plan);
 
     const swapped: string[] = [];
