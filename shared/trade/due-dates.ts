@@ -178,13 +178,20 @@ const replacedEveryService = (componentType: ComponentType): DueRule => ({
   source: 'common practice: replaced at every annual service',
 });
 
+/**
+ * Age is not a fault: ASHRAE's medians describe populations, not one unit, so a part past its median is inspected and
+ * planned for (the replacement prospects, the stock forecast), never "replacement due" by age alone. Replacement is
+ * due on condition, or where a company sets a replacement interval of its own or from the manufacturer.
+ */
 const medianAge = (componentType: ComponentType, years: number, row: string): DueRule => ({
   componentType,
   inspectionIntervalMonths: 12,
-  replacementAgeYears: years,
-  replacementPolicy: 'fixed_age',
-  basis: 'published',
-  source: `${ASHRAE}: "${row}" median ${years} years, used as a planning age (a median, not a prediction); inspected annually (common practice)`,
+  replacementAgeYears: null,
+  replacementPolicy: 'on_condition',
+  basis: 'common_practice',
+  source:
+    `${ON_CONDITION}. ${ASHRAE}: "${row}" median ${years} years is a planning age for the whole population, ` +
+    'not a replacement date for one unit',
 });
 
 const safetyValveTest = (componentType: ComponentType): DueRule => ({
