@@ -160,6 +160,16 @@ const ON_CONDITION = 'common practice: inspected at every annual service visit; 
 const ASHRAE = 'ASHRAE Handbook, HVAC Applications, "Owning and Operating Costs" chapter, service-life table (1978 survey), secondary copy';
 const SECTION_VI = 'ASME BPVC Section VI, Recommended Rules for the Care and Operation of Heating Boilers';
 
+/**
+ * ASHRAE median service lives kept as planning ages: the stock forecast lists parts past them to plan for, and the
+ * due engine never turns them into replacement dates.
+ */
+export const PLANNING_MEDIAN_YEARS = {
+  circulator: { years: 10, row: 'pumps, pipe-mounted' },
+  burners: { years: 21, row: 'burners' },
+} as const satisfies Partial<Record<ComponentType, { years: number; row: string }>>;
+export const PLANNING_MEDIAN_SOURCE = `${ASHRAE}: medians describe populations, not one unit: a reason to inspect and plan, not a fault`;
+
 const onCondition = (componentType: ComponentType): DueRule => ({
   componentType,
   inspectionIntervalMonths: 12,
@@ -206,8 +216,8 @@ const safetyValveTest = (componentType: ComponentType): DueRule => ({
 
 const defaults: Record<ComponentType, DueRule> = {
   ...(Object.fromEntries(COMPONENT_TYPE_CODES.map((t) => [t, onCondition(t)])) as Record<ComponentType, DueRule>),
-  burners: medianAge('burners', 21, 'burners'),
-  circulator: medianAge('circulator', 10, 'pumps, pipe-mounted'),
+  burners: medianAge('burners', PLANNING_MEDIAN_YEARS.burners.years, PLANNING_MEDIAN_YEARS.burners.row),
+  circulator: medianAge('circulator', PLANNING_MEDIAN_YEARS.circulator.years, PLANNING_MEDIAN_YEARS.circulator.row),
   nozzle: replacedEveryService('nozzle'),
   oil_filter: replacedEveryService('oil_filter'),
   low_water_cutoff_float: {
