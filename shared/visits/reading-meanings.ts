@@ -8,7 +8,7 @@ export type StoredResults = {
   gasInput?: { inputBtuPerHour: number; rating?: { status: 'over_fired' | 'under_fired' | 'within_rating'; allowedBtuPerHour: number } };
   thermocouple?: { status: string };
   gaugeGlass?: { fraction: number | null; mark?: 'at' | 'below' | 'above' | null; status?: 'ok' | 'warning' | 'stop' };
-  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean };
+  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean; trippedWith?: 'water_visible' | 'below_visible' | null };
 };
 
 export type ReadingMeaning = { reading: string; value: string; meaning: string };
@@ -79,7 +79,9 @@ export function readingMeanings(results: StoredResults, readings: { steamOperati
       value: results.lowWaterCutoff.passed ? 'passed' : 'failed',
       meaning: results.lowWaterCutoff.passed
         ? 'the burner stopped when the water was lowered, as it should'
-        : 'the burner did not stop: the boiler is not protected against firing without water',
+        : results.lowWaterCutoff.trippedWith === 'below_visible'
+          ? 'the burner stopped only after the water was out of sight in the glass: too late, so the test failed'
+          : 'the burner did not stop: the boiler is not protected against firing without water',
     });
   }
   if (results.gaugeGlass) {

@@ -7,7 +7,7 @@ type Results = {
   gasInput?: { inputBtuPerHour: number; rating?: { status: string } };
   thermocouple?: { status?: string };
   gaugeGlass?: { fraction: number | null };
-  lowWaterCutoff?: { passed: boolean };
+  lowWaterCutoff?: { passed: boolean; trippedWith?: 'water_visible' | 'below_visible' | null };
 };
 
 // ANSI Z21 appliance standards' limit for vented heating appliances, air-free (secondary): used as the yardstick.
@@ -36,7 +36,9 @@ export function readingsInWords(raw: Record<string, unknown>): { words: string[]
     words.push(
       r.lowWaterCutoff.passed
         ? 'The low-water safety switch was tested and stopped the burner, as it should.'
-        : 'The low-water safety switch did not stop the burner when tested.',
+        : r.lowWaterCutoff.trippedWith === 'below_visible'
+          ? 'The low-water safety switch stopped the burner too late, only after the water was out of sight: it failed its test.'
+          : 'The low-water safety switch did not stop the burner when tested.',
     );
   }
   if (r.gaugeGlass) {
