@@ -11,7 +11,7 @@ function readingsFor(wanted: Set<string>): ReadingsInput {
   if (wanted.has('combustion')) {
     readings.combustion = { o2Pct: 7, coPpm: 20, flueTempF: 400, airTempF: 65, draftInWc: -0.03, ambientCoPpm: 0, spillageSeconds: 5, steadyFiringMinutes: 8 };
   }
-  if (wanted.has('lowWaterCutoff')) readings.lowWaterCutoff = { type: 'float', trippedAtLevel: '1/4', burnerStopped: true };
+  if (wanted.has('lowWaterCutoff')) readings.lowWaterCutoff = { type: 'float', trippedAtLevel: '1/4', trippedWith: 'water_visible', burnerStopped: true };
   if (wanted.has('thermocouple')) readings.thermocouple = { openCircuitMv: 25, closedCircuitMv: 13 };
   if (wanted.has('gaugeGlassLevel')) readings.gaugeGlassLevel = '1/2';
   return readings;

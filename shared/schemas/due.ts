@@ -89,4 +89,12 @@ export type DueItemDto = {
 export type DueStockRow = { typeCode: string; typeLabel: string; specKey: string; count: number };
 
 /** Parts to have on hand for what falls due through `through`; replacements and inspections are kept apart. */
-export type DueStockDto = { withinDays: number; through: string; replacements: DueStockRow[]; inspections: DueStockRow[] };
+export type DueStockDto = {
+  withinDays: number;
+  through: string;
+  replacements: DueStockRow[];
+  inspections: DueStockRow[];
+  /** Working parts that reach their ASHRAE median life by `through`: to plan and order for, not due by age. */
+  pastMedianLife: DueStockRow[];
+  pastMedianLifeSource: string;
+};

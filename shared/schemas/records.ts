@@ -61,6 +61,8 @@ export const siteInput = z.object({
   town: requiredText('Town', 120),
   postalCode: optionalText(20),
   accessNotes: optionalText(2000),
+  /** Feet above sea level, for the NFPA 54 altitude derate; the range of the derate rule (shared/trade/gas-input.ts). */
+  elevationFt: optionalInt('Elevation', -1500, 15_000),
   assignedTechnicianId: z.uuid().nullish(),
 });
 export const sitePatch = nonEmptyPatch(siteInput.omit({ customerId: true }).partial());
@@ -144,6 +146,7 @@ export type SiteDto = {
   town: string;
   postalCode: string | null;
   accessNotes: string | null;
+  elevationFt: number | null;
   assignedTechnicianId: string | null;
   assignedTechnicianName: string | null;
 };

@@ -17,6 +17,7 @@ import * as E from './enums';
 import { isoDate, optionalText, storableText } from './common';
 import { FLUE_TEMP_PLAUSIBLE_F, FLUE_TEMP_RANGE_MESSAGE, flueBelowAirMessage, isFlueBelowCombustionAir } from '../trade/plausible-readings';
 import { describeRange, READING_RANGES, type ReadingName } from '../trade/reading-ranges';
+import { CUTOFF_TRIP_POSITIONS } from '../trade/low-water-cutoff';
 
 const n = (label: string, min: number, max: number) =>
   z.number(`${label} must be a number.`).min(min, `${label} must be at least ${min}.`).max(max, `${label} must be at most ${max}.`);
@@ -73,6 +74,8 @@ export const readingsInput = z
       .object({
         type: z.enum(['float', 'probe'], 'Say whether the cutoff is a float or a probe type.'),
         trippedAtLevel: storableText().trim().max(20).nullish(),
+        /** Where the water stood against the gauge glass when the burner stopped (ASME Section IV: still visible). */
+        trippedWith: z.enum(CUTOFF_TRIP_POSITIONS, 'Say whether water was still visible in the glass when the cutoff tripped.').nullish(),
         burnerStopped: z.boolean('Say whether the burner stopped.'),
       })
       .nullish(),

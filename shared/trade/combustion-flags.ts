@@ -6,18 +6,57 @@ import { inWcToPascal } from './units';
 export const VENT_TYPES = ['draft_hood', 'barometric_damper', 'power_vent', 'direct_vent'] as const;
 export type VentType = (typeof VENT_TYPES)[number];
 
-const ANSI_Z21 = 'ANSI Z21 vented-appliance standards, 400 ppm air-free CO (secondary; that Z21.13 boilers use 400 ppm is from memory)';
 const BPI_BANDS = 'from memory: BPI-1200 flue-CO action levels (as-measured CO)';
 const BPI_STANDARDS = 'BPI Technical Standards for the Building Analyst (secondary)';
 
 /** Air-free CO limit for certifying vented heating appliances. A certification limit, not a field action level. */
 export const AIR_FREE_CO_CERTIFICATION_LIMIT_PPM = 400;
+/** Air-free CO limit for certifying conventional residential storage water heaters. */
+export const WATER_HEATER_AIR_FREE_CO_LIMIT_PPM = 200;
+
+export const APPLIANCE_KINDS_FOR_CO = ['steam_boiler', 'hot_water_boiler', 'water_heater', 'furnace'] as const;
+export type CoApplianceKind = (typeof APPLIANCE_KINDS_FOR_CO)[number];
+
+export type AirFreeCoLimit = { ppm: number; standard: string; source: string };
+
+/**
+ * One air-free CO limit per appliance standard: 200 ppm for water heaters, 400 ppm for vented heating equipment
+ * (boilers, furnaces). Without a kind, the heating-equipment limit applies. The ANSI Z21 standards are gas-appliance
+ * standards; an oil appliance's sample is held to the same limit by common practice.
+ */
+export function airFreeCoLimit(kind?: CoApplianceKind): AirFreeCoLimit {
+  if (kind !== undefined) requireOneOf('applianceKind', kind, APPLIANCE_KINDS_FOR_CO);
+  if (kind === 'water_heater') {
+    return {
+      ppm: WATER_HEATER_AIR_FREE_CO_LIMIT_PPM,
+      standard: 'ANSI Z21.10.1 (gas water heaters)',
+      source: 'ANSI Z21 appliance standards: 200 ppm air-free CO for conventional residential water heaters (ANSI Z21.10.1), quoted in trade literature (secondary)',
+    };
+  }
+  if (kind === 'furnace') {
+    return {
+      ppm: AIR_FREE_CO_CERTIFICATION_LIMIT_PPM,
+      standard: 'ANSI Z21.47 (gas furnaces)',
+      source: 'ANSI Z21 appliance standards: 400 ppm air-free CO for vented heating equipment, quoted in trade literature (secondary; the furnace standard number Z21.47 is from memory)',
+    };
+  }
+  return {
+    ppm: AIR_FREE_CO_CERTIFICATION_LIMIT_PPM,
+    standard: 'ANSI Z21.13 (gas boilers)',
+    source: 'ANSI Z21 vented-appliance standards, 400 ppm air-free CO (secondary; that Z21.13 boilers use 400 ppm is from memory)',
+  };
+}
 /** Upper ends of the BPI flue-CO bands, as-measured ppm: acceptable, service recommended, service required. */
 export const BPI_FLUE_CO_BANDS_PPM = { acceptable: 25, serviceRecommended: 100, serviceRequired: 400 } as const;
 /** BPI draft test: at least −2.5 to −5 Pa at steady state; the least strict end is used. */
 export const BPI_MIN_DRAFT_PA = -2.5;
 export const BPI_SPILLAGE_LIMIT_SECONDS = 60;
 export const BPI_AMBIENT_CO_ABORT_PPM = 35;
+/** Above this ambient CO (and up to the abort level) the occupant is advised. 9 ppm is also the NAAQS 8-hour level. */
+export const BPI_AMBIENT_CO_ADVISE_PPM = 9;
+const BPI_AMBIENT_ADVISE =
+  'from memory: BPI Technical Standards for the Building Analyst, ambient CO action levels (advise the occupant above 9 ppm); ' +
+  'US NAAQS: 9 ppm over 8 hours (secondary)';
 
 export type CombustionFlagInput = {
   coPpm: number;
@@ -26,6 +65,8 @@ export type CombustionFlagInput = {
   ambientCoPpm?: number;
   spillageSeconds?: number;
   ventType?: VentType;
+  /** Chooses the air-free CO limit by appliance standard; without it the heating-equipment limit applies. */
+  applianceKind?: CoApplianceKind;
 };
 
 const NATURAL_DRAFT: readonly VentType[] = ['draft_hood', 'barometric_damper'];
@@ -39,6 +80,7 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
   const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireReading('ambientCoPpm', v));
   const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
+  const coLimit = airFreeCoLimit(optional(input.applianceKind, (v) => requireOneOf('applianceKind', v, APPLIANCE_KINDS_FOR_CO)));
 
   if (ambientCoPpm !== undefined && ambientCoPpm > BPI_AMBIENT_CO_ABORT_PPM) {
     flags.push({
@@ -49,6 +91,19 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
       threshold: BPI_AMBIENT_CO_ABORT_PPM,
       unit: 'ppm',
       source: BPI_STANDARDS,
+    });
+  } else if (ambientCoPpm !== undefined && ambientCoPpm > BPI_AMBIENT_CO_ADVISE_PPM) {
+    flags.push({
+      code: 'ambient_co_advise_occupant',
+      severity: 'warning',
+      message:
+        `Ambient CO ${ambientCoPpm} ppm is above ${BPI_AMBIENT_CO_ADVISE_PPM} ppm: tell the occupant, look for the source ` +
+        '(this appliance, another appliance, a vehicle) and recommend a working CO alarm. Above ' +
+        `${BPI_AMBIENT_CO_ABORT_PPM} ppm, stop the work and get people to fresh air.`,
+      value: ambientCoPpm,
+      threshold: BPI_AMBIENT_CO_ADVISE_PPM,
+      unit: 'ppm',
+      source: BPI_AMBIENT_ADVISE,
     });
   }
 
@@ -68,17 +123,17 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
 
   flags.push(...flueCoFlags(coPpm, spillageFailed));
 
-  if (coAirFreePpm > AIR_FREE_CO_CERTIFICATION_LIMIT_PPM) {
+  if (coAirFreePpm > coLimit.ppm) {
     flags.push({
       code: 'air_free_co_above_certification_limit',
       severity: 'warning',
       message:
-        `Air-free CO ${Math.round(coAirFreePpm)} ppm is above the ${AIR_FREE_CO_CERTIFICATION_LIMIT_PPM} ppm limit used to certify ` +
-        'vented appliances. This is a certification limit, not a field action level.',
+        `Air-free CO ${Math.round(coAirFreePpm)} ppm is above the ${coLimit.ppm} ppm limit of ${coLimit.standard} used to certify ` +
+        'this kind of appliance. This is a certification limit, not a field action level.',
       value: coAirFreePpm,
-      threshold: AIR_FREE_CO_CERTIFICATION_LIMIT_PPM,
+      threshold: coLimit.ppm,
       unit: 'ppm air-free',
-      source: ANSI_Z21,
+      source: coLimit.source,
     });
   }
 

@@ -1,5 +1,5 @@
 import { combustionEfficiencyPct, excessAirPctFromO2 } from './combustion-efficiency';
-import { combustionSafetyFlags, VENT_TYPES, type VentType } from './combustion-flags';
+import { airFreeCoLimit, APPLIANCE_KINDS_FOR_CO, combustionSafetyFlags, VENT_TYPES, type CoApplianceKind, type VentType } from './combustion-flags';
 import { co2MaxPct, FUEL_MODELS, METHOD_19_SOURCE, requireFuel, type CombustionFuel } from './fuels';
 import { SIEGERT_BASIS, siegertFlueLossPct, siegertSource } from './siegert';
 import type { TradeFlag } from './trade-flag';
@@ -26,6 +26,8 @@ export type CombustionInput = {
   spillageSeconds?: number;
   ventType?: VentType;
   condensing?: boolean;
+  /** Chooses the air-free CO limit by appliance standard (200 ppm water heaters, 400 ppm boilers and furnaces). */
+  applianceKind?: CoApplianceKind;
 };
 
 export type CombustionAnalysis = {
@@ -33,6 +35,8 @@ export type CombustionAnalysis = {
   co2MaxPct: number;
   excessAirPct: number;
   coAirFreePpm: number;
+  /** The air-free CO limit of this appliance's standard (200 ppm water heaters, 400 ppm boilers and furnaces). */
+  coAirFreeLimitPpm: number;
   /** % of HHV; null for condensing appliances, where this method does not apply. */
   efficiencyPct: number | null;
   efficiencyBasis: string;
@@ -70,6 +74,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
   const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireReading('ambientCoPpm', v));
   const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
+  const applianceKind = optional(input.applianceKind, (v) => requireOneOf('applianceKind', v, APPLIANCE_KINDS_FOR_CO));
   if (input.condensing !== undefined && typeof input.condensing !== 'boolean') {
     throw new TradeInputError('condensing', `must be true or false, got ${String(input.condensing)}`);
   }
@@ -77,7 +82,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
 
   const excessAirPct = excessAirPctFromO2(fuel, o2Pct);
   const coAirFreePpm = airFreeCoPpm(coPpm, o2Pct);
-  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType });
+  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType, applianceKind });
   if (condensing) {
     flags.push({
       code: 'efficiency_not_applicable',
@@ -106,6 +111,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
     co2MaxPct: co2MaxPct(fuel),
     excessAirPct,
     coAirFreePpm,
+    coAirFreeLimitPpm: airFreeCoLimit(applianceKind).ppm,
     efficiencyPct: condensing ? null : efficiencyPct,
     efficiencyBasis: `HHV basis, heat-loss method, ${FUEL_MODELS[fuel].description}`,
     siegertLossPct: siegertFlueLossPct({ fuel, o2Pct, flueTempF, airTempF }),
@@ -113,7 +119,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
     flags,
     sources: {
       co2: `${METHOD_19_SOURCE}; CO2 = CO2max·(20.9 − O2)/20.9`,
-      coAirFree: '40 CFR Part 60, Appendix A, Method 19 diluent correction: CO·20.9/(20.9 − O2) (secondary copy)',
+      coAirFree: `40 CFR Part 60, Appendix A, Method 19 diluent correction: CO·20.9/(20.9 − O2) (secondary copy); limit: ${airFreeCoLimit(applianceKind).source}`,
       excessAirAndEfficiency:
         'fuel stoichiometry and heat-loss method; checked for natural gas against US DOE Steam Tip Sheet #4 (2006), secondary copy',
       siegert: siegertSource(fuel),

@@ -160,6 +160,16 @@ const ON_CONDITION = 'common practice: inspected at every annual service visit; 
 const ASHRAE = 'ASHRAE Handbook, HVAC Applications, "Owning and Operating Costs" chapter, service-life table (1978 survey), secondary copy';
 const SECTION_VI = 'ASME BPVC Section VI, Recommended Rules for the Care and Operation of Heating Boilers';
 
+/**
+ * ASHRAE median service lives kept as planning ages: the stock forecast lists parts past them to plan for, and the
+ * due engine never turns them into replacement dates.
+ */
+export const PLANNING_MEDIAN_YEARS = {
+  circulator: { years: 10, row: 'pumps, pipe-mounted' },
+  burners: { years: 21, row: 'burners' },
+} as const satisfies Partial<Record<ComponentType, { years: number; row: string }>>;
+export const PLANNING_MEDIAN_SOURCE = `${ASHRAE}: medians describe populations, not one unit: a reason to inspect and plan, not a fault`;
+
 const onCondition = (componentType: ComponentType): DueRule => ({
   componentType,
   inspectionIntervalMonths: 12,
@@ -178,13 +188,20 @@ const replacedEveryService = (componentType: ComponentType): DueRule => ({
   source: 'common practice: replaced at every annual service',
 });
 
+/**
+ * Age is not a fault: ASHRAE's medians describe populations, not one unit, so a part past its median is inspected and
+ * planned for (the replacement prospects, the stock forecast), never "replacement due" by age alone. Replacement is
+ * due on condition, or where a company sets a replacement interval of its own or from the manufacturer.
+ */
 const medianAge = (componentType: ComponentType, years: number, row: string): DueRule => ({
   componentType,
   inspectionIntervalMonths: 12,
-  replacementAgeYears: years,
-  replacementPolicy: 'fixed_age',
-  basis: 'published',
-  source: `${ASHRAE}: "${row}" median ${years} years, used as a planning age (a median, not a prediction); inspected annually (common practice)`,
+  replacementAgeYears: null,
+  replacementPolicy: 'on_condition',
+  basis: 'common_practice',
+  source:
+    `${ON_CONDITION}. ${ASHRAE}: "${row}" median ${years} years is a planning age for the whole population, ` +
+    'not a replacement date for one unit',
 });
 
 const safetyValveTest = (componentType: ComponentType): DueRule => ({
@@ -199,8 +216,8 @@ const safetyValveTest = (componentType: ComponentType): DueRule => ({
 
 const defaults: Record<ComponentType, DueRule> = {
   ...(Object.fromEntries(COMPONENT_TYPE_CODES.map((t) => [t, onCondition(t)])) as Record<ComponentType, DueRule>),
-  burners: medianAge('burners', 21, 'burners'),
-  circulator: medianAge('circulator', 10, 'pumps, pipe-mounted'),
+  burners: medianAge('burners', PLANNING_MEDIAN_YEARS.burners.years, PLANNING_MEDIAN_YEARS.burners.row),
+  circulator: medianAge('circulator', PLANNING_MEDIAN_YEARS.circulator.years, PLANNING_MEDIAN_YEARS.circulator.row),
   nozzle: replacedEveryService('nozzle'),
   oil_filter: replacedEveryService('oil_filter'),
   low_water_cutoff_float: {

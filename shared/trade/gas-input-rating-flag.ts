@@ -10,10 +10,14 @@ export function gasInputRatingFlag(rating: RatingComparison, ratedBtuh: number, 
   requireNumber('ratedBtuh', ratedBtuh, { minExclusive: 0 });
   if (tolerancePct !== null) requireNumber('underFiringTolerancePct', tolerancePct, { min: 0, max: 100 });
   if (rating.status === 'over_fired') {
+    const against =
+      rating.altitudeDeratePct > 0
+        ? `the ${Math.round(rating.allowedBtuPerHour).toLocaleString('en-US')} Btu/h allowed at this altitude (the ${ratedBtuh.toLocaleString('en-US')} Btu/h nameplate derated ${rating.altitudeDeratePct.toFixed(1)} %)`
+        : `the nameplate rating of ${ratedBtuh.toLocaleString('en-US')} Btu/h`;
     return {
       code: 'gas_input_over_fired',
       severity: 'warning',
-      message: `Clocked input is ${rating.deviationPct.toFixed(1)} % above the nameplate rating of ${ratedBtuh.toLocaleString('en-US')} Btu/h: over-firing is prohibited. Adjust to the manufacturer's instructions.`,
+      message: `Clocked input is ${rating.deviationPct.toFixed(1)} % above ${against}, beyond the ${rating.overFiringTolerancePct} % clocking tolerance: over-firing is prohibited. Adjust to the manufacturer's instructions.`,
       value: Math.round(rating.allowedBtuPerHour * (1 + rating.deviationPct / 100)),
       threshold: Math.round(rating.allowedBtuPerHour),
       unit: 'Btu/h',

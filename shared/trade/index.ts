@@ -20,3 +20,4 @@ export * from './component-types';
 export * from './due-dates';
 export * from './radiator-edr';
 export * from './boiler-sizing';
+export * from './low-water-cutoff';

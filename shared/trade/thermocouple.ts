@@ -1,3 +1,4 @@
+import type { TradeFlag } from './trade-flag';
 import { requireReading } from './reading-ranges';
 
 export const THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV = { min: 25, max: 30 } as const;
@@ -48,4 +49,22 @@ export function assessThermocoupleMillivolts(input: { openCircuitMv?: number; cl
     reason: `Open circuit ${open} mV (typical ${min}–${max} mV).${closedNote}`,
     source: TYPICAL_SOURCE,
   };
+}
+
+/** A thermocouple judged "replace" is a failed safety component, so it raises a flag like any other. */
+export function thermocoupleFlags(assessment: ThermocoupleAssessment, openCircuitMv: number | null): TradeFlag[] {
+  if (assessment.status !== 'replace') return [];
+  return [
+    {
+      code: 'thermocouple_replace',
+      severity: 'warning',
+      message:
+        `${assessment.reason} A weak thermocouple can let the pilot safety drop out or fail to hold the gas valve open; ` +
+        "replace it and test the pilot safety to the gas valve manufacturer's instructions.",
+      value: openCircuitMv,
+      threshold: THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV,
+      unit: 'mV open circuit',
+      source: assessment.source,
+    },
+  ];
 }

@@ -71,6 +71,16 @@ function readingRequirements(f: CompletionFacts): Requirement[] {
     for (const message of messages) add({ field, label: READING_LABELS[key] ?? field, message });
   }
 
+  // A cutoff passes only with water still visible in the glass, so a test without that is not finished.
+  const cutoff = f.readings.lowWaterCutoff as { burnerStopped?: unknown; trippedWith?: unknown } | null | undefined;
+  if (cutoff?.burnerStopped === true && (cutoff.trippedWith === null || cutoff.trippedWith === undefined)) {
+    add({
+      field: 'readings.lowWaterCutoff.trippedWith',
+      label: READING_LABELS.lowWaterCutoff,
+      message: 'Say whether water was still visible in the glass when the cutoff stopped the burner.',
+    });
+  }
+
   const fired = f.appliance?.construction !== 'electric';
   for (const key of f.requiredReadings as ReadingKey[]) {
     if (!Object.hasOwn(READING_LABELS, key) || taken.has(key)) continue;

@@ -1,13 +1,14 @@
 import { AIR_FREE_CO_CERTIFICATION_LIMIT_PPM } from '../trade/combustion-flags';
 import { THERMOCOUPLE_REPLACE_BELOW_OPEN_CIRCUIT_MV, THERMOCOUPLE_TYPICAL_OPEN_CIRCUIT_MV } from '../trade/thermocouple';
+import { describeGaugeGlassLevel } from '../trade/gauge-glass';
 
 /** The part of a visit's stored results (computed and sourced by shared/trade when it was saved) the report reads. */
 export type StoredResults = {
-  combustion?: { efficiencyPct: number | null; coAirFreePpm: number; co2Pct?: number };
+  combustion?: { efficiencyPct: number | null; coAirFreePpm: number; coAirFreeLimitPpm?: number; co2Pct?: number };
   gasInput?: { inputBtuPerHour: number; rating?: { status: 'over_fired' | 'under_fired' | 'within_rating'; allowedBtuPerHour: number } };
   thermocouple?: { status: string };
-  gaugeGlass?: { fraction: number; status?: 'ok' | 'warning' | 'stop' };
-  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean };
+  gaugeGlass?: { fraction: number | null; mark?: 'at' | 'below' | 'above' | null; status?: 'ok' | 'warning' | 'stop' };
+  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean; trippedWith?: 'water_visible' | 'below_visible' | null };
 };
 
 export type ReadingMeaning = { reading: string; value: string; meaning: string };
@@ -23,7 +24,8 @@ export function readingMeanings(results: StoredResults, readings: { steamOperati
   const c = results.combustion;
   if (c) {
     const co = Math.round(c.coAirFreePpm);
-    const limit = AIR_FREE_CO_CERTIFICATION_LIMIT_PPM;
+    // Results stored before the limit was chosen by appliance standard carry none: they were judged at 400 ppm.
+    const limit = c.coAirFreeLimitPpm ?? AIR_FREE_CO_CERTIFICATION_LIMIT_PPM;
     out.push({
       reading: 'Carbon monoxide in the flue',
       value: `${fmt(co)} ppm air-free`,
@@ -77,14 +79,16 @@ export function readingMeanings(results: StoredResults, readings: { steamOperati
       value: results.lowWaterCutoff.passed ? 'passed' : 'failed',
       meaning: results.lowWaterCutoff.passed
         ? 'the burner stopped when the water was lowered, as it should'
-        : 'the burner did not stop: the boiler is not protected against firing without water',
+        : results.lowWaterCutoff.trippedWith === 'below_visible'
+          ? 'the burner stopped only after the water was out of sight in the glass: too late, so the test failed'
+          : 'the burner did not stop: the boiler is not protected against firing without water',
     });
   }
   if (results.gaugeGlass) {
     out.push({
       reading: 'Water in the gauge glass',
-      value: `${Math.round(results.gaugeGlass.fraction * 100)} % of the glass`,
-      meaning: results.gaugeGlass.status === 'stop' ? 'too low to run safely' : results.gaugeGlass.status === 'warning' ? 'low: keep an eye on it' : 'a safe water level',
+      value: describeGaugeGlassLevel(results.gaugeGlass),
+      meaning: results.gaugeGlass.status === 'stop' ? 'too low to run safely' : results.gaugeGlass.status === 'warning' ? 'low: the cause needs finding before it runs on' : 'a safe water level',
     });
   }
   if (typeof readings.steamOperatingPsi === 'number') {

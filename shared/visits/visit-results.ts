@@ -1,14 +1,18 @@
-import type { Construction, Fuel, VentType } from '../schemas/enums';
+import type { ApplianceKind, Construction, Fuel, VentType } from '../schemas/enums';
 import type { ReadingsInput } from '../schemas/visits';
 import {
   analyzeCombustion,
-  assessGaugeGlassLevel,
+  assessGaugeGlassReading,
+  assessLowWaterCutoff,
   assessThermocoupleMillivolts,
   clockGasInput,
   compareInputToRating,
   gasInputRatingFlag,
-  parseGaugeGlassLevel,
+  LOW_WATER_CUTOFF_FAILED,
+  parseGaugeGlassReading,
+  thermocoupleFlags,
   TradeInputError,
+  type CutoffTripPosition,
   type CombustionAnalysis,
   type GaugeGlassAssessment,
   type RatingComparison,
@@ -31,6 +35,10 @@ export type ResultFacts = {
   inputBtuh?: number | null;
   /** The company's under-firing tolerance; without it only over-firing is judged. */
   underFiringTolerancePct?: number | null;
+  /** Chooses the air-free CO limit by appliance standard; without it the heating-equipment limit applies. */
+  kind?: ApplianceKind | null;
+  /** The site's elevation, ft; the nameplate is derated for altitude before the clocked input is judged. */
+  elevationFt?: number | null;
 };
 
 type Loose<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
@@ -48,7 +56,7 @@ export type ReadingResults = {
   gasInput: Computed<GasInputResult>;
   thermocouple: Computed<ThermocoupleAssessment>;
   gaugeGlass: Computed<GaugeGlassAssessment>;
-  lowWaterCutoff: { type: 'float' | 'probe'; passed: boolean } | null;
+  lowWaterCutoff: LowWaterCutoffResult | null;
   lowWaterCutoffFailed: boolean;
   /** Every flag the readings raise, in the order they are stored. */
   flags: TradeFlag[];
@@ -62,22 +70,15 @@ export type VisitResults = {
   gasInput?: GasInputResult;
   thermocouple?: ThermocoupleAssessment;
   gaugeGlass?: GaugeGlassAssessment;
-  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean };
+  lowWaterCutoff?: LowWaterCutoffResult;
   /** Every flag from the computations above, in one list, so the form can show them together. */
   flags: TradeFlag[];
 };
 
-export const LOW_WATER_CUTOFF_FAILED: TradeFlag = {
-  code: 'low_water_cutoff_failed',
-  severity: 'stop',
-  message:
-    'The burner did not stop when the low-water cutoff was tested: the boiler is not protected against firing dry. ' +
-    'Do not leave it firing; follow the control manufacturer’s instructions, local codes and licensed practice.',
-  value: null,
-  threshold: null,
-  unit: null,
-  source: 'common practice: a low-water cutoff that does not stop the burner has failed its test',
-};
+/** A cutoff test as stored: passed only when the burner stopped with water still visible in the glass. */
+export type LowWaterCutoffResult = { type: 'float' | 'probe'; passed: boolean; trippedWith?: CutoffTripPosition | null };
+
+export { LOW_WATER_CUTOFF_FAILED };
 
 const num = (v: number | null | undefined) => (typeof v === 'number' && Number.isFinite(v) ? v : undefined);
 
@@ -114,6 +115,7 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
             spillageSeconds: num(c?.spillageSeconds),
             ventType: facts.ventType,
             condensing: facts.construction === 'condensing',
+            applianceKind: facts.kind ?? undefined,
           }),
         )
       : null;
@@ -128,7 +130,7 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
           if (!facts?.inputBtuh) return clocked;
           const tolerancePct = facts.underFiringTolerancePct ?? null;
           // No company tolerance: only over-firing is judged.
-          const rating = compareInputToRating({ measuredBtuPerHour: clocked.inputBtuPerHour, ratedBtuPerHour: facts.inputBtuh, underFiringTolerancePct: tolerancePct ?? 100 });
+          const rating = compareInputToRating({ measuredBtuPerHour: clocked.inputBtuPerHour, ratedBtuPerHour: facts.inputBtuh, underFiringTolerancePct: tolerancePct ?? 100, elevationFt: num(facts.elevationFt) });
           ratingFlag = gasInputRatingFlag(rating, facts.inputBtuh, tolerancePct);
           return { ...clocked, rating };
         })
@@ -140,18 +142,20 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
     open !== undefined || closed !== undefined ? attempt('thermocouple', t, () => assessThermocoupleMillivolts({ openCircuitMv: open, closedCircuitMv: closed })) : null;
 
   const level = r.gaugeGlassLevel?.trim();
-  const gaugeGlass = level ? attempt('gaugeGlassLevel', level, () => assessGaugeGlassLevel(parseGaugeGlassLevel(level))) : null;
+  const gaugeGlass = level ? attempt('gaugeGlassLevel', level, () => assessGaugeGlassReading(parseGaugeGlassReading(level))) : null;
 
   const w = r.lowWaterCutoff;
-  // A burner that did not stop is a stop on the phone even before the cutoff's type is chosen.
-  const lowWaterCutoffFailed = w?.burnerStopped === false;
-  const lowWaterCutoff = w?.type && typeof w.burnerStopped === 'boolean' ? { type: w.type, passed: w.burnerStopped } : null;
+  // A failed test is a stop on the phone even before the cutoff's type is chosen.
+  const cutoff = typeof w?.burnerStopped === 'boolean' ? assessLowWaterCutoff({ burnerStopped: w.burnerStopped, trippedWith: w.trippedWith }) : null;
+  const lowWaterCutoffFailed = cutoff?.passed === false;
+  const lowWaterCutoff = w?.type && cutoff ? { type: w.type, passed: cutoff.passed, trippedWith: cutoff.trippedWith } : null;
 
   const flags = [
     ...(combustion?.ok ? combustion.value.flags : []),
     ...(ratingFlag ? [ratingFlag] : []),
+    ...(thermocouple?.ok ? thermocoupleFlags(thermocouple.value, open ?? null) : []),
     ...(gaugeGlass?.ok ? gaugeGlass.value.flags : []),
-    ...(lowWaterCutoffFailed ? [LOW_WATER_CUTOFF_FAILED] : []),
+    ...(cutoff?.flags ?? []),
   ];
   const stopFlags = flags.filter((f) => f.severity === 'stop');
   const outcomeRequired = lowWaterCutoffFailed || stopFlags.length > 0;

@@ -324,7 +324,42 @@ describe('GET /api/due: the tenant-wide due list', () => {
         { typeCode: 'thermocouple', typeLabel: 'thermocouple', specKey: '24 in', count: 2 },
         { typeCode: 'thermocouple', typeLabel: 'thermocouple', specKey: '30 in', count: 1 },
       ],
+      pastMedianLife: [],
+      pastMedianLifeSource: expect.stringMatching(/ASHRAE/),
     });
+  });
+});
+
+describe('GET /api/due/stock: working parts past their median life are planned for, never due by age', () => {
+  // Source: ASHRAE Handbook, HVAC Applications, service-life table (secondary copy): pumps, pipe-mounted median
+  // 10 years; burners 21 years. The medians describe populations, not one unit.
+  it('lists working circulators and burners that reach their median by the window’s end, apart from what is due', async () => {
+    const p = await createTenant(ctx.db);
+    const agent = (await agentsFor(app, p)).technician;
+    const today = todayInTimeZone(p.company.timeZone);
+    const home = await site(ctx.db, p);
+    const old = await appliance(ctx.db, p, home.id, { kind: 'hot_water_boiler', installedOn: addDays(addMonths(today, -120), 30) });
+    const young = await appliance(ctx.db, p, home.id, { kind: 'hot_water_boiler', installedOn: addMonths(today, -60) });
+    const aging = await component(ctx.db, p, old.id, { typeCode: 'circulator', lastInspectedOn: addMonths(today, -2) });
+    await component(ctx.db, p, old.id, { typeCode: 'burners', installedOn: addDays(addMonths(today, -252), -1), lastInspectedOn: addMonths(today, -2) });
+    await component(ctx.db, p, young.id, { typeCode: 'circulator', lastInspectedOn: addMonths(today, -2) });
+    await component(ctx.db, p, old.id, { typeCode: 'circulator', specKey: 'failed', lastInspectedOn: today, conditionFailed: true });
+    await recomputeDueForCompany(ctx.db, p.company.id);
+
+    const res = await agent.get('/api/due/stock').query({ withinDays: 60 });
+    expect(res.status).toBe(200);
+    expect(res.body.pastMedianLife).toEqual([
+      { typeCode: 'burners', typeLabel: expect.any(String), specKey: '', count: 1 },
+      { typeCode: 'circulator', typeLabel: expect.any(String), specKey: '', count: 1 },
+    ]);
+    expect(res.body.pastMedianLifeSource).toMatch(/ASHRAE.*not a fault/);
+    // The failed one is a replacement (condition); the aging working one is not, and is due only for inspection.
+    expect(res.body.replacements).toEqual([{ typeCode: 'circulator', typeLabel: expect.any(String), specKey: 'failed', count: 1 }]);
+    const [stored] = await ctx.db.select().from(components).where(eq(components.id, aging.id));
+    expect(stored).toMatchObject({ dueKind: 'inspection', dueOn: addMonths(addMonths(today, -2), 12) });
+    // Before the circulator turns ten, it is not in the plan.
+    const sooner = await agent.get('/api/due/stock').query({ withinDays: 10 });
+    expect(sooner.body.pastMedianLife.map((r: { typeCode: string }) => r.typeCode)).toEqual(['burners']);
   });
 });
 

@@ -171,6 +171,22 @@ describe('sites', () => {
     expect(audits).toHaveLength(1);
   });
 
+  it("records the site's elevation for the altitude derate, and refuses one outside the derate rule's range", async () => {
+    const site = await insertSite(ctx.db, { companyId: t.company.id, customerId: t.customer.id });
+    const res = await as.technician.patch(`/api/sites/${site.id}`).send({ elevationFt: 5280 });
+    expect(res.status).toBe(200);
+    expect(res.body.elevationFt).toBe(5280);
+    expect((await ctx.db.select().from(sites).where(eq(sites.id, site.id)))[0].elevationFt).toBe(5280);
+    for (const elevationFt of [20_000, -5000, 12.5, 'high']) {
+      const bad = await as.technician.patch(`/api/sites/${site.id}`).send({ elevationFt });
+      expect(bad.status).toBe(400);
+      expect(Object.keys(bad.body.error.details)).toEqual(['elevationFt']);
+    }
+    const cleared = await as.technician.patch(`/api/sites/${site.id}`).send({ elevationFt: null });
+    expect(cleared.body.elevationFt).toBeNull();
+    expect((await ctx.db.select().from(sites).where(eq(sites.id, site.id)))[0].elevationFt).toBeNull();
+  });
+
   it('refuses a technician of another company and a customer of another company, with field errors', async () => {
     const wrongTech = await as.manager.post('/api/sites').send({ customerId: t.customer.id, street: '1 A St', town: 'Wrenfield', assignedTechnicianId: other.technician.user.id });
     expect(wrongTech.status).toBe(400);

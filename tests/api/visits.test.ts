@@ -236,8 +236,11 @@ describe('POST /api/visits/:id/complete', () => {
     const res = await as.technician.post(`/api/visits/${visit.id}/complete`).send(
       fullCompletion(visit, {
         checklist: [{ key: 'gauge_glass', mark: 'needs_attention', note: 'Glass etched, hard to read.' }],
-        readings: { combustion: goodCombustion, thermocouple: { openCircuitMv: 12 }, lowWaterCutoff: { type: 'float', burnerStopped: true } },
+        readings: { combustion: goodCombustion, thermocouple: { openCircuitMv: 12 }, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } },
         outcome: 'left_operating',
+        // The weak thermocouple raises a warning (from memory: replace below about 18 mV), so who was told is required.
+        outcomeReason: 'Thermocouple weak; replacement booked.',
+        outcomeToldWhom: 'Homeowner',
       }),
     );
     expect(res.status).toBe(200);
@@ -507,7 +510,7 @@ describe('POST /api/visits/:id/complete: what a completion must hold', () => {
     expect(row).toMatchObject({ status: 'completed', outcome: 'left_operating', findings: 'All in order.', signedOffBy: t.technician.user.id, revision: 1 });
     expect(row.checklist).toHaveLength(visit.checklist.length);
     expect(row.checklist.every((i) => i.mark === 'done')).toBe(true);
-    expect(row.readings).toEqual({ combustion: goodCombustion, lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', burnerStopped: true } });
+    expect(row.readings).toEqual({ combustion: goodCombustion, lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', trippedWith: 'water_visible', burnerStopped: true } });
     expect(row.completedAt).toBeInstanceOf(Date);
     expect(await storedComponent(parts.lowWaterCutoff.id)).toMatchObject({ lastInspectedOn: today, dueOn: addMonths(today, 12) });
   });
@@ -539,7 +542,7 @@ describe('POST /api/visits/:id/swaps', () => {
     expect(await ctx.db.select().from(auditLog).where(eq(auditLog.entityId, swap.id))).toHaveLength(1);
 
     // The visit's summary names what was replaced once it is completed; the weak reading was the old part's.
-    await as.technician.post(`/api/visits/${visit.id}/complete`).send(fullCompletion(visit, { readings: { thermocouple: { openCircuitMv: 12 } } })).expect(200);
+    await as.technician.post(`/api/visits/${visit.id}/complete`).send(fullCompletion(visit, { readings: { thermocouple: { openCircuitMv: 12 } }, outcomeReason: 'Old thermocouple was weak; replaced.', outcomeToldWhom: 'Homeowner' })).expect(200);
     expect(await storedComponent(fresh.id)).toMatchObject({ conditionFailed: false, lastInspectedOn: today, removedOn: null });
     const [visitEvent] = await ctx.db
       .select()

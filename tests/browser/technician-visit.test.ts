@@ -77,6 +77,7 @@ describe('a technician on a phone', () => {
     const lwco = page.locator('li[data-item="lwco_test"]');
     await lwco.getByRole('button', { name: 'Float' }).click();
     await lwco.getByRole('textbox', { name: 'Level in the glass when it tripped' }).fill('1/4');
+    await lwco.getByRole('button', { name: /Still visible in the glass/ }).click();
     await lwco.getByRole('button', { name: /Yes, it stopped/ }).click();
 
     // Gauge glass level, judged live.
@@ -109,7 +110,7 @@ describe('a technician on a phone', () => {
     await expect.poll(() => saveStatus(page).getAttribute('data-save-status'), { timeout: 10_000 }).toBe('saved');
     // The server's own results come back with the save.
     const kept = page.getByRole('region', { name: 'Kept with the visit' });
-    await kept.getByText('Stopped the burner (passed)').waitFor();
+    await kept.getByText('Stopped the burner with water visible in the glass (passed)').waitFor();
     expect(await kept.locator('[data-result="Efficiency (HHV)"]').textContent()).toBe(liveEfficiency);
 
     await page.getByRole('button', { name: 'Complete visit' }).click();
@@ -128,7 +129,7 @@ describe('a technician on a phone', () => {
     const stored = await fx.server.ctx.db.select().from(visits).where(eq(visits.id, visitId));
     expect(stored[0].status).toBe('completed');
     expect(stored[0].outcome).toBe('left_operating');
-    expect(stored[0].readings).toMatchObject({ gaugeGlassLevel: '5/8', lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', burnerStopped: true } });
+    expect(stored[0].readings).toMatchObject({ gaugeGlassLevel: '5/8', lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', trippedWith: 'water_visible', burnerStopped: true } });
     expect(stored[0].checklist.every((c) => c.mark === 'done')).toBe(true);
     expect(stored[0].readings).toMatchObject({ combustion: { o2Pct: 7.5, coPpm: 40, flueTempF: 428, airTempF: 68 } });
     const parts = await fx.server.ctx.db

@@ -44,6 +44,7 @@ describe('the visit report', () => {
     await combustion.getByRole('textbox', { name: /^Air temp/ }).fill('66');
     const lwco = page.locator('li[data-item="lwco_test"]');
     await lwco.getByRole('button', { name: 'Float' }).click();
+    await lwco.getByRole('button', { name: /Still visible in the glass/ }).click();
     await lwco.getByRole('button', { name: /Yes, it stopped/ }).click();
     await page.getByRole('button', { name: 'Left operating', exact: true }).click();
     await page.getByText('Everything a completed visit needs is recorded.').waitFor();

@@ -6,7 +6,7 @@ export const GOOD_COMBUSTION = { o2Pct: 7, coPpm: 50, flueTempF: 400, airTempF: 
 /** Readings that satisfy each requirement a default template can make; no warnings or stops among them. */
 const GOOD_READINGS: Partial<ReadingsInput> = {
   combustion: GOOD_COMBUSTION,
-  lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', burnerStopped: true },
+  lowWaterCutoff: { type: 'float', trippedAtLevel: '1/4', trippedWith: 'water_visible', burnerStopped: true },
 };
 
 type Options = {

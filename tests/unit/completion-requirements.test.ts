@@ -12,7 +12,7 @@ const goodCombustion = { o2Pct: 7, coPpm: 50, flueTempF: 400, airTempF: 70 };
 const complete = (over: Partial<CompletionFacts> = {}): CompletionFacts => ({
   type: 'annual_maintenance',
   checklist,
-  readings: { combustion: goodCombustion, lowWaterCutoff: { type: 'float', burnerStopped: true } },
+  readings: { combustion: goodCombustion, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } },
   readingSkips: {},
   requiredReadings: ['combustion', 'lowWaterCutoff'],
   flags: [],
@@ -41,14 +41,14 @@ describe('completionRequirements', () => {
   });
 
   it('counts a block with only blanks in it as not taken', () => {
-    expect(fields(complete({ readings: { combustion: { o2Pct: null, coPpm: '' }, lowWaterCutoff: { type: 'float', burnerStopped: true } } }))).toEqual([
+    expect(fields(complete({ readings: { combustion: { o2Pct: null, coPpm: '' }, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } } }))).toEqual([
       'readings.combustion',
     ]);
   });
 
   it('accepts a skip with a reason, refuses one without, and lets a taken reading stand over a skip', () => {
-    expect(fields(complete({ readings: { lowWaterCutoff: { type: 'float', burnerStopped: true } }, readingSkips: { combustion: 'Analyzer in repair.' } }))).toEqual([]);
-    const noReason = complete({ readings: { lowWaterCutoff: { type: 'float', burnerStopped: true } }, readingSkips: { combustion: '  ' } });
+    expect(fields(complete({ readings: { lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } }, readingSkips: { combustion: 'Analyzer in repair.' } }))).toEqual([]);
+    const noReason = complete({ readings: { lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } }, readingSkips: { combustion: '  ' } });
     expect(completionRequirements(noReason)).toEqual([
       { field: 'readingSkips.combustion', label: 'Combustion test', message: 'Say why the combustion test was not taken.' },
     ]);
@@ -60,7 +60,7 @@ describe('completionRequirements', () => {
   });
 
   it('lists a half-filled block and out-of-range values by field, as the schema words them', () => {
-    const typed = complete({ readings: { combustion: { o2Pct: 25, coPpm: 40 }, lowWaterCutoff: { type: 'float', burnerStopped: true } } });
+    const typed = complete({ readings: { combustion: { o2Pct: 25, coPpm: 40 }, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } } });
     expect(requirementDetails(completionRequirements(typed))).toEqual({
       'readings.combustion.o2Pct': ['O2 must be at most 20.8.'],
       'readings.combustion.flueTempF': ['Flue temperature must be a number.'],

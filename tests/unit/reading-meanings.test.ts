@@ -30,4 +30,17 @@ describe('readingMeanings', () => {
     expect(gas.meaning).toBe("above the nameplate's 125,000 Btu/h: burning more gas than it is built for");
     expect(readingMeanings({})).toEqual([]);
   });
+
+  it('says a cutoff that tripped with the water out of sight failed, and why', () => {
+    // from memory: ASME BPVC Section IV: the cutoff must act with water still visible in the gauge glass
+    expect(readingMeanings({ lowWaterCutoff: { type: 'float', passed: false, trippedWith: 'below_visible' } })[0]).toMatchObject({
+      value: 'failed',
+      meaning: 'the burner stopped only after the water was out of sight in the glass: too late, so the test failed',
+    });
+  });
+
+  it("words a level read against the maker's mark", () => {
+    // common practice: the boiler maker's normal-water-line mark governs the cold level
+    expect(readingMeanings({ gaugeGlass: { fraction: null, mark: 'below', status: 'warning' } })[0]).toMatchObject({ value: "below the maker's normal-water-line mark" });
+  });
 });

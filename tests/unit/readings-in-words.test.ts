@@ -21,5 +21,9 @@ describe('readings in plain words for the homeowner', () => {
       'The low-water safety switch did not stop the burner when tested.',
       'No water showed in the gauge glass.',
     ]);
+    expect(readingsInWords({ lowWaterCutoff: { passed: false, trippedWith: 'below_visible' }, gaugeGlass: { fraction: null } }).words).toEqual([
+      'The low-water safety switch stopped the burner too late, only after the water was out of sight: it failed its test.',
+      'Water showed in the gauge glass.',
+    ]);
   });
 });

@@ -94,6 +94,8 @@ export const sites = pgTable(
     town: text('town').notNull(),
     postalCode: text('postal_code'),
     accessNotes: text('access_notes'),
+    /** Feet above sea level; gas inputs are derated for altitude (NFPA 54) before the clocked input is judged. */
+    elevationFt: integer('elevation_ft'),
     assignedTechnicianId: uuid('assigned_technician_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

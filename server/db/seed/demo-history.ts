@@ -135,9 +135,10 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClo
     if (last && plan.special === 'thermocouple_due') {
       overrides = { thermocouple: { openCircuitMv: 16, closedCircuitMv: 7 } };
       recommendations = 'Replace the thermocouple at the next call; it is weak and the pilot may drop out.';
+      outcomeReason = 'Told the customer the thermocouple is weak (16 mV) and the pilot may drop out; replacement booked for the next call.';
     }
     const readings = demoReadings(f, shape, wear, overrides);
-    const results = resultsToStore(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction });
+    const results = resultsToStore(readings, { fuel: shape.fuel, ventType: a.ventType, construction: a.construction, kind: shape.kind });
     const checklist = checklistFor(f, plan);
 
     const swapped: string[] = [];
@@ -188,8 +189,8 @@ export function buildDemoHistory(f: Faker, plan: DemoHistoryPlan, clock: DemoClo
       recommendations,
       outcome,
       outcomeReason,
-      outcomeToldWhom: outcome === 'shut_down_unsafe' ? plan.customerName : null,
-      outcomeToldAt: outcome === 'shut_down_unsafe' ? departedAt : null,
+      outcomeToldWhom: outcomeReason !== null ? plan.customerName : null,
+      outcomeToldAt: outcomeReason !== null ? departedAt : null,
       signedOffBy: technicianId,
       signedOffAt: departedAt,
       completedAt: departedAt,

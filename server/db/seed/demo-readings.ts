@@ -43,7 +43,7 @@ export function demoReadings(f: Faker, a: Facts, wear: number, overrides: Partia
   if (a.kind === 'steam_boiler') {
     const cutOut = f.helpers.arrayElement([1.5, 2, 2]);
     readings.gaugeGlassLevel = f.helpers.arrayElement(['1/2', '1/2', '5/8', '3/8']);
-    readings.lowWaterCutoff = { type: a.steamLwco, trippedAtLevel: a.steamLwco === 'float' ? f.helpers.arrayElement(['1/4', '1/8', '1/4']) : null, burnerStopped: true };
+    readings.lowWaterCutoff = { type: a.steamLwco, trippedAtLevel: a.steamLwco === 'float' ? f.helpers.arrayElement(['1/4', '1/8', '1/4']) : null, trippedWith: 'water_visible', burnerStopped: true };
     readings.pressureControlCutInPsi = 0.5;
     readings.pressureControlCutOutPsi = cutOut;
     readings.steamOperatingPsi = round(cutOut - f.number.float({ min: 0, max: 0.4 }));

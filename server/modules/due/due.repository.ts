@@ -116,6 +116,25 @@ export const dueRepository = {
       .limit(q.limit);
   },
 
+  /** Present, working parts that reach their planning median (years by type) by `through`, grouped by type and spec. */
+  async pastMedianLife(db: DbOrTx, companyId: string, through: string, medians: Readonly<Record<string, { years: number }>>) {
+    const values = sql.join(Object.entries(medians).map(([type, m]) => sql`(${type}::text, ${m.years}::int)`), sql`, `);
+    const result = await db.execute<{ type_code: string; spec_key: string; catalog_label: string | null; count: number }>(sql`
+      with medians(type_code, years) as (values ${values})
+      select p.type_code, p.spec_key, cat.label as catalog_label, count(*)::int as count
+      from components p
+      join medians m on m.type_code = p.type_code
+      join appliances a on a.id = p.appliance_id and a.company_id = p.company_id
+      left join component_catalog cat on cat.company_id = p.company_id and cat.code = p.type_code
+      where p.company_id = ${companyId} and p.removed_on is null and not p.condition_failed and a.status <> 'removed'
+        and coalesce(p.installed_on, a.installed_on) is not null
+        and (coalesce(p.installed_on, a.installed_on) + make_interval(years => m.years))::date <= ${through}::date
+      group by p.type_code, p.spec_key, cat.label
+      order by p.type_code, p.spec_key
+    `);
+    return result.rows;
+  },
+
   /** Counts of what falls due through `through`, grouped by part type, spec and kind of work: one GROUP BY. */
   stock(db: DbOrTx, companyId: string, through: string) {
     return db

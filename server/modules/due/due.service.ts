@@ -1,6 +1,7 @@
 import type { AppContext } from '../../context';
 import { badRequest, notFound } from '../../lib/http-error';
 import { addDays } from '../../../shared/trade/iso-date';
+import { PLANNING_MEDIAN_SOURCE, PLANNING_MEDIAN_YEARS } from '../../../shared/trade/due-dates';
 import type { DueItemDto, DueRuleDto, DueStockDto, DueStockRow } from '../../../shared/schemas/due';
 import type { Page } from '../../../shared/schemas/records';
 import type { ApplianceKind } from '../../../shared/schemas/enums';
@@ -112,7 +113,9 @@ export function dueService(ctx: AppContext) {
         rows
           .filter((r) => r.dueKind === kind)
           .map((r) => ({ typeCode: r.typeCode, typeLabel: typeLabelFor(r.typeCode, r.catalogLabel), specKey: r.specKey, count: r.count }));
-      return { withinDays, through, replacements: pick('replacement'), inspections: pick('inspection') };
+      const aged = await dueRepository.pastMedianLife(ctx.db, companyId, through, PLANNING_MEDIAN_YEARS);
+      const pastMedianLife = aged.map((r) => ({ typeCode: r.type_code, typeLabel: typeLabelFor(r.type_code, r.catalog_label), specKey: r.spec_key, count: r.count }));
+      return { withinDays, through, replacements: pick('replacement'), inspections: pick('inspection'), pastMedianLife, pastMedianLifeSource: PLANNING_MEDIAN_SOURCE };
     },
   };
 }

@@ -6,8 +6,8 @@ type Results = {
   combustion?: { efficiencyPct: number | null; coAirFreePpm: number };
   gasInput?: { inputBtuPerHour: number; rating?: { status: string } };
   thermocouple?: { status?: string };
-  gaugeGlass?: { fraction: number };
-  lowWaterCutoff?: { passed: boolean };
+  gaugeGlass?: { fraction: number | null };
+  lowWaterCutoff?: { passed: boolean; trippedWith?: 'water_visible' | 'below_visible' | null };
 };
 
 // ANSI Z21 appliance standards' limit for vented heating appliances, air-free (secondary): used as the yardstick.
@@ -36,12 +36,15 @@ export function readingsInWords(raw: Record<string, unknown>): { words: string[]
     words.push(
       r.lowWaterCutoff.passed
         ? 'The low-water safety switch was tested and stopped the burner, as it should.'
-        : 'The low-water safety switch did not stop the burner when tested.',
+        : r.lowWaterCutoff.trippedWith === 'below_visible'
+          ? 'The low-water safety switch stopped the burner too late, only after the water was out of sight: it failed its test.'
+          : 'The low-water safety switch did not stop the burner when tested.',
     );
   }
   if (r.gaugeGlass) {
-    numbers.gaugeGlassFraction = Number(r.gaugeGlass.fraction.toFixed(3));
-    words.push(r.gaugeGlass.fraction > 0 ? 'Water showed in the gauge glass.' : 'No water showed in the gauge glass.');
+    const fraction = r.gaugeGlass.fraction;
+    if (fraction !== null) numbers.gaugeGlassFraction = Number(fraction.toFixed(3));
+    words.push(fraction === null || fraction > 0 ? 'Water showed in the gauge glass.' : 'No water showed in the gauge glass.');
   }
   if (r.gasInput?.rating?.status === 'over_fired') words.push('The burner was burning more gas than its rating; the technician adjusted or noted it.');
   if (r.thermocouple?.status === 'replace') words.push('The pilot safety sensor (thermocouple) was weak.');

@@ -58,6 +58,7 @@ async function sendOne(ctx: AppContext, company: { id: string; name: string; pho
     dueOn: r.due_on,
     partLabel: r.part_label,
     dueKind: r.due_kind,
+    failedOnCondition: r.condition_failed === true,
     appliance: { kind: r.appliance_kind, fuel: r.fuel, street: r.street, town: r.town },
   }));
   const urls = unsubscribeUrls(ctx, rows[0]!.customer_id);

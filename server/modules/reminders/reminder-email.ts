@@ -7,6 +7,8 @@ export type ReminderLine = {
   dueOn: string;
   partLabel: string | null;
   dueKind: 'inspection' | 'replacement' | null;
+  /** The part failed on condition at a visit; otherwise a replacement is due only by its set replacement interval. */
+  failedOnCondition?: boolean;
   appliance: { kind: ApplianceKind; fuel: Fuel; street: string; town: string };
 };
 
@@ -35,8 +37,15 @@ export function describeLine(line: ReminderLine, today: string): string {
   const past = line.dueOn <= today;
   const when = `${past ? 'was due on' : 'is due on'} ${longDate(line.dueOn)}`;
   if (line.kind === 'annual_service') return `${applianceWords(line.appliance)}: its yearly service ${when}.`;
-  const work = line.dueKind === 'replacement' ? 'replacement' : 'a check';
-  return `${applianceWords(line.appliance)}: the ${line.partLabel ?? 'part'} needs ${work}, which ${when}.`;
+  const part = line.partLabel ?? 'part';
+  // Age is not a fault: say whether the part was found failing, or is only on its set replacement interval.
+  if (line.dueKind === 'replacement' && line.failedOnCondition) {
+    return `${applianceWords(line.appliance)}: the ${part} was found worn or failing at the last visit and needs replacing, which ${when}.`;
+  }
+  if (line.dueKind === 'replacement') {
+    return `${applianceWords(line.appliance)}: the ${part} is due for replacement on its set replacement interval (it has not been found faulty), which ${when}.`;
+  }
+  return `${applianceWords(line.appliance)}: the ${part} needs a check, which ${when}.`;
 }
 
 export function reminderSubject(input: Pick<ReminderEmailInput, 'company' | 'lines'>): string {

@@ -156,6 +156,7 @@ export const remindersRepository = {
       due_on: string;
       part_label: string | null;
       due_kind: 'inspection' | 'replacement' | null;
+      condition_failed: boolean | null;
       appliance_id: string;
       appliance_kind: ApplianceKind;
       fuel: Fuel;
@@ -167,7 +168,7 @@ export const remindersRepository = {
       reminders_opt_out: boolean;
       attempts: number;
     }>(sql`
-      select r.id, r.kind, r.due_on::text as due_on, r.part_label, p.due_kind, r.appliance_id, a.kind as appliance_kind, a.fuel,
+      select r.id, r.kind, r.due_on::text as due_on, r.part_label, p.due_kind, p.condition_failed, r.appliance_id, a.kind as appliance_kind, a.fuel,
              s.street, s.town, c.id as customer_id, c.name as customer_name, c.email, c.reminders_opt_out, r.attempts
       from reminders r
       join appliances a on a.id = r.appliance_id and a.company_id = r.company_id

@@ -12,6 +12,7 @@ const siteColumns = {
   town: sites.town,
   postalCode: sites.postalCode,
   accessNotes: sites.accessNotes,
+  elevationFt: sites.elevationFt,
   assignedTechnicianId: sites.assignedTechnicianId,
   assignedTechnicianName: users.name,
 };

@@ -38,7 +38,7 @@ export function keyReadings(readings: ReadingsInput, results: VisitResults): Rec
   }
   if (results.gasInput) out.inputBtuPerHour = Math.round(results.gasInput.inputBtuPerHour);
   if (isNumber(readings.thermocouple?.openCircuitMv)) out.thermocoupleOpenCircuitMv = readings.thermocouple.openCircuitMv;
-  if (results.gaugeGlass) out.gaugeGlassFraction = round(results.gaugeGlass.fraction, 3);
+  if (results.gaugeGlass && results.gaugeGlass.fraction !== null) out.gaugeGlassFraction = round(results.gaugeGlass.fraction, 3);
   if (isNumber(readings.steamOperatingPsi)) out.steamOperatingPsi = readings.steamOperatingPsi;
   if (isNumber(readings.fillPressurePsi)) out.fillPressurePsi = readings.fillPressurePsi;
   return Object.keys(out).length ? out : null;

@@ -6,6 +6,7 @@ import {
   components,
   memberships,
   partSwaps,
+  sites,
   users,
   companies,
   visitAmendments,
@@ -26,9 +27,11 @@ export const visitsRepository = {
         construction: appliances.construction,
         inputBtuh: appliances.inputBtuh,
         underFiringTolerancePct: companies.underFiringTolerancePct,
+        elevationFt: sites.elevationFt,
       })
       .from(appliances)
       .innerJoin(companies, eq(companies.id, appliances.companyId))
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
       .where(and(eq(appliances.companyId, companyId), eq(appliances.id, id)))
       .limit(1);
     return row ?? null;

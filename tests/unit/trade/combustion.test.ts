@@ -8,7 +8,7 @@ import {
   type CombustionInput,
 } from '../../../shared/trade/combustion';
 import { COMBUSTION_FUELS } from '../../../shared/trade/fuels';
-import { VENT_TYPES } from '../../../shared/trade/combustion-flags';
+import { airFreeCoLimit, BPI_AMBIENT_CO_ADVISE_PPM, VENT_TYPES } from '../../../shared/trade/combustion-flags';
 
 const base: CombustionInput = { fuel: 'natural_gas', o2Pct: 6, coPpm: 10, flueTempF: 400, airTempF: 70 };
 const codes = (input: Partial<CombustionInput>) => analyzeCombustion({ ...base, ...input }).flags.map((f) => f.code);
@@ -126,6 +126,40 @@ describe('flags', () => {
     // Source: BPI Technical Standards for the Building Analyst (secondary): abort above 35 ppm ambient CO
     expect(flag({ ambientCoPpm: 36 }, 'ambient_co_stop_work')).toMatchObject({ severity: 'stop', threshold: 35, unit: 'ppm' });
     expect(codes({ ambientCoPpm: 35 })).not.toContain('ambient_co_stop_work');
+  });
+
+  it('ambient CO above 9 ppm, up to 35 ppm, advises the occupant', () => {
+    // from memory: BPI Technical Standards for the Building Analyst, ambient CO action levels: advise the occupant
+    // above 9 ppm; Source: US NAAQS, 9 ppm over 8 hours (secondary). Abort above 35 ppm (BPI, secondary).
+    expect(BPI_AMBIENT_CO_ADVISE_PPM).toBe(9);
+    expect(codes({ ambientCoPpm: 9 })).toEqual([]);
+    expect(flag({ ambientCoPpm: 10 }, 'ambient_co_advise_occupant')).toMatchObject({ severity: 'warning', value: 10, threshold: 9, unit: 'ppm' });
+    expect(codes({ ambientCoPpm: 35 })).toEqual(['ambient_co_advise_occupant']);
+    expect(codes({ ambientCoPpm: 36 })).toEqual(['ambient_co_stop_work']);
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 10_000, noNaN: true }), (ambientCoPpm) => {
+        const c = codes({ ambientCoPpm }).filter((x) => x.startsWith('ambient_co'));
+        const expected = ambientCoPpm > 35 ? ['ambient_co_stop_work'] : ambientCoPpm > 9 ? ['ambient_co_advise_occupant'] : [];
+        return JSON.stringify(c) === JSON.stringify(expected);
+      }),
+    );
+  });
+
+  it('one air-free CO limit per appliance standard: 200 ppm water heaters, 400 ppm boilers and furnaces', () => {
+    // Source: ANSI Z21 appliance standards, quoted in trade literature (secondary): 200 ppm air-free for conventional
+    // residential water heaters (ANSI Z21.10.1), 400 ppm for vented heating equipment (Z21.13 boilers: from memory).
+    expect(airFreeCoLimit('water_heater')).toMatchObject({ ppm: 200, standard: expect.stringMatching(/Z21\.10\.1/) });
+    expect(airFreeCoLimit('hot_water_boiler')).toMatchObject({ ppm: 400, standard: expect.stringMatching(/Z21\.13/) });
+    expect(airFreeCoLimit('steam_boiler').ppm).toBe(400);
+    expect(airFreeCoLimit('furnace').ppm).toBe(400);
+    expect(airFreeCoLimit().ppm).toBe(400);
+    // 20 ppm at 16 % O2 is 20 × 20.9 / 4.9 = 85.3 ppm air-free; 60 ppm at 16 % O2 is 255.9 ppm: over 200, under 400.
+    const heater = analyzeCombustion({ ...base, o2Pct: 16, coPpm: 60, applianceKind: 'water_heater' });
+    expect(heater.coAirFreePpm).toBeCloseTo(255.92, 2);
+    expect(heater.flags.find((f) => f.code === 'air_free_co_above_certification_limit')).toMatchObject({ threshold: 200, unit: 'ppm air-free' });
+    expect(heater.coAirFreeLimitPpm).toBe(200);
+    expect(codes({ o2Pct: 16, coPpm: 60, applianceKind: 'hot_water_boiler' })).not.toContain('air_free_co_above_certification_limit');
+    expect(() => analyzeCombustion({ ...base, applianceKind: 'kettle' as never })).toThrow(TradeInputError);
   });
 
   it('natural-draft vents: weaker than −2.5 Pa warns, positive pressure stops', () => {

@@ -16,6 +16,14 @@ const base: ComponentDueInput = {
   horizonDays: 30,
 };
 const due = (input: Partial<ComponentDueInput>) => computeComponentDue({ ...base, ...input });
+const companyTenYears: DueRule = {
+  componentType: 'circulator',
+  inspectionIntervalMonths: 12,
+  replacementAgeYears: 10,
+  replacementPolicy: 'fixed_age',
+  basis: 'company_policy',
+  source: 'company policy: circulators replaced at 10 years',
+};
 
 describe('computeComponentDue', () => {
   it('due today', () => {
@@ -50,9 +58,9 @@ describe('computeComponentDue', () => {
   });
 
   it('a part original with the appliance ages from the appliance install date', () => {
-    // Source: ASHRAE Handbook, HVAC Applications, service-life table, "pumps, pipe-mounted" median 10 years (secondary copy)
+    // A company's own fixed replacement interval (company policy, 10 years): the arithmetic of a fixed-age rule.
     const result = due({
-      rule: DEFAULT_DUE_RULES.circulator,
+      rule: companyTenYears,
       applianceInstalledOn: '2015-06-01',
       lastInspectedOn: '2024-10-01',
       today: '2025-05-01',
@@ -66,7 +74,7 @@ describe('computeComponentDue', () => {
     });
     expect(result.reason).toMatch(/original with the appliance/);
     // a circulator fitted later ages from its own date
-    expect(due({ rule: DEFAULT_DUE_RULES.circulator, installedOn: '2020-01-01', today: '2025-05-01' }).replacementDueOn).toBe('2030-01-01');
+    expect(due({ rule: companyTenYears, installedOn: '2020-01-01', today: '2025-05-01' }).replacementDueOn).toBe('2030-01-01');
   });
 
   it('a company-policy age gives a replacement due date', () => {
@@ -164,12 +172,33 @@ describe('DEFAULT_DUE_RULES', () => {
     for (const type of COMPONENT_TYPE_CODES) expect(DEFAULT_DUE_RULES[type].componentType).toBe(type);
   });
 
-  it('uses published medians for circulators and burners', () => {
+  it('names the ASHRAE medians for circulators and burners as planning ages, never as replacement dates', () => {
     // Source: ASHRAE Handbook, HVAC Applications, "Owning and Operating Costs", service-life table (secondary copy):
-    // pumps, pipe-mounted 10; burners 21
-    expect(DEFAULT_DUE_RULES.circulator).toMatchObject({ replacementPolicy: 'fixed_age', replacementAgeYears: 10, basis: 'published' });
-    expect(DEFAULT_DUE_RULES.circulator.source).toMatch(/ASHRAE.*pumps, pipe-mounted/);
-    expect(DEFAULT_DUE_RULES.burners).toMatchObject({ replacementPolicy: 'fixed_age', replacementAgeYears: 21, basis: 'published' });
+    // pumps, pipe-mounted 10; burners 21. The medians describe populations, not one unit.
+    expect(DEFAULT_DUE_RULES.circulator).toMatchObject({ replacementPolicy: 'on_condition', replacementAgeYears: null, inspectionIntervalMonths: 12 });
+    expect(DEFAULT_DUE_RULES.circulator.source).toMatch(/ASHRAE.*pumps, pipe-mounted" median 10 years is a planning age/);
+    expect(DEFAULT_DUE_RULES.burners).toMatchObject({ replacementPolicy: 'on_condition', replacementAgeYears: null });
+    expect(DEFAULT_DUE_RULES.burners.source).toMatch(/"burners" median 21 years/);
+  });
+
+  it('a working 11-year-old circulator is not overdue: it is inspected at the annual visit', () => {
+    // Source: ASHRAE service-life table (secondary copy): pumps, pipe-mounted median 10 years, a planning age only.
+    const result = due({ rule: DEFAULT_DUE_RULES.circulator, applianceInstalledOn: '2014-01-10', lastInspectedOn: '2024-11-20', today: '2025-02-01', horizonDays: 30 });
+    expect(result).toMatchObject({ status: 'ok', replacementDueOn: null, nextDue: { kind: 'inspection', dueOn: '2025-11-20' } });
+    expect(result.reason).not.toMatch(/replace/i);
+    // Condition still decides: a failed circulator is replaced now, whatever its age.
+    expect(due({ rule: DEFAULT_DUE_RULES.circulator, conditionFailed: true, today: '2025-02-01' }).status).toBe('replace_now');
+  });
+
+  it('no default rule makes a part due for replacement by its age', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...COMPONENT_TYPE_CODES), fc.integer({ min: 0, max: 60 }), (type, ageYears) => {
+        const rule = DEFAULT_DUE_RULES[type];
+        if (rule.replacementPolicy === 'annual') return true; // replaced at every service by practice, not by wear
+        const r = computeComponentDue({ ...base, rule, applianceInstalledOn: `${2025 - ageYears}-01-01`, lastInspectedOn: '2025-01-02', today: '2025-03-15' });
+        return r.replacementDueOn === null && r.nextDue?.kind !== 'replacement';
+      }),
+    );
   });
 
   it('replaces the oil nozzle and filter at every annual service', () => {
@@ -194,6 +223,6 @@ describe('DEFAULT_DUE_RULES', () => {
       if (rule.basis === 'common_practice') expect(rule.replacementAgeYears).toBeNull();
     }
     const aged = COMPONENT_TYPE_CODES.filter((t) => DEFAULT_DUE_RULES[t].replacementAgeYears !== null);
-    expect(aged.sort()).toEqual(['burners', 'circulator']);
+    expect(aged).toEqual([]);
   });
 });

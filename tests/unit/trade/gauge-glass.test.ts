@@ -1,6 +1,12 @@
 import { describe, it, expect } from 'vitest';
+import fc from 'fast-check';
 import {
   assessGaugeGlassLevel,
+  assessGaugeGlassMark,
+  assessGaugeGlassReading,
+  describeGaugeGlassLevel,
+  GAUGE_GLASS_LOW_BELOW_FRACTION,
+  parseGaugeGlassReading,
   GAUGE_GLASS_LOWEST_VISIBLE_ABOVE_LOWEST_PERMISSIBLE_IN,
   GAUGE_GLASS_RULE_SOURCE,
   parseGaugeGlassLevel,
@@ -45,7 +51,7 @@ describe('assessGaugeGlassLevel', () => {
   });
 
   it('a visible level is fine', () => {
-    expect(assessGaugeGlassLevel(parseGaugeGlassLevel('5/8'))).toEqual({ fraction: 0.625, status: 'ok', flags: [] });
+    expect(assessGaugeGlassLevel(parseGaugeGlassLevel('5/8'))).toEqual({ fraction: 0.625, mark: null, status: 'ok', flags: [] });
   });
 
   it('states the 1 in rule with its source', () => {
@@ -57,5 +63,56 @@ describe('assessGaugeGlassLevel', () => {
   it('rejects fractions outside 0..1', () => {
     expect(() => assessGaugeGlassLevel(1.1)).toThrow(TradeInputError);
     expect(() => assessGaugeGlassLevel(Number.NaN)).toThrow(TradeInputError);
+  });
+});
+
+describe('the cold water level against the normal water line', () => {
+  it('a level below a third of the glass is low, flagged plainly; a sixteenth no longer passes', () => {
+    // common practice: the cold normal water line is about half to two thirds of the glass; the maker's mark governs
+    expect(GAUGE_GLASS_LOW_BELOW_FRACTION).toBeCloseTo(1 / 3, 12);
+    const low = assessGaugeGlassLevel(parseGaugeGlassLevel('1/16'));
+    expect(low).toMatchObject({ status: 'warning', flags: [{ code: 'gauge_glass_low', severity: 'warning', value: 0.0625 }] });
+    expect(low.flags[0].message).toMatch(/^Cold water level low: 6 % of the glass/);
+    expect(low.flags[0].message).toMatch(/Add water only to a cold boiler/);
+    expect(assessGaugeGlassLevel(parseGaugeGlassLevel('1/3')).status).toBe('ok');
+    expect(assessGaugeGlassLevel(parseGaugeGlassLevel('1/2')).status).toBe('ok');
+  });
+
+  it('empty is a stop that says so', () => {
+    // common practice (boiler-operator guidance says the same)
+    expect(assessGaugeGlassLevel(0).flags[0].message).toMatch(/^Gauge glass empty: no water visible/);
+  });
+
+  it('every level maps to one status: empty stop, low warning, visible ok, full warning', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 1, noNaN: true }), (f) => {
+        const { status, flags } = assessGaugeGlassLevel(f);
+        const expected = f === 0 ? 'stop' : f < 1 / 3 || f === 1 ? 'warning' : 'ok';
+        return status === expected && (status === 'ok') === (flags.length === 0);
+      }),
+    );
+  });
+
+  it.each([
+    ['at mark', 'at'],
+    ['Below  NWL', 'below'],
+    ['above mark', 'above'],
+  ])('reads %j against the maker\'s mark', (text, mark) => {
+    expect(parseGaugeGlassReading(text)).toEqual({ fraction: null, mark });
+  });
+
+  it("judges the level against the maker's mark: below is low, above is an overfill note", () => {
+    // common practice: the boiler maker's normal-water-line mark governs the cold level
+    expect(assessGaugeGlassMark('at')).toEqual({ fraction: null, mark: 'at', status: 'ok', flags: [] });
+    expect(assessGaugeGlassMark('below')).toMatchObject({ status: 'warning', flags: [{ code: 'gauge_glass_low' }] });
+    expect(assessGaugeGlassMark('above')).toMatchObject({ status: 'ok', flags: [{ code: 'gauge_glass_above_normal_line', severity: 'info' }] });
+    expect(assessGaugeGlassReading(parseGaugeGlassReading('5/8'))).toMatchObject({ fraction: 0.625, mark: null, status: 'ok' });
+    expect(describeGaugeGlassLevel(assessGaugeGlassMark('below'))).toBe("below the maker's normal-water-line mark");
+    expect(describeGaugeGlassLevel(assessGaugeGlassLevel(0.625))).toBe('63 % of the glass');
+  });
+
+  it.each(['half', 'mark', 'under mark', '9/8', ''])('refuses %j, naming both ways to write it', (text) => {
+    expect(() => parseGaugeGlassReading(text)).toThrow(TradeInputError);
+    expect(() => assessGaugeGlassMark('under' as never)).toThrow(TradeInputError);
   });
 });

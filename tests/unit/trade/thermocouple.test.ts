@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { assessThermocoupleMillivolts } from '../../../shared/trade/thermocouple';
+import { assessThermocoupleMillivolts, thermocoupleFlags } from '../../../shared/trade/thermocouple';
 import { TradeInputError } from '../../../shared/trade/trade-input-error';
 
 describe('assessThermocoupleMillivolts', () => {
@@ -38,5 +38,20 @@ describe('assessThermocoupleMillivolts', () => {
 
   it.each([{ openCircuitMv: -1 }, { openCircuitMv: Number.NaN }, { closedCircuitMv: 750 }])('rejects %j', (input) => {
     expect(() => assessThermocoupleMillivolts(input)).toThrow(TradeInputError);
+  });
+});
+
+describe('thermocoupleFlags', () => {
+  it('a thermocouple judged "replace" raises a warning with its reading and the replacement point', () => {
+    // from memory: replace below about 18 mV open circuit
+    const replace = assessThermocoupleMillivolts({ openCircuitMv: 15 });
+    expect(thermocoupleFlags(replace, 15)).toMatchObject([{ code: 'thermocouple_replace', severity: 'warning', value: 15, threshold: 18, unit: 'mV open circuit' }]);
+    expect(thermocoupleFlags(replace, 15)[0].source).toMatch(/18 mV/);
+  });
+
+  it('no flag for a thermocouple that is not judged "replace"', () => {
+    // Source: Basic HVAC, BCcampus open textbook, ch. 19 (read): 25–30 mV typical
+    for (const mv of [18, 22, 27, 35]) expect(thermocoupleFlags(assessThermocoupleMillivolts({ openCircuitMv: mv }), mv)).toEqual([]);
+    expect(thermocoupleFlags(assessThermocoupleMillivolts({ closedCircuitMv: 5 }), null)).toEqual([]);
   });
 });

@@ -46,6 +46,8 @@ export function SiteCard({ site, allAppliances, canWrite }: { site: Site; allApp
       <dl className="mb-3 grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
         <dt className="font-semibold">Access</dt>
         <dd className="whitespace-pre-line">{site.accessNotes ?? 'No notes'}</dd>
+        <dt className="font-semibold">Elevation</dt>
+        <dd>{site.elevationFt === null ? 'Not recorded' : `${site.elevationFt.toLocaleString('en-US')} ft`}</dd>
         <dt className="font-semibold">Technician</dt>
         <dd>{site.assignedTechnicianName ?? 'Nobody in particular'}</dd>
       </dl>

@@ -8,8 +8,8 @@ import { useTechnicians } from '@/lib/resources/members';
 import { unclaimedErrors } from '@/lib/form-errors';
 import { useValidatedSubmit } from '@/lib/use-validated-submit';
 
-type Draft = { street: string; town: string; postalCode: string; accessNotes: string; assignedTechnicianId: string };
-const FIELDS = ['customerId', 'street', 'town', 'postalCode', 'accessNotes', 'assignedTechnicianId'];
+type Draft = { street: string; town: string; postalCode: string; accessNotes: string; elevationFt: string; assignedTechnicianId: string };
+const FIELDS = ['customerId', 'street', 'town', 'postalCode', 'accessNotes', 'elevationFt', 'assignedTechnicianId'];
 
 /** Add or edit a site (a service address). The draft survives any error. */
 export function SiteForm({
@@ -31,6 +31,7 @@ export function SiteForm({
     town: initial?.town ?? '',
     postalCode: initial?.postalCode ?? '',
     accessNotes: initial?.accessNotes ?? '',
+    elevationFt: initial?.elevationFt?.toString() ?? '',
     assignedTechnicianId: initial?.assignedTechnicianId ?? '',
   });
   const { errors, failure, saving, formRef, submit: validateAndSend } = useValidatedSubmit(siteInput, onSubmit);
@@ -38,7 +39,7 @@ export function SiteForm({
 
   function submit(e: FormEvent) {
     e.preventDefault();
-    void validateAndSend({ ...draft, customerId, assignedTechnicianId: draft.assignedTechnicianId || null });
+    void validateAndSend({ ...draft, customerId, elevationFt: draft.elevationFt.trim() === '' ? null : draft.elevationFt.trim(), assignedTechnicianId: draft.assignedTechnicianId || null });
   }
 
   const other = unclaimedErrors(errors, (k) => FIELDS.includes(k));
@@ -65,6 +66,15 @@ export function SiteForm({
         value={draft.accessNotes}
         onChange={(e) => set('accessNotes', e.target.value)}
         error={errors.accessNotes}
+      />
+      <TextField
+        label="Elevation (ft above sea level)"
+        inputMode="numeric"
+        autoComplete="off"
+        value={draft.elevationFt}
+        onChange={(e) => set('elevationFt', e.target.value)}
+        error={errors.elevationFt}
+        hint="Above 2,000 ft a gas appliance's nameplate input is derated for altitude (NFPA 54) before a clocked input is judged. Leave blank if not known."
       />
       <SelectField
         label="Assigned technician"

@@ -27,7 +27,7 @@ export function StockForecast({ withinDays }: { withinDays: number }) {
   if (!stock.data) return null;
   return (
     <Card title={`Stock forecast through ${stock.data.through}`}>
-      <div className="grid gap-4 md:grid-cols-2">
+      <div className="grid gap-4 md:grid-cols-3">
         <div>
           <h3 className="mb-1 font-semibold">Parts to replace</h3>
           <StockList rows={stock.data.replacements} empty="No replacements fall due in this window." />
@@ -35,6 +35,14 @@ export function StockForecast({ withinDays }: { withinDays: number }) {
         <div>
           <h3 className="mb-1 font-semibold">Inspections</h3>
           <StockList rows={stock.data.inspections} empty="No inspections fall due in this window." />
+        </div>
+        <div>
+          <h3 className="mb-1 font-semibold">Past median life: plan for these</h3>
+          <p className="mb-1 text-sm text-iron-muted">
+            Working parts that reach their typical life in this window. Age alone is not a fault: inspect them and plan the stock; replace on condition.
+          </p>
+          <StockList rows={stock.data.pastMedianLife} empty="No working part reaches its median life in this window." />
+          <p className="mt-1 text-xs text-iron-muted">Source: {stock.data.pastMedianLifeSource}</p>
         </div>
       </div>
     </Card>

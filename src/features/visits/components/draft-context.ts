@@ -11,6 +11,8 @@ export type DraftEditor = {
   /** Local range errors merged with the server's last refusal, keyed "readings.combustion.o2Pct" etc. */
   errors: FieldErrors;
   appliance: ApplianceDto | undefined;
+  /** The site's elevation, ft (null: not recorded), for the altitude derate and its explanation. */
+  elevationFt: number | null;
   prefs: UnitPrefs;
   live: ReadingResults;
   /** Readings the template requires on this visit (each taken, or skipped with a reason). */

@@ -1,4 +1,4 @@
-import type { CombustionAnalysis, GaugeGlassAssessment, ThermocoupleAssessment, TradeFlag } from '@shared/trade/index';
+import { describeGaugeGlassLevel, type CombustionAnalysis, type GaugeGlassAssessment, type ThermocoupleAssessment, type TradeFlag } from '@shared/trade/index';
 import { FlagList } from './readings/flag-list';
 
 type StoredResults = {
@@ -6,7 +6,7 @@ type StoredResults = {
   gasInput?: { cubicFeetPerHour: number; inputBtuPerHour: number };
   thermocouple?: ThermocoupleAssessment;
   gaugeGlass?: GaugeGlassAssessment;
-  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean };
+  lowWaterCutoff?: { type: 'float' | 'probe'; passed: boolean; trippedWith?: 'water_visible' | 'below_visible' | null };
   flags?: TradeFlag[];
 };
 
@@ -22,8 +22,8 @@ export function ServerResults({ results, title = 'Kept with the visit' }: { resu
   }
   if (r.gasInput) rows.push(['Gas input', `${Math.round(r.gasInput.inputBtuPerHour).toLocaleString('en-US')} Btu/h`]);
   if (r.thermocouple) rows.push(['Thermocouple', r.thermocouple.reason]);
-  if (r.gaugeGlass) rows.push(['Gauge glass', `${Math.round(r.gaugeGlass.fraction * 100)} % of the glass`]);
-  if (r.lowWaterCutoff) rows.push(['Low-water cutoff', r.lowWaterCutoff.passed ? 'Stopped the burner (passed)' : 'Did not stop the burner (failed)']);
+  if (r.gaugeGlass) rows.push(['Gauge glass', describeGaugeGlassLevel(r.gaugeGlass)]);
+  if (r.lowWaterCutoff) rows.push(['Low-water cutoff', cutoffText(r.lowWaterCutoff)]);
   if (rows.length === 0) return null;
   return (
     <div className="flex flex-col gap-2 rounded-plate border-2 border-plate-line bg-plate p-3" role="region" aria-label={title}>
@@ -39,4 +39,9 @@ export function ServerResults({ results, title = 'Kept with the visit' }: { resu
       <FlagList flags={(r.flags ?? []).filter((f) => f.severity !== 'info')} />
     </div>
   );
+}
+
+function cutoffText(c: NonNullable<StoredResults['lowWaterCutoff']>): string {
+  if (c.passed) return c.trippedWith === 'water_visible' ? 'Stopped the burner with water visible in the glass (passed)' : 'Stopped the burner (passed)';
+  return c.trippedWith === 'below_visible' ? 'Stopped only with the water out of sight below the glass (failed)' : 'Did not stop the burner (failed)';
 }

@@ -71,7 +71,8 @@ export function VisitEditor({
     [],
   );
 
-  const facts = useMemo(() => resultFacts(a, tolerancePct), [a, tolerancePct]);
+  const site = appliance.data?.site;
+  const facts = useMemo(() => resultFacts(a, tolerancePct, site), [a, tolerancePct, site]);
   // The same function the server runs on every save, so the phone shows the flags the server will store.
   const live = useMemo(() => computeReadingResults(fields.readings, facts), [fields.readings, facts]);
   const liveList = useMemo(() => liveRequirements({ visit, fields, live, appliance: a, badText }), [visit, fields, live, a, badText]);
@@ -87,6 +88,7 @@ export function VisitEditor({
     edit: (c) => sync.edit(c),
     errors,
     appliance: a,
+    elevationFt: site?.elevationFt ?? null,
     prefs,
     live,
     requiredReadings: visit.requiredReadings ?? [],

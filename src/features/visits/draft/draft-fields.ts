@@ -1,5 +1,5 @@
 import type { CheckMark, VisitOutcome } from '@shared/schemas/enums';
-import { analyzeCombustion, assessThermocoupleMillivolts, clockGasInput, parseGaugeGlassLevel, TradeInputError } from '@shared/trade/index';
+import { analyzeCombustion, assessThermocoupleMillivolts, clockGasInput, parseGaugeGlassReading, TradeInputError } from '@shared/trade/index';
 import type { ReadingsSoFar } from '@shared/visits/visit-results';
 import { readingsInput, type ReadingSkips, type ReadingsInput, type VisitDraftInput, type VisitDto } from '@shared/schemas/visits';
 
@@ -50,7 +50,7 @@ const orUndefined = <T,>(v: T | null | undefined) => (v === null ? undefined : v
 /** Inputs the server's trade computations would refuse (flue below air, an unreadable gauge level): kept here, not sent. */
 function tradeAccepts(key: string, value: Record<string, unknown> | string): boolean {
   try {
-    if (key === 'gaugeGlassLevel') parseGaugeGlassLevel(value as string);
+    if (key === 'gaugeGlassLevel') parseGaugeGlassReading(value as string);
     if (key === 'combustion') {
       const c = value as NonNullable<ReadingsInput['combustion']>;
       // The fuel does not change which inputs are acceptable; only the refusal matters here.

@@ -1,5 +1,5 @@
 import { StatusBadge } from '@/components/ui/status-badge';
-import { DEFAULT_HEATING_VALUE_BTU_PER_FT3, HEATING_VALUE_SOURCE } from '@shared/trade/index';
+import { altitudeDerateNote, DEFAULT_HEATING_VALUE_BTU_PER_FT3, HEATING_VALUE_SOURCE } from '@shared/trade/index';
 import { ChoiceButtons, NumberField } from '../inputs';
 import { useDraft, useReading } from '../draft-context';
 import { plain } from '../../lib/unit-prefs';
@@ -7,7 +7,8 @@ import { plain } from '../../lib/unit-prefs';
 const DIALS = [0.5, 1, 2, 5];
 
 export function GasInputReadings() {
-  const { appliance, live } = useDraft();
+  const { appliance, live, elevationFt } = useDraft();
+  const derateNote = elevationFt === null ? null : altitudeDerateNote(elevationFt);
   const { value: g, set, errorFor, field } = useReading('gasInput');
   const fuel = appliance?.fuel === 'propane' ? 'propane' : 'natural_gas';
   const defaultHv = DEFAULT_HEATING_VALUE_BTU_PER_FT3[fuel];
@@ -17,6 +18,11 @@ export function GasInputReadings() {
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm">Clock the meter with every other gas appliance off.</p>
+      {derateNote && (
+        <p className="text-sm" data-note="altitude-derate">
+          {derateNote}
+        </p>
+      )}
       <div className="flex flex-col gap-1">
         <span className="text-sm font-semibold">Test dial (ft³ per revolution)</span>
         <ChoiceButtons
@@ -54,7 +60,13 @@ export function GasInputReadings() {
                 <StatusBadge status="ok">Not over the rating</StatusBadge>
               )}
               {r.value.rating.deviationPct >= 0 ? '+' : ''}
-              {r.value.rating.deviationPct.toFixed(0)} % against the nameplate {r.value.rating.allowedBtuPerHour.toLocaleString('en-US')} Btu/h
+              {r.value.rating.deviationPct.toFixed(0)} % against {r.value.rating.altitudeDeratePct > 0 ? 'the derated rating' : 'the nameplate'}{' '}
+              {Math.round(r.value.rating.allowedBtuPerHour).toLocaleString('en-US')} Btu/h
+            </p>
+          )}
+          {r.value.rating && (
+            <p className="text-xs text-iron-muted">
+              Within {r.value.rating.overFiringTolerancePct} % above the rating counts as within it: clocking a meter cannot tell a couple of per cent apart.
             </p>
           )}
           {r.value.rating?.status === 'over_fired' && <p className="text-xs text-iron-muted">Source: {r.value.rating.source}</p>}

@@ -1,4 +1,5 @@
 import { StatusBadge } from '@/components/ui/status-badge';
+import { describeGaugeGlassLevel } from '@shared/trade/index';
 import { TextInput } from '../inputs';
 import { useDraft, useReading } from '../draft-context';
 import { FlagList } from './flag-list';
@@ -16,7 +17,7 @@ export function GaugeGlassReading() {
         value={value ?? ''}
         onChange={(v) => set(v)}
         error={r && !r.ok ? [r.message] : errorFor()}
-        hint="A fraction of the visible glass: 1/2, 5/8, empty, full."
+        hint="Read it cold. A fraction of the visible glass (1/2, 5/8, empty, full), or against the maker's normal-water-line mark: at mark, below mark, above mark."
         field="readings.gaugeGlassLevel"
       />
       {r?.ok && (
@@ -25,7 +26,7 @@ export function GaugeGlassReading() {
             <StatusBadge status={r.value.status === 'ok' ? 'ok' : r.value.status === 'stop' ? 'unsafe' : 'due'}>
               {r.value.status === 'ok' ? 'Level visible' : r.value.status === 'stop' ? 'No water visible' : 'Check the level'}
             </StatusBadge>
-            <span className="tabular">{Math.round(r.value.fraction * 100)} % of the glass</span>
+            <span className="tabular">{describeGaugeGlassLevel(r.value)}</span>
           </p>
           <FlagList flags={r.value.flags} />
         </div>

@@ -19,6 +19,20 @@ export function LowWaterCutoffReading() {
         />
         {errorFor('type')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
       </div>
+      <div className="flex flex-col gap-1" data-field="readings.lowWaterCutoff.trippedWith">
+        <span className="text-sm font-semibold">Where was the water when the burner stopped?</span>
+        <ChoiceButtons
+          label="Where was the water when the burner stopped?"
+          choices={[
+            { value: 'water_visible', label: 'Still visible in the glass', icon: '✓', tone: 'ok' },
+            { value: 'below_visible', label: 'Below the lowest visible part', icon: '✗', tone: 'due' },
+          ]}
+          value={w?.trippedWith ?? undefined}
+          onChange={(v) => set({ trippedWith: v })}
+        />
+        <p className="text-sm">The cutoff must stop the burner while water still shows in the glass (ASME Section IV).</p>
+        {errorFor('trippedWith')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
+      </div>
       <TextInput
         label="Level in the glass when it tripped"
         placeholder="e.g. 1/4"
@@ -41,6 +55,12 @@ export function LowWaterCutoffReading() {
         />
         {errorFor('burnerStopped')?.map((m) => <p key={m} role="alert" className="text-sm font-semibold text-due">⚠ {m}</p>)}
       </div>
+      {w?.burnerStopped === true && w.trippedWith === 'below_visible' && (
+        <Notice kind="danger" title="Low-water cutoff failed">
+          The burner stopped only after the water had gone out of sight below the glass. Do not add water to a hot boiler whose water is out of sight: shut
+          the burner off, let it cool, and choose “Shut down as unsafe” below unless the cutoff is repaired and passes the test.
+        </Notice>
+      )}
       {w?.burnerStopped === false && (
         <Notice kind="danger" title="Low-water cutoff failed">
           The burner kept firing at low water. Shut the boiler down and tell the customer before you leave; choose “Shut down as unsafe” below unless it
