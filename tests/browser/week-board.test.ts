@@ -89,6 +89,16 @@ describe('the week board', () => {
     const [moved] = await db.select().from(bookings).where(eq(bookings.id, aBooking.id));
     expect(moved.startsAt).toEqual(instantOfLocalDateTime(tz, `${thursday}T09:00`));
     expect(moved.endsAt).toEqual(instantOfLocalDateTime(tz, `${thursday}T10:30`));
+
+    // A move onto Oren's 08:00–10:00 answers 409; the server's words show beside the form and nothing moves.
+    await cell(first.name, thursday).getByRole('button', { name: 'Move Wren Halloway, 09:00' }).click();
+    const again = page.getByRole('form', { name: 'Move the booking for Wren Halloway' });
+    await again.getByLabel('New date').fill(tuesday);
+    await again.getByLabel('Technician').selectOption(second.user.id);
+    await again.getByRole('button', { name: 'Move booking' }).click();
+    await again.getByRole('note').getByText(/This technician is already booked .* at 7 Quarry Steps, Alder Falls/).waitFor();
+    expect((await db.select().from(bookings).where(eq(bookings.id, aBooking.id)))[0].technicianId).toBe(first.id);
+
     await page.screenshot({ path: `${screenshotDir()}/week-board-1366.png`, fullPage: true });
     await context.close();
   });
