@@ -35,6 +35,12 @@ export function addDays(iso: string, days: number): string {
   return dayNumberToIsoDate(isoDateToDayNumber('date', iso) + days);
 }
 
+/** The Monday of the week holding `iso` (weeks begin on Monday, as ISO 8601 counts them). */
+export function mondayOf(iso: string): string {
+  const weekday = new Date(`${addDays(iso, 0)}T00:00:00Z`).getUTCDay();
+  return addDays(iso, weekday === 0 ? -6 : 1 - weekday);
+}
+
 /** Adds calendar months; a day past the end of the target month is clamped (2024-01-31 + 1 month = 2024-02-29). */
 export function addMonths(iso: string, months: number): string {
   if (!Number.isInteger(months)) throw new TradeInputError('months', `must be a whole number, got ${months}`);

@@ -7,8 +7,7 @@ import { insertMember } from '../../server/db/factories/users';
 import { bookingAppliances, bookings } from '../../server/db/schema/index';
 import { instantOfLocalDateTime, todayInTimeZone } from '../../shared/dates';
 import { formatWeekday } from '../../shared/format/dates';
-import { addDays } from '../../shared/trade/iso-date';
-import { mondayOf } from '../../src/features/bookings/components/week-board-page';
+import { addDays, mondayOf } from '../../shared/trade/iso-date';
 
 const fx = useBrowserFixture();
 const DESKTOP = { viewport: { width: 1366, height: 900 } };
@@ -49,6 +48,7 @@ describe('the week board', () => {
     await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
     await page.getByRole('link', { name: 'Week board' }).click();
     await page.getByRole('heading', { name: 'Week board' }).waitFor();
+    expect(await page.title()).toBe('Week board · Lifeplate');
     await page.getByRole('button', { name: 'Next week' }).click();
     const cell = (tech: string, day: string) => page.locator(`td[aria-label="${tech}, ${formatWeekday(day)}"]`);
     await cell(first.name, monday).getByText('Wren Halloway').waitFor();
@@ -63,7 +63,8 @@ describe('the week board', () => {
     await item.getByText('Overdue', { exact: false }).waitFor();
     await item.getByRole('button', { name: /Book Ilse Marchbank/ }).click();
     const form = item.getByRole('form', { name: 'Book a visit' });
-    expect(await form.getByLabel('Technician').inputValue()).toBe(second.user.id);
+    // The team loads after the form opens.
+    await expect.poll(() => form.getByLabel('Technician').inputValue()).toBe(second.user.id);
     expect(await form.getByLabel('Window (minutes)').inputValue()).toBe('120');
     await form.getByLabel('Date').fill(tuesday);
     await form.getByText(/Tamsin Creel/).waitFor();
@@ -88,6 +89,16 @@ describe('the week board', () => {
     const [moved] = await db.select().from(bookings).where(eq(bookings.id, aBooking.id));
     expect(moved.startsAt).toEqual(instantOfLocalDateTime(tz, `${thursday}T09:00`));
     expect(moved.endsAt).toEqual(instantOfLocalDateTime(tz, `${thursday}T10:30`));
+
+    // A move onto Oren's 08:00–10:00 answers 409; the server's words show beside the form and nothing moves.
+    await cell(first.name, thursday).getByRole('button', { name: 'Move Wren Halloway, 09:00' }).click();
+    const again = page.getByRole('form', { name: 'Move the booking for Wren Halloway' });
+    await again.getByLabel('New date').fill(tuesday);
+    await again.getByLabel('Technician').selectOption(second.user.id);
+    await again.getByRole('button', { name: 'Move booking' }).click();
+    await again.getByRole('note').getByText(/This technician is already booked .* at 7 Quarry Steps, Alder Falls/).waitFor();
+    expect((await db.select().from(bookings).where(eq(bookings.id, aBooking.id)))[0].technicianId).toBe(first.id);
+
     await page.screenshot({ path: `${screenshotDir()}/week-board-1366.png`, fullPage: true });
     await context.close();
   });

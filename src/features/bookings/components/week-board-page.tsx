@@ -3,7 +3,7 @@ import { DndContext, KeyboardSensor, PointerSensor, useDraggable, useDroppable, 
 import { BOOKING_STATUS_LABELS, localMinutesBetween, type BookingDto } from '@shared/schemas/bookings';
 import { todayInTimeZone } from '@shared/dates';
 import { formatCalendarDate, formatWeekday } from '@shared/format/dates';
-import { addDays } from '@shared/trade/iso-date';
+import { addDays, mondayOf } from '@shared/trade/iso-date';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
@@ -15,11 +15,6 @@ import { addMinutesToLocal, MoveForm } from './move-form';
 import { UnbookedQueue } from './unbooked-queue';
 
 const clock = (local: string) => local.slice(11, 16);
-/** Monday of the week holding `date` (ISO weekday arithmetic on the calendar date, no zone involved). */
-export function mondayOf(date: string) {
-  const weekday = new Date(`${date}T00:00:00Z`).getUTCDay();
-  return addDays(date, weekday === 0 ? -6 : 1 - weekday);
-}
 const cellId = (technicianId: string, date: string) => `${technicianId}|${date}`;
 
 /** The office's week: technicians as rows, Monday to Saturday across, bookings as blocks; the unbooked queue beside. */
