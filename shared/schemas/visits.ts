@@ -41,6 +41,7 @@ const combustionFields = z.object({
   draftInWc: reading('Draft', 'draftInWc').nullish(),
   ambientCoPpm: reading('Ambient CO', 'ambientCoPpm').nullish(),
   spillageSeconds: reading('Spillage time', 'spillageSeconds').nullish(),
+  outdoorTempF: reading('Outdoor temperature', 'outdoorTempF').nullish(),
   steadyFiringMinutes: n('Minutes of steady firing', 0, 240).nullish(),
 });
 

@@ -26,6 +26,8 @@ export type CombustionInput = {
   spillageSeconds?: number;
   ventType?: VentType;
   condensing?: boolean;
+  /** Outdoor temperature, °F, for the BPI minimum draft. */
+  outdoorTempF?: number;
 };
 
 export type CombustionAnalysis = {
@@ -70,6 +72,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
   const ambientCoPpm = optional(input.ambientCoPpm, (v) => requireReading('ambientCoPpm', v));
   const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
+  const outdoorTempF = optional(input.outdoorTempF, (v) => requireReading('outdoorTempF', v));
   if (input.condensing !== undefined && typeof input.condensing !== 'boolean') {
     throw new TradeInputError('condensing', `must be true or false, got ${String(input.condensing)}`);
   }
@@ -77,7 +80,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
 
   const excessAirPct = excessAirPctFromO2(fuel, o2Pct);
   const coAirFreePpm = airFreeCoPpm(coPpm, o2Pct);
-  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType });
+  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType, outdoorTempF });
   if (condensing) {
     flags.push({
       code: 'efficiency_not_applicable',

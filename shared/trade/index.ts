@@ -6,6 +6,7 @@ export * from './fuels';
 export * from './gas-enthalpy';
 export * from './combustion-efficiency';
 export * from './siegert';
+export * from './draft-minimum-by-outdoor-temp';
 export * from './combustion-flags';
 export * from './combustion';
 export * from './gas-input';

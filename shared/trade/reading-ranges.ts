@@ -19,6 +19,8 @@ export const READING_RANGES = {
   airTempF: { min: -40, max: 140, unit: '°F', why: 'combustion air a heating appliance draws' },
   // common practice: analyzer draft ranges are a few in. w.c. either way; flue drafts are hundredths of an inch.
   draftInWc: { min: -2, max: 2, unit: 'in. w.c.', why: 'the analyzer draft range' },
+  // common practice: the coldest and hottest outdoor air a heating visit meets.
+  outdoorTempF: { min: -60, max: 130, unit: '°F', why: 'outdoor air temperature' },
   spillageSeconds: { min: 0, max: 3600, unit: 's', why: 'a spillage test of at most an hour' },
   // common practice: meter test dials are ½ to 10 ft³; a revolution is clocked with a watch, so it takes a real,
   // finite time (a tenth of a second is already far faster than any residential meter turns).

@@ -112,6 +112,7 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
             draftInWc: num(c?.draftInWc),
             ambientCoPpm: num(c?.ambientCoPpm),
             spillageSeconds: num(c?.spillageSeconds),
+            outdoorTempF: num(c?.outdoorTempF),
             ventType: facts.ventType,
             condensing: facts.construction === 'condensing',
           }),
