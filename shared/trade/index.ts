@@ -21,3 +21,5 @@ export * from './component-types';
 export * from './due-dates';
 export * from './radiator-edr';
 export * from './boiler-sizing';
+export * from './oil-firing-rate';
+export * from './oil-smoke-number';
