@@ -13,9 +13,10 @@ export type OilBurnerType = (typeof OIL_BURNER_TYPES)[number];
 export const SMOKE_LIMITS = { flame_retention: 1, non_retention: 2 } as const satisfies Record<OilBurnerType, number>;
 const SOURCE = 'ASTM D2156 smoke scale; limits from memory: Brookhaven National Laboratory / NORA oilheat service guidance';
 
-export function smokeNumberFlags(input: { smokeNumber: number; burnerType?: OilBurnerType }): TradeFlag[] {
-  const smoke = requireReading('smokeNumber', input.smokeNumber);
-  if (!Number.isInteger(smoke)) throw new TradeInputError('smokeNumber', `must be a whole number on the 0–9 scale, got ${smoke}`);
+/** `field` names the reading in the refusal (the visit form calls it smokeSpot). */
+export function smokeNumberFlags(input: { smokeNumber: number; burnerType?: OilBurnerType }, field = 'smokeNumber'): TradeFlag[] {
+  const smoke = requireReading('smokeNumber', input.smokeNumber, field);
+  if (!Number.isInteger(smoke)) throw new TradeInputError(field, `must be a whole number on the 0–9 scale, got ${smoke}`);
   // Without the burner type the stricter (flame-retention) limit is applied and said.
   const burnerType = input.burnerType === undefined ? undefined : requireOneOf('burnerType', input.burnerType, OIL_BURNER_TYPES);
   const limit = SMOKE_LIMITS[burnerType ?? 'flame_retention'];
