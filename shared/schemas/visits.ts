@@ -42,6 +42,7 @@ const combustionFields = z.object({
   draftInWc: reading('Draft', 'draftInWc').nullish(),
   ambientCoPpm: reading('Ambient CO', 'ambientCoPpm').nullish(),
   spillageSeconds: reading('Spillage time', 'spillageSeconds').nullish(),
+  outdoorTempF: reading('Outdoor temperature', 'outdoorTempF').nullish(),
   steadyFiringMinutes: n('Minutes of steady firing', 0, 240).nullish(),
 });
 
@@ -88,8 +89,10 @@ export const readingsInput = z
     gasManifoldInWc: n('Manifold pressure', 0, 50).nullish(),
     oil: z
       .object({
-        smokeSpot: z.number().int().min(0).max(9).nullish(),
-        pumpPressurePsi: n('Pump pressure', 0, 500).nullish(),
+        smokeSpot: reading('Smoke spot', 'smokeNumber').int('Smoke spot must be a whole number on the 0–9 scale.').nullish(),
+        pumpPressurePsi: reading('Pump pressure', 'pumpPressurePsi').nullish(),
+        nozzleGph: reading('Nozzle rating', 'nozzleGph').nullish(),
+        burnerType: z.enum(['flame_retention', 'non_retention'], 'Say whether the burner is flame-retention or an older type.').nullish(),
         overFireDraftInWc: n('Over-fire draft', -2, 2).nullish(),
         breechDraftInWc: n('Breech draft', -2, 2).nullish(),
       })

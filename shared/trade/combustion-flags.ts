@@ -2,6 +2,7 @@ import type { TradeFlag } from './trade-flag';
 import { requireReading } from './reading-ranges';
 import { requireNumber, requireOneOf } from './trade-input-error';
 import { inWcToPascal } from './units';
+import { BPI_DRAFT_TABLE, BPI_DRAFT_TABLE_SOURCE, bpiMinimumDraftPa } from './draft-minimum-by-outdoor-temp';
 
 export const VENT_TYPES = ['draft_hood', 'barometric_damper', 'power_vent', 'direct_vent'] as const;
 export type VentType = (typeof VENT_TYPES)[number];
@@ -48,9 +49,14 @@ export function airFreeCoLimit(kind?: CoApplianceKind): AirFreeCoLimit {
 }
 /** Upper ends of the BPI flue-CO bands, as-measured ppm: acceptable, service recommended, service required. */
 export const BPI_FLUE_CO_BANDS_PPM = { acceptable: 25, serviceRecommended: 100, serviceRequired: 400 } as const;
-/** BPI draft test: at least −2.5 to −5 Pa at steady state; the least strict end is used. */
-export const BPI_MIN_DRAFT_PA = -2.5;
+/** BPI draft test without an outdoor temperature: the table's cold-weather minimum (see draft-minimum-by-outdoor-temp.ts). */
+export const BPI_MIN_DRAFT_PA = BPI_DRAFT_TABLE.coldMinimumPa;
 export const BPI_SPILLAGE_LIMIT_SECONDS = 60;
+/**
+ * from memory: BPI Technical Standards for the Building Analyst Professional (and BPI-1200): the spillage test is made
+ * at the draft diverter or at the barometric draft control, and spillage past 60 s after start-up fails either way.
+ */
+const BPI_SPILLAGE_SOURCE = `${BPI_STANDARDS}; that barometric-damper appliances are held to the same 60 s is from memory`;
 export const BPI_AMBIENT_CO_ABORT_PPM = 35;
 /** Above this ambient CO (and up to the abort level) the occupant is advised. 9 ppm is also the NAAQS 8-hour level. */
 export const BPI_AMBIENT_CO_ADVISE_PPM = 9;
@@ -67,6 +73,8 @@ export type CombustionFlagInput = {
   ventType?: VentType;
   /** Chooses the air-free CO limit by appliance standard; without it the heating-equipment limit applies. */
   applianceKind?: CoApplianceKind;
+  /** Outdoor temperature, °F: the BPI minimum draft depends on it. */
+  outdoorTempF?: number;
 };
 
 const NATURAL_DRAFT: readonly VentType[] = ['draft_hood', 'barometric_damper'];
@@ -81,6 +89,7 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
   const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
   const coLimit = airFreeCoLimit(optional(input.applianceKind, (v) => requireOneOf('applianceKind', v, APPLIANCE_KINDS_FOR_CO)));
+  const outdoorTempF = optional(input.outdoorTempF, (v) => requireReading('outdoorTempF', v));
 
   if (ambientCoPpm !== undefined && ambientCoPpm > BPI_AMBIENT_CO_ABORT_PPM) {
     flags.push({
@@ -108,16 +117,18 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
   }
 
   const spillageFailed =
-    ventType === 'draft_hood' && spillageSeconds !== undefined && spillageSeconds > BPI_SPILLAGE_LIMIT_SECONDS;
+    ventType !== undefined && NATURAL_DRAFT.includes(ventType) && spillageSeconds !== undefined && spillageSeconds > BPI_SPILLAGE_LIMIT_SECONDS;
   if (spillageFailed) {
     flags.push({
       code: 'spillage_over_limit',
       severity: 'stop',
-      message: `Draft-hood appliance spilled for ${spillageSeconds} s, more than ${BPI_SPILLAGE_LIMIT_SECONDS} s after start-up.`,
+      message:
+        `${ventType === 'draft_hood' ? 'Draft-hood' : 'Barometric-damper'} appliance spilled for ${spillageSeconds} s, more than ` +
+        `${BPI_SPILLAGE_LIMIT_SECONDS} s after start-up: flue gas is entering the building.`,
       value: spillageSeconds,
       threshold: BPI_SPILLAGE_LIMIT_SECONDS,
       unit: 's',
-      source: BPI_STANDARDS,
+      source: ventType === 'draft_hood' ? BPI_STANDARDS : BPI_SPILLAGE_SOURCE,
     });
   }
 
@@ -137,7 +148,7 @@ export function combustionSafetyFlags(input: CombustionFlagInput): TradeFlag[] {
     });
   }
 
-  if (draftInWc !== undefined) flags.push(...draftFlags(draftInWc, ventType));
+  if (draftInWc !== undefined) flags.push(...draftFlags(draftInWc, ventType, outdoorTempF));
 
   if (ventType === undefined && (draftInWc !== undefined || spillageSeconds !== undefined)) {
     flags.push({
@@ -180,7 +191,7 @@ function flueCoFlags(coPpm: number, spillageFailed: boolean): TradeFlag[] {
 }
 
 /** Power and direct vents are judged by the manufacturer's instructions, so only natural-draft vents get a flag. */
-function draftFlags(draftInWc: number, ventType: VentType | undefined): TradeFlag[] {
+function draftFlags(draftInWc: number, ventType: VentType | undefined, outdoorTempF: number | undefined): TradeFlag[] {
   if (ventType === undefined || !NATURAL_DRAFT.includes(ventType)) return [];
   const draftPa = inWcToPascal(draftInWc);
   if (draftPa > 0) {
@@ -196,18 +207,23 @@ function draftFlags(draftInWc: number, ventType: VentType | undefined): TradeFla
       },
     ];
   }
-  if (draftPa > BPI_MIN_DRAFT_PA) {
+  const minimumPa = outdoorTempF === undefined ? BPI_MIN_DRAFT_PA : bpiMinimumDraftPa(outdoorTempF);
+  if (draftPa > minimumPa) {
+    const basis =
+      outdoorTempF === undefined
+        ? 'No outdoor temperature was recorded, so the cold-weather minimum is applied.'
+        : `That is the BPI minimum at ${outdoorTempF} °F outdoors.`;
     return [
       {
         code: 'draft_below_minimum',
         severity: 'warning',
         message:
-          `Draft ${draftPa.toFixed(1)} Pa (${draftInWc} in. w.c.) is weaker than ${BPI_MIN_DRAFT_PA} Pa. BPI requires at least ` +
-          '−2.5 to −5 Pa at steady state (5–10 minutes of firing); the least strict end is applied here.',
+          `Draft ${draftPa.toFixed(1)} Pa (${draftInWc} in. w.c.) is weaker than ${minimumPa.toFixed(2)} Pa, measured at steady ` +
+          `state (5–10 minutes of firing). ${basis}`,
         value: draftPa,
-        threshold: BPI_MIN_DRAFT_PA,
+        threshold: minimumPa,
         unit: 'Pa',
-        source: BPI_STANDARDS,
+        source: BPI_DRAFT_TABLE_SOURCE,
       },
     ];
   }

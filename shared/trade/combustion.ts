@@ -28,6 +28,8 @@ export type CombustionInput = {
   condensing?: boolean;
   /** Chooses the air-free CO limit by appliance standard (200 ppm water heaters, 400 ppm boilers and furnaces). */
   applianceKind?: CoApplianceKind;
+  /** Outdoor temperature, °F, for the BPI minimum draft. */
+  outdoorTempF?: number;
 };
 
 export type CombustionAnalysis = {
@@ -75,6 +77,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
   const spillageSeconds = optional(input.spillageSeconds, (v) => requireReading('spillageSeconds', v));
   const ventType = optional(input.ventType, (v) => requireOneOf('ventType', v, VENT_TYPES));
   const applianceKind = optional(input.applianceKind, (v) => requireOneOf('applianceKind', v, APPLIANCE_KINDS_FOR_CO));
+  const outdoorTempF = optional(input.outdoorTempF, (v) => requireReading('outdoorTempF', v));
   if (input.condensing !== undefined && typeof input.condensing !== 'boolean') {
     throw new TradeInputError('condensing', `must be true or false, got ${String(input.condensing)}`);
   }
@@ -82,7 +85,7 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
 
   const excessAirPct = excessAirPctFromO2(fuel, o2Pct);
   const coAirFreePpm = airFreeCoPpm(coPpm, o2Pct);
-  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType, applianceKind });
+  const flags = combustionSafetyFlags({ coPpm, coAirFreePpm, draftInWc, ambientCoPpm, spillageSeconds, ventType, applianceKind, outdoorTempF });
   if (condensing) {
     flags.push({
       code: 'efficiency_not_applicable',

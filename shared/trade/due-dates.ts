@@ -204,14 +204,18 @@ const medianAge = (componentType: ComponentType, years: number, row: string): Du
     'not a replacement date for one unit',
 });
 
-const safetyValveTest = (componentType: ComponentType): DueRule => ({
+/**
+ * Steam safety valves and hot-water relief valves are tested on different intervals; neither interval has been read
+ * in a publication here, so both rules are common practice, each naming the publication it is recalled from.
+ */
+const valveTest = (componentType: ComponentType, ownerIntervalDays: number, recalled: string): DueRule => ({
   componentType,
   inspectionIntervalMonths: 12,
   replacementAgeYears: null,
   replacementPolicy: 'on_condition',
-  basis: 'published',
-  source: `from memory: ${SECTION_VI}: pressure test yearly; replaced on condition`,
-  ownerTest: { intervalDays: 91, task: 'try-lever (manual) test', source: `from memory: ${SECTION_VI}: quarterly` },
+  basis: 'common_practice',
+  source: `common practice: pressure (set-point) test at the annual service, replaced on condition; testing is covered by ${SECTION_VI}`,
+  ownerTest: { intervalDays: ownerIntervalDays, task: 'try-lever (manual) test', source: `from memory: ${SECTION_VI}: ${recalled}` },
 });
 
 const defaults: Record<ComponentType, DueRule> = {
@@ -233,8 +237,9 @@ const defaults: Record<ComponentType, DueRule> = {
     ...onCondition('low_water_cutoff_probe'),
     source: `${ON_CONDITION}; testing is covered by ${SECTION_VI}, method and interval per the control manufacturer's instructions`,
   },
-  safety_valve: safetyValveTest('safety_valve'),
-  relief_valve: safetyValveTest('relief_valve'),
+  // Low-pressure steam: the try-lever test monthly in the heating season; hot water: quarterly.
+  safety_valve: valveTest('safety_valve', 30, 'steam safety valve, try-lever test monthly during the heating season'),
+  relief_valve: valveTest('relief_valve', 91, 'hot-water relief valve, try-lever test quarterly'),
 };
 
 /** Default due rules, one per component type. Companies override these with their own policy. */

@@ -19,6 +19,8 @@ export const READING_RANGES = {
   airTempF: { min: -40, max: 140, unit: '°F', why: 'combustion air a heating appliance draws' },
   // common practice: analyzer draft ranges are a few in. w.c. either way; flue drafts are hundredths of an inch.
   draftInWc: { min: -2, max: 2, unit: 'in. w.c.', why: 'the analyzer draft range' },
+  // common practice: the coldest and hottest outdoor air a heating visit meets.
+  outdoorTempF: { min: -60, max: 130, unit: '°F', why: 'outdoor air temperature' },
   spillageSeconds: { min: 0, max: 3600, unit: 's', why: 'a spillage test of at most an hour' },
   // common practice: meter test dials are ½ to 10 ft³; a revolution is clocked with a watch, so it takes a real,
   // finite time (a tenth of a second is already far faster than any residential meter turns).
@@ -27,6 +29,12 @@ export const READING_RANGES = {
   // Source: 40 CFR Part 98, Subpart C, Table C-1 (natural gas 1,026, propane 2,516 Btu/scf); the range leaves room for
   // other fuel gases.
   heatingValueBtuPerCubicFoot: { min: 100, max: 5000, unit: 'Btu/ft³', why: 'fuel-gas heating values' },
+  // Source: ASTM D2156, smoke density of distillate-fuel flue gas, a scale of 0 to 9.
+  smokeNumber: { min: 0, max: 9, unit: '(smoke scale)', why: 'the ASTM D2156 smoke scale' },
+  // common practice: residential and light-commercial oil nozzles are rated from about 0.4 to 30 gph at 100 psi.
+  nozzleGph: { min: 0.1, max: 30, unit: 'gph at 100 psi', why: 'an oil nozzle rating' },
+  // common practice: oil burner pumps are set from about 100 to 200 psi; gauges read to 300 psi.
+  pumpPressurePsi: { minExclusive: 0, max: 300, unit: 'psi', why: 'an oil pump pressure gauge' },
   openCircuitMv: { min: 0, max: 100, unit: 'mV', why: 'a thermocouple makes tens of millivolts' },
   closedCircuitMv: { min: 0, max: 100, unit: 'mV', why: 'a thermocouple makes tens of millivolts' },
 } as const satisfies Record<string, ReadingRange>;

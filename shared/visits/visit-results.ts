@@ -11,6 +11,9 @@ import {
   LOW_WATER_CUTOFF_FAILED,
   parseGaugeGlassReading,
   thermocoupleFlags,
+  oilFiringRate,
+  smokeNumberFlags,
+  type OilFiringRate,
   TradeInputError,
   type CutoffTripPosition,
   type CombustionAnalysis,
@@ -45,6 +48,9 @@ type Loose<T> = T extends object ? { [K in keyof T]?: T[K] | null } : T;
 /** Readings as stored (validated) or as typed so far on the phone (a block may be half filled). */
 export type ReadingsSoFar = { [K in keyof ReadingsInput]?: Loose<NonNullable<ReadingsInput[K]>> | null };
 
+/** Oil burner: the firing rate from the nozzle and pump pressure, beside the nameplate input; the smoke judgement. */
+export type OilResult = { firingRate?: OilFiringRate & { nameplateBtuPerHour: number | null }; smokeFlags: TradeFlag[] };
+
 export type GasInputResult = { cubicFeetPerHour: number; inputBtuPerHour: number; rating?: RatingComparison };
 
 /** A computation's refusal, keyed like the form and the server's details (`readings.<group>.<field>` or `readings.<group>`). */
@@ -56,6 +62,7 @@ export type ReadingResults = {
   gasInput: Computed<GasInputResult>;
   thermocouple: Computed<ThermocoupleAssessment>;
   gaugeGlass: Computed<GaugeGlassAssessment>;
+  oil: Computed<OilResult>;
   lowWaterCutoff: LowWaterCutoffResult | null;
   lowWaterCutoffFailed: boolean;
   /** Every flag the readings raise, in the order they are stored. */
@@ -70,6 +77,7 @@ export type VisitResults = {
   gasInput?: GasInputResult;
   thermocouple?: ThermocoupleAssessment;
   gaugeGlass?: GaugeGlassAssessment;
+  oil?: OilResult;
   lowWaterCutoff?: LowWaterCutoffResult;
   /** Every flag from the computations above, in one list, so the form can show them together. */
   flags: TradeFlag[];
@@ -113,6 +121,7 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
             draftInWc: num(c?.draftInWc),
             ambientCoPpm: num(c?.ambientCoPpm),
             spillageSeconds: num(c?.spillageSeconds),
+            outdoorTempF: num(c?.outdoorTempF),
             ventType: facts.ventType,
             condensing: facts.construction === 'condensing',
             applianceKind: facts.kind ?? undefined,
@@ -144,6 +153,18 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
   const level = r.gaugeGlassLevel?.trim();
   const gaugeGlass = level ? attempt('gaugeGlassLevel', level, () => assessGaugeGlassReading(parseGaugeGlassReading(level))) : null;
 
+  const o = r.oil;
+  const smoke = num(o?.smokeSpot), nozzle = num(o?.nozzleGph), pump = num(o?.pumpPressurePsi);
+  const oil: Computed<OilResult> =
+    smoke !== undefined || (nozzle !== undefined && pump !== undefined)
+      ? attempt('oil', o, () => ({
+          smokeFlags: smoke === undefined ? [] : smokeNumberFlags({ smokeNumber: smoke, burnerType: o?.burnerType ?? undefined }, 'smokeSpot'),
+          ...(nozzle !== undefined && pump !== undefined
+            ? { firingRate: { ...oilFiringRate({ nozzleGph: nozzle, pumpPressurePsi: pump }), nameplateBtuPerHour: facts?.inputBtuh ?? null } }
+            : {}),
+        }))
+      : null;
+
   const w = r.lowWaterCutoff;
   // A failed test is a stop on the phone even before the cutoff's type is chosen.
   const cutoff = typeof w?.burnerStopped === 'boolean' ? assessLowWaterCutoff({ burnerStopped: w.burnerStopped, trippedWith: w.trippedWith }) : null;
@@ -155,16 +176,17 @@ export function computeReadingResults(r: ReadingsSoFar, facts: ResultFacts | und
     ...(ratingFlag ? [ratingFlag] : []),
     ...(thermocouple?.ok ? thermocoupleFlags(thermocouple.value, open ?? null) : []),
     ...(gaugeGlass?.ok ? gaugeGlass.value.flags : []),
+    ...(oil?.ok ? oil.value.smokeFlags : []),
     ...(cutoff?.flags ?? []),
   ];
   const stopFlags = flags.filter((f) => f.severity === 'stop');
   const outcomeRequired = lowWaterCutoffFailed || stopFlags.length > 0;
-  return { combustion, gasInput, thermocouple, gaugeGlass, lowWaterCutoff, lowWaterCutoffFailed, flags, stopFlags, outcomeRequired };
+  return { combustion, gasInput, thermocouple, gaugeGlass, oil, lowWaterCutoff, lowWaterCutoffFailed, flags, stopFlags, outcomeRequired };
 }
 
 /** The computations' refusals, first one first (the order the form shows the blocks). */
 export function refusalsOf(results: ReadingResults): Refusal[] {
-  return [results.combustion, results.gasInput, results.thermocouple, results.gaugeGlass].filter((x): x is Refusal => x !== null && !x.ok);
+  return [results.combustion, results.gasInput, results.thermocouple, results.gaugeGlass, results.oil].filter((x): x is Refusal => x !== null && !x.ok);
 }
 
 /** The stored shape of the results: only what was computed. */
@@ -174,6 +196,7 @@ export function storedResults(results: ReadingResults): VisitResults {
   if (results.gasInput?.ok) out.gasInput = results.gasInput.value;
   if (results.thermocouple?.ok) out.thermocouple = results.thermocouple.value;
   if (results.gaugeGlass?.ok) out.gaugeGlass = results.gaugeGlass.value;
+  if (results.oil?.ok) out.oil = results.oil.value;
   if (results.lowWaterCutoff) out.lowWaterCutoff = results.lowWaterCutoff;
   return out;
 }

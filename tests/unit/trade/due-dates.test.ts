@@ -216,6 +216,18 @@ describe('DEFAULT_DUE_RULES', () => {
     expect(DEFAULT_DUE_RULES.low_water_cutoff_probe.source).toMatch(/ASME BPVC Section VI/);
   });
 
+  it('gives steam safety valves and hot-water relief valves their own try-lever intervals, marked common practice', () => {
+    // from memory: ASME BPVC Section VI: steam safety valves monthly in the heating season, hot-water relief valves quarterly
+    expect(DEFAULT_DUE_RULES.safety_valve.ownerTest?.intervalDays).toBe(30);
+    expect(DEFAULT_DUE_RULES.relief_valve.ownerTest?.intervalDays).toBe(91);
+    for (const type of ['safety_valve', 'relief_valve'] as const) {
+      expect(DEFAULT_DUE_RULES[type]).toMatchObject({ basis: 'common_practice' });
+      expect(DEFAULT_DUE_RULES[type].source).toMatch(/^common practice/);
+    }
+    expect(DEFAULT_DUE_RULES.safety_valve.ownerTest?.source).toMatch(/steam safety valve/);
+    expect(DEFAULT_DUE_RULES.relief_valve.ownerTest?.source).toMatch(/hot-water relief valve/);
+  });
+
   it('never gives an age limit on the strength of common practice', () => {
     for (const type of COMPONENT_TYPE_CODES) {
       const rule = DEFAULT_DUE_RULES[type];

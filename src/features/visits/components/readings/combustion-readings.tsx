@@ -37,6 +37,15 @@ export function CombustionReadings() {
         <NumberField label="Ambient CO" converter={plain('ppm', 0)} value={c?.ambientCoPpm} onChange={(v) => set({ ambientCoPpm: v })} {...field('ambientCoPpm')} />
         <NumberField label="Spillage" converter={plain('s', 0)} value={c?.spillageSeconds} onChange={(v) => set({ spillageSeconds: v })} {...field('spillageSeconds')} />
         <NumberField
+          key={`outdoor-${temp.unit}`}
+          label="Outdoor temp"
+          converter={temp}
+          allowNegative
+          value={c?.outdoorTempF}
+          onChange={(v) => set({ outdoorTempF: v })}
+          {...field('outdoorTempF')}
+        />
+        <NumberField
           label="Steady firing"
           converter={plain('min', 1)}
           value={c?.steadyFiringMinutes}
