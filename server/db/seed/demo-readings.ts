@@ -16,6 +16,7 @@ export function demoReadings(f: Faker, a: Facts, wear: number, overrides: Partia
       coPpm: Math.round((oil ? f.number.int({ min: 5, max: 30 }) : f.number.int({ min: 5, max: 35 })) * (1 + 0.8 * wear)),
       flueTempF: Math.round((oil ? f.number.int({ min: 430, max: 520 }) : f.number.int({ min: 340, max: 440 })) + 60 * wear),
       airTempF: f.number.int({ min: 58, max: 72 }),
+      outdoorTempF: f.number.int({ min: 25, max: 55 }),
       draftInWc: round(-f.number.float({ min: 0.02, max: 0.05 }), 2),
       ambientCoPpm: f.number.int({ min: 0, max: 2 }),
       spillageSeconds: oil ? null : f.number.int({ min: 0, max: 20 }),
@@ -24,7 +25,10 @@ export function demoReadings(f: Faker, a: Facts, wear: number, overrides: Partia
   };
   if (oil) {
     readings.oil = {
-      smokeSpot: f.helpers.arrayElement([0, 0, 1, 1, 2]),
+      // A tuned flame-retention burner holds smoke at No. 1 or under (the limit the visit judges it against).
+      smokeSpot: f.helpers.arrayElement([0, 0, 1, 1]),
+      burnerType: 'flame_retention',
+      nozzleGph: f.helpers.arrayElement([0.65, 0.75, 0.85]),
       pumpPressurePsi: f.helpers.arrayElement([100, 100, 140]),
       overFireDraftInWc: round(-f.number.float({ min: 0.01, max: 0.03 }), 2),
       breechDraftInWc: round(-f.number.float({ min: 0.03, max: 0.06 }), 2),

@@ -1,4 +1,5 @@
 import { and, asc, eq, gt, inArray, isNull, lt, sql } from 'drizzle-orm';
+import { duePartColumns, partsDueBy } from './due-parts';
 import type { DbOrTx } from '../../db/client';
 import { appliances, bookingAppliances, bookings, companies, components, memberships, serviceRequests, sites, users, visits } from '../../db/schema/index';
 
@@ -140,25 +141,10 @@ export const bookingsRepository = {
         )
         .where(and(eq(bookingAppliances.companyId, companyId), sql`${bookingAppliances.bookingId} = ${anyOf(bookingIds)}`)),
       db
-        .selectDistinct({
-          id: components.id,
-          applianceId: components.applianceId,
-          typeCode: components.typeCode,
-          specKey: components.specKey,
-          dueOn: components.dueOn,
-          dueKind: components.dueKind,
-          conditionFailed: components.conditionFailed,
-        })
+        .selectDistinct({ id: components.id, ...duePartColumns })
         .from(components)
         .innerJoin(bookingAppliances, eq(bookingAppliances.applianceId, components.applianceId))
-        .where(
-          and(
-            eq(components.companyId, companyId),
-            sql`${bookingAppliances.bookingId} = ${anyOf(bookingIds)}`,
-            isNull(components.removedOn),
-            sql`(${components.conditionFailed} or ${components.dueOn} <= ${dueBy})`,
-          ),
-        )
+        .where(and(partsDueBy(companyId, dueBy), sql`${bookingAppliances.bookingId} = ${anyOf(bookingIds)}`))
         .orderBy(asc(components.dueOn), asc(components.id)),
       db
         .select({ bookingId: visits.bookingId, id: visits.id })

@@ -1,5 +1,6 @@
-import { and, asc, eq, inArray, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, asc, inArray, sql, type SQL } from 'drizzle-orm';
 import { components } from '../../db/schema/index';
+import { duePartColumns, partsDueBy } from './due-parts';
 import type { DbOrTx } from '../../db/client';
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 
@@ -82,22 +83,8 @@ export async function listUnbooked(db: DbOrTx, q: UnbookedFilter): Promise<Unboo
 /** The due parts of these appliances, worded as a booking card words them. */
 export function duePartsOf(db: DbOrTx, companyId: string, applianceIds: string[], through: string) {
   return db
-    .select({
-      applianceId: components.applianceId,
-      typeCode: components.typeCode,
-      specKey: components.specKey,
-      dueOn: components.dueOn,
-      dueKind: components.dueKind,
-      conditionFailed: components.conditionFailed,
-    })
+    .select(duePartColumns)
     .from(components)
-    .where(
-      and(
-        eq(components.companyId, companyId),
-        inArray(components.applianceId, applianceIds),
-        isNull(components.removedOn),
-        sql`(${components.conditionFailed} or ${components.dueOn} <= ${through})`,
-      ),
-    )
+    .where(and(partsDueBy(companyId, through), inArray(components.applianceId, applianceIds)))
     .orderBy(asc(components.dueOn));
 }
