@@ -17,6 +17,9 @@ import { UnbookedQueue } from './unbooked-queue';
 const clock = (local: string) => local.slice(11, 16);
 const cellId = (technicianId: string, date: string) => `${technicianId}|${date}`;
 
+const BOARD_DUE_LINES = 2;
+const shownDue = (due: string[]) => [...due].sort((a, b) => Number(b.includes(': replace')) - Number(a.includes(': replace'))).slice(0, BOARD_DUE_LINES);
+
 /** The office's week: technicians as rows, Monday to Saturday across, bookings as blocks; the unbooked queue beside. */
 export function WeekBoardPage() {
   const me = useMe();
@@ -147,7 +150,13 @@ function BookingBlock({ booking: b, onMove }: { booking: BookingDto; onMove: () 
         <p>{b.customer.name}</p>
         <p>{b.site.town}</p>
         <p className="text-xs font-semibold uppercase">{BOOKING_STATUS_LABELS[b.status]}</p>
-        {due.length > 0 && <p className="text-xs">{due.join('; ')}</p>}
+        {due.length > 0 && (
+          // A block stays a glance: replacements first, two lines, the rest counted (the round and the record list them all).
+          <p className="text-xs">
+            {shownDue(due).join('; ')}
+            {due.length > BOARD_DUE_LINES && ` and ${due.length - BOARD_DUE_LINES} more`}
+          </p>
+        )}
       </div>
       {(b.status === 'booked' || b.status === 'confirmed') && (
         <button type="button" className="min-h-tap text-xs underline" onClick={onMove} aria-label={`Move ${b.customer.name}, ${clock(b.start)}`}>
