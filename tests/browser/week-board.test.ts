@@ -35,6 +35,11 @@ describe('the week board', () => {
     const b = await place('Tamsin Creel', '88 Bittern Way', 'Fenwick Hollow');
     const bHeater = await insertAppliance(db, { companyId, siteId: b.site.id, kind: 'water_heater' });
     await insertBooking(db, { companyId, siteId: b.site.id, technicianId: second.user.id, applianceIds: [bHeater.id], start: `${tuesday}T13:00`, end: `${tuesday}T14:00`, timeZone: tz, status: 'confirmed' });
+    // A Sunday booking opens a Sunday column (Monday to Saturday otherwise), so no booking is off the board.
+    const sunday = addDays(monday, 6);
+    const s = await place('Bram Oakwell', '2 Fern Lane', 'Alder Falls');
+    const sBoiler = await insertAppliance(db, { companyId, siteId: s.site.id });
+    await insertBooking(db, { companyId, siteId: s.site.id, technicianId: first.id, applianceIds: [sBoiler.id], start: `${sunday}T10:00`, end: `${sunday}T11:00`, timeZone: tz });
     // Overdue and not booked; the site is Oren's.
     const c = await place('Ilse Marchbank', '7 Quarry Steps', 'Alder Falls', second.user.id);
     const cBoiler = await insertAppliance(db, {
@@ -56,6 +61,7 @@ describe('the week board', () => {
     await cell(first.name, monday).getByText('Booked').waitFor();
     await cell('Oren Sallowfield', tuesday).getByText('Tamsin Creel').waitFor();
     await cell('Oren Sallowfield', tuesday).getByText('Confirmed').waitFor();
+    await cell(first.name, sunday).getByText('Bram Oakwell').waitFor();
 
     // Book from the queue: Oren is proposed (the site's technician), the window defaults to a steam boiler's 120 minutes.
     await page.getByLabel('Customer, street or town').fill('Marchbank');

@@ -25,8 +25,11 @@ export function WeekBoardPage() {
   const me = useMe();
   const today = todayInTimeZone(me.data?.company?.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone);
   const [monday, setMonday] = useState(() => mondayOf(today));
-  const days = [0, 1, 2, 3, 4, 5].map((n) => addDays(monday, n));
-  const board = useWeekBoard(days[0], days[5]);
+  const sunday = addDays(monday, 6);
+  // Monday to Saturday; Sunday too when something is booked on it, so no booking is ever off the board.
+  const board = useWeekBoard(monday, sunday);
+  const sundayBooked = board.data?.bookings.some((b) => b.start.slice(0, 10) === sunday) ?? false;
+  const days = [0, 1, 2, 3, 4, 5, ...(sundayBooked ? [6] : [])].map((n) => addDays(monday, n));
   const [moving, setMoving] = useState<string | null>(null);
   const drag = useMoveBooking();
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor));
@@ -43,7 +46,7 @@ export function WeekBoardPage() {
 
   const movingBooking = board.data?.bookings.find((b) => b.id === moving);
   return (
-    <Page title="Week board" subtitle={`${formatCalendarDate(days[0])} to ${formatCalendarDate(days[5])}`}>
+    <Page title="Week board" subtitle={`${formatCalendarDate(days[0])} to ${formatCalendarDate(days.at(-1)!)}`}>
       <div className="flex flex-wrap gap-2" role="group" aria-label="Which week">
         <Button variant="secondary" onClick={() => setMonday(addDays(monday, -7))}>
           Previous week
@@ -117,7 +120,7 @@ export function WeekBoardPage() {
             </section>
           )}
         </div>
-        <UnbookedQueue from={days[0]} to={days[5]} today={today} />
+        <UnbookedQueue from={days[0]} to={days.at(-1)!} today={today} />
       </div>
     </Page>
   );
