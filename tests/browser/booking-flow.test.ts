@@ -104,7 +104,10 @@ describe('from the due list to a done booking', () => {
     await phone.clock.setFixedTime(new Date(NOW));
     const page = await phone.newPage();
     await signInAsMember(page, fx.server.baseUrl, tech.email);
-    await page.goto(`${fx.server.baseUrl}/round`);
+    // Home says what the day holds, one tap from the round.
+    await page.getByText('1 visit to do today. Next: 10:00, Perrin Ashdown, 5 Larkspur Lane.').waitFor();
+    await page.getByRole('link', { name: 'Open the round' }).click();
+    await page.getByRole('heading', { name: 'Round' }).waitFor();
     const card = page.locator('section', { hasText: 'Perrin Ashdown' });
     await card.getByText(/10:00–/).first().waitFor();
     const load = page.locator('section', { has: page.getByRole('heading', { name: 'Load list' }) });

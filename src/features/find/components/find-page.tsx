@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Page } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
@@ -8,7 +8,8 @@ import { useDebouncedValue } from '../hooks/use-debounced-value';
 
 const MATCHED: Record<SearchHit['matched'], string> = { name: 'name', street: 'address', phone: 'phone', serial: 'serial' };
 
-export function FindPage() {
+/** `below`: what the app puts under the search (the technician's day, from the bookings feature). */
+export function FindPage({ below }: { below?: ReactNode } = {}) {
   const [text, setText] = useState('');
   const q = useDebouncedValue(text.trim(), 150);
   const search = useSearch(q);
@@ -56,6 +57,7 @@ export function FindPage() {
           </ul>
         )}
       </div>
+      {below}
     </Page>
   );
 }
