@@ -7,10 +7,12 @@ export function useDocumentTitle(title: string) {
   }, [title]);
 }
 
-export function Page({ title, subtitle, actions, children }: { title: string; subtitle?: ReactNode; actions?: ReactNode; children: ReactNode }) {
+type PageProps = { title: string; subtitle?: ReactNode; actions?: ReactNode; children: ReactNode; /** Boards and wide tables use the whole screen. */ wide?: boolean };
+
+export function Page({ title, subtitle, actions, children, wide = false }: PageProps) {
   useDocumentTitle(title);
   return (
-    <div className="mx-auto flex w-full max-w-5xl flex-col gap-4 px-3 py-4 sm:px-6">
+    <div className={`mx-auto flex w-full ${wide ? 'max-w-none' : 'max-w-5xl'} flex-col gap-4 px-3 py-4 sm:px-6`}>
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-2xl font-bold">{title}</h1>

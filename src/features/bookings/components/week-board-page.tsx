@@ -46,7 +46,7 @@ export function WeekBoardPage() {
 
   const movingBooking = board.data?.bookings.find((b) => b.id === moving);
   return (
-    <Page title="Week board" subtitle={`${formatCalendarDate(days[0])} to ${formatCalendarDate(days.at(-1)!)}`}>
+    <Page wide title="Week board" subtitle={`${formatCalendarDate(days[0])} to ${formatCalendarDate(days.at(-1)!)}`}>
       <div className="flex flex-wrap gap-2" role="group" aria-label="Which week">
         <Button variant="secondary" onClick={() => setMonday(addDays(monday, -7))}>
           Previous week
