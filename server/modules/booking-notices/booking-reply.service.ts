@@ -1,11 +1,12 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { AppContext } from '../../context';
-import { bookingAppliances, bookings, companies, customers, sites, users } from '../../db/schema/index';
+import { bookingAppliances } from '../../db/schema/index';
 import { notFound } from '../../lib/http-error';
 import { formatVisitWindow } from '../../../shared/format/dates';
 import type { BookingReplyCreatedDto, BookingReplyInput, BookingReplyPageDto } from '../../../shared/schemas/booking-notices';
 import { serviceRequestsService } from '../service-requests/service-requests.service';
 import { verifyBookingReplyToken } from './booking-reply-token';
+import { bookingNoticesRepository } from './booking-notices.repository';
 import { homeownerBooking } from './next-booking';
 
 /**
@@ -16,24 +17,8 @@ export function bookingReplyService(ctx: AppContext) {
   async function resolve(token: string) {
     const bookingId = verifyBookingReplyToken(ctx.config.BETTER_AUTH_SECRET, token);
     if (!bookingId) throw notFound('Booking');
-    const [row] = await ctx.db
-      .select({
-        booking: bookings,
-        street: sites.street,
-        town: sites.town,
-        customerName: customers.name,
-        customerEmail: customers.email,
-        companyName: companies.name,
-        companyPhone: companies.phone,
-        timeZone: companies.timeZone,
-        technicianName: users.name,
-      })
-      .from(bookings)
-      .innerJoin(sites, eq(sites.id, bookings.siteId))
-      .innerJoin(customers, eq(customers.id, sites.customerId))
-      .innerJoin(companies, eq(companies.id, bookings.companyId))
-      .innerJoin(users, eq(users.id, bookings.technicianId))
-      .where(eq(bookings.id, bookingId));
+    // The same facts the booking's e-mails are written from.
+    const row = await bookingNoticesRepository.context(ctx.db, bookingId);
     const live = row && (row.booking.status === 'booked' || row.booking.status === 'confirmed') && row.booking.endsAt > new Date();
     if (!live) throw notFound('Booking');
     return row;
@@ -66,7 +51,7 @@ export function bookingReplyService(ctx: AppContext) {
         {
           contactName: input.contactName,
           contactPhone: input.contactPhone ?? null,
-          contactEmail: r.customerEmail,
+          contactEmail: r.email,
           preferredTimes: input.preferredTimes,
           message: `The booked time does not suit: ${when}.\nWhy: ${input.reason}`,
         },
