@@ -8,36 +8,12 @@ import {
   co2PctFromO2,
   combustionSafetyFlags,
   excessAirPctFromO2,
-  isInRange,
-  READING_RANGES,
   requireReading,
   siegertFlueLossPct,
-  TradeInputError,
   type ReadingName,
 } from '../../../shared/trade/index';
 import { readingsInput } from '../../../shared/schemas/visits';
-
-const refusedOn = (call: () => unknown): string | undefined => {
-  try {
-    call();
-  } catch (error) {
-    if (error instanceof TradeInputError) return error.field;
-    throw error;
-  }
-  return undefined;
-};
-
-const nonFinite = fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY);
-/** A number outside the reading's range (or not finite). */
-const outOf = (name: ReadingName) => {
-  const r: { min?: number; max?: number; minExclusive?: number; maxExclusive?: number } = READING_RANGES[name];
-  const low = r.min ?? r.minExclusive;
-  const high = r.max ?? r.maxExclusive;
-  const below = r.min !== undefined ? fc.double({ max: r.min, maxExcluded: true, noNaN: true }) : fc.double({ max: low!, noNaN: true });
-  const above = r.max !== undefined ? fc.double({ min: r.max, minExcluded: true, noNaN: true }) : fc.double({ min: high!, noNaN: true });
-  // −0 equals 0, so the filter keeps only values truly outside.
-  return fc.oneof(below, above, nonFinite).filter((v) => !isInRange(READING_RANGES[name], v));
-};
+import { outOf, refusedOn } from './reading-guards';
 
 const combustionBase = { fuel: 'natural_gas', o2Pct: 5, coPpm: 20, flueTempF: 400, airTempF: 70 } as const;
 const gasBase = { dialCubicFeet: 1, secondsPerRevolution: 30, heatingValueBtuPerCubicFoot: 1026 };
