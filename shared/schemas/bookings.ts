@@ -91,6 +91,11 @@ function checkWindow(v: { start?: string; end?: string }, ctx: z.RefinementCtx) 
 }
 
 /** Minutes between two wall-clock readings, as the clock on the wall shows them (a change of clocks is the server's business). */
+/** A wall-clock reading `minutes` later on the same clock ("2026-12-08T23:30" + 60 → "2026-12-09T00:30"); no zone involved. */
+export function addMinutesToLocal(local: string, minutes: number): string {
+  return new Date(Date.parse(`${local}:00Z`) + minutes * 60_000).toISOString().slice(0, 16);
+}
+
 export function localMinutesBetween(start: string, end: string): number {
   const toMs = (v: string) => Date.parse(`${v}:00Z`);
   const minutes = Math.round((toMs(end) - toMs(start)) / 60_000);

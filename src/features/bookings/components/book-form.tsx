@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { BOOKING_STATUS_LABELS, DEFAULT_BOOKING_MINUTES, type BookingDto, type BookingMinutesSetting, type BookingSource } from '@shared/schemas/bookings';
+import { addMinutesToLocal, BOOKING_STATUS_LABELS, DEFAULT_BOOKING_MINUTES, type BookingDto, type BookingMinutesSetting, type BookingSource } from '@shared/schemas/bookings';
 import type { ApplianceKind } from '@shared/schemas/enums';
 import { formatCalendarDate } from '@shared/format/dates';
 import { Button } from '@/components/ui/button';
@@ -9,7 +9,6 @@ import { useTechnicians } from '@/lib/resources/members';
 import { describeFailure } from '@/lib/form-errors';
 import { useCreateBooking } from '../api/create-booking';
 import { useRound } from '../api/get-round';
-import { addMinutesToLocal } from './move-form';
 
 export type BookFormProps = {
   appliances: { id: string; title: string; kind: ApplianceKind }[];

@@ -1,15 +1,10 @@
 import { useState, type FormEvent } from 'react';
-import { localMinutesBetween, type BookingDto } from '@shared/schemas/bookings';
+import { addMinutesToLocal, localMinutesBetween, type BookingDto } from '@shared/schemas/bookings';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { describeFailure } from '@/lib/form-errors';
 import { useMoveBooking } from '../api/move-booking';
-
-/** Adds minutes to a wall-clock reading (arithmetic on the reading itself, so no zone shifts it). */
-export function addMinutesToLocal(local: string, minutes: number) {
-  return new Date(Date.parse(`${local}:00Z`) + minutes * 60_000).toISOString().slice(0, 16);
-}
 
 /** Moves a booking by keyboard alone: date, start time and technician; the window keeps its length. */
 export function MoveForm({ booking, technicians, onMoved }: { booking: BookingDto; technicians: { id: string; name: string }[]; onMoved: () => void }) {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { DndContext, KeyboardSensor, PointerSensor, useDraggable, useDroppable, useSensor, useSensors, type DragEndEvent } from '@dnd-kit/core';
-import { BOOKING_STATUS_LABELS, localMinutesBetween, type BookingDto } from '@shared/schemas/bookings';
+import { addMinutesToLocal, BOOKING_STATUS_LABELS, localMinutesBetween, type BookingDto } from '@shared/schemas/bookings';
 import { todayInTimeZone } from '@shared/dates';
 import { formatCalendarDate, formatWeekday } from '@shared/format/dates';
 import { addDays, mondayOf } from '@shared/trade/iso-date';
@@ -11,7 +11,7 @@ import { useMe } from '@/lib/auth';
 import { describeFailure } from '@/lib/form-errors';
 import { useWeekBoard } from '../api/get-week-board';
 import { useMoveBooking } from '../api/move-booking';
-import { addMinutesToLocal, MoveForm } from './move-form';
+import { MoveForm } from './move-form';
 import { UnbookedQueue } from './unbooked-queue';
 
 const clock = (local: string) => local.slice(11, 16);
