@@ -11,9 +11,7 @@ export function RecordHeader({ record }: { record: ApplianceRecordDto }) {
       <dl className="grid grid-cols-2 gap-x-3 gap-y-2">
         <Fact label="Construction">{LABELS.construction[a.construction]}</Fact>
         <Fact label="Age">{record.ageYears == null ? 'Unknown' : `${record.ageYears} ${record.ageYears === 1 ? 'year' : 'years'}`}</Fact>
-        <div className="col-span-2">
-          <Fact label="Make and model">{makeModel(a)}</Fact>
-        </div>
+        <Fact wide label="Make and model">{makeModel(a)}</Fact>
         <Fact label="Serial">
           <span className="tabular break-all">{a.serial ?? 'Not recorded'}</span>
         </Fact>
@@ -22,16 +20,14 @@ export function RecordHeader({ record }: { record: ApplianceRecordDto }) {
         <Fact label="Last visit">
           {lastVisit ? `${formatDate(lastVisit.visitedOn)} · ${LABELS.visitType[lastVisit.type]}` : 'No visit recorded'}
         </Fact>
-        <div className="col-span-2">
-          <Fact label="Site">
-            {site.street}, {site.town}
-            {site.postalCode ? ` ${site.postalCode}` : ''}
-          </Fact>
-        </div>
+        <Fact wide label="Site">
+          {site.street}, {site.town}
+          {site.postalCode ? ` ${site.postalCode}` : ''}
+        </Fact>
         {site.accessNotes && (
-          <div className="col-span-2">
-            <Fact label="Access">{site.accessNotes}</Fact>
-          </div>
+          <Fact wide label="Access">
+            {site.accessNotes}
+          </Fact>
         )}
       </dl>
       <p className="mt-3 flex flex-wrap gap-4 text-sm">

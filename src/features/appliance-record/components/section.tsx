@@ -13,9 +13,10 @@ export function Section({ title, action, children }: { title: string; action?: R
   );
 }
 
-export function Fact({ label, children }: { label: string; children: ReactNode }) {
+/** One term and its value; `wide` spans both columns of the record's two-column list (a <dl> allows only div groups). */
+export function Fact({ label, children, wide = false }: { label: string; children: ReactNode; wide?: boolean }) {
   return (
-    <div className="flex flex-col">
+    <div className={`flex flex-col ${wide ? 'col-span-2' : ''}`}>
       <dt className="text-xs font-semibold uppercase tracking-wide text-iron-muted">{label}</dt>
       <dd className="font-semibold">{children}</dd>
     </div>
