@@ -6,6 +6,7 @@ import { ROLE_LABELS } from '@shared/schemas/roles';
 import { can } from '@shared/policy';
 import { useNewServiceRequestCount } from '@/features/service-requests/api/list-service-requests';
 import { navFor } from './nav';
+import { PhoneNav } from './phone-nav';
 
 /** Dim follows the device's colour scheme until the user presses the button; that choice is kept on the device. */
 function useDimMode() {
@@ -33,7 +34,11 @@ export function AppShell() {
   // The development outbox exists only beside the local mail fake, for the owner; /me says so.
   const outbox = Boolean(me.data?.devOutbox) && can(principal, 'dev:outbox');
   const newRequests = useNewServiceRequestCount(can(principal, 'records:read')).data ?? 0;
-  const nav = [...navFor(principal), ...(outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [])];
+  const nav = navFor(principal);
+  // The mail fake's outbox is a development tool: a small link by the user's name, never in the main navigation.
+  const devLinks = outbox ? [{ to: '/outbox', label: 'Outbox (dev)' }] : [];
+  // A homeowner has one place to go (their boilers), reached from the logo; the bar is for the team.
+  const phoneNav = principal?.kind === 'member';
   const roleLabel = principal?.kind === 'member' ? ROLE_LABELS[principal.role] : principal?.kind === 'homeowner' ? 'Homeowner' : '';
 
   return (
@@ -73,7 +78,7 @@ export function AppShell() {
             </button>
           </div>
         </div>
-        <nav aria-label="Main" className="mx-auto flex max-w-5xl gap-1 overflow-x-auto px-2 pb-1 sm:px-5">
+        <nav aria-label="Main" className="mx-auto hidden max-w-5xl gap-1 overflow-x-auto px-2 pb-1 sm:flex sm:px-5">
           {nav.map((item) => (
             <NavLink
               key={item.to}
@@ -91,14 +96,20 @@ export function AppShell() {
               )}
             </NavLink>
           ))}
-          <span className="ml-auto hidden items-center px-2 text-sm text-header-text/70 sm:flex">
+          <span className="ml-auto hidden items-center gap-3 px-2 text-sm text-header-text/70 sm:flex">
+            {devLinks.map((l) => (
+              <NavLink key={l.to} to={l.to} className="underline">
+                {l.label}
+              </NavLink>
+            ))}
             {me.data?.user.name} · {roleLabel}
           </span>
         </nav>
       </header>
-      <main id="main" tabIndex={-1} className="flex-1 focus:outline-none">
+      <main id="main" tabIndex={-1} className={`flex-1 focus:outline-none ${phoneNav ? 'pb-20 sm:pb-0' : ''}`}>
         <Outlet />
       </main>
+      {phoneNav && <PhoneNav items={nav} extra={devLinks} />}
     </div>
   );
 }

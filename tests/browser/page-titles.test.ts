@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { signInAsMember, useBrowserFixture } from '../support/browser';
+import { PHONE, signInAsMember, useBrowserFixture } from '../support/browser';
 
 const fx = useBrowserFixture();
 
@@ -37,6 +37,31 @@ describe('dim mode', () => {
     await page.reload();
     await page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
     expect(await isDim()).toBe(false);
+    await context.close();
+  });
+});
+
+describe('the phone’s navigation', () => {
+  it('puts the technician’s four destinations in a bottom bar, the rest under More, and nothing scrolls sideways', async () => {
+    const context = await fx.browser.newContext(PHONE);
+    const page = await context.newPage();
+    await signInAsMember(page, fx.server.baseUrl, fx.t.technician.user.email);
+    const bar = page.getByRole('navigation', { name: 'Phone' });
+    expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
+    const names = await bar.locator(':scope > div > *').allInnerTexts();
+    expect(names.map((n) => n.trim())).toEqual(['Round', 'Find', 'Scan', 'More']);
+    // WCAG 2.2 SC 2.5.8 target size: each tab is far above 24 px; common practice for a thumb is about 44 px.
+    for (const box of await bar.locator(':scope > div > *').evaluateAll((els) => els.map((e) => e.getBoundingClientRect().height))) {
+      expect(box).toBeGreaterThanOrEqual(44);
+    }
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
+
+    await bar.getByRole('button', { name: 'More' }).click();
+    await bar.getByRole('link', { name: 'Customers' }).click();
+    await page.getByRole('heading', { name: 'Customers', level: 1 }).waitFor();
+    expect(await bar.getByRole('link', { name: 'Customers' }).count()).toBe(0);
+    await bar.getByRole('link', { name: 'Round' }).click();
+    await page.getByRole('heading', { name: 'Round', level: 1 }).waitFor();
     await context.close();
   });
 });
