@@ -11,6 +11,7 @@ import { securityHeaders } from './security-headers';
 import { requestLogger } from './logger';
 import { CLIENT_IP_HEADER } from './auth/auth';
 import { loadSession } from './middleware/authenticate';
+import { provideIdempotencyStore } from './lib/idempotency/idempotency-middleware';
 import { sameOriginOnly } from './middleware/same-origin';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
 import { healthRoutes } from './routes/health';
@@ -75,6 +76,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(express.json({ limit: '1mb' }));
   api.use(healthRoutes(ctx));
   api.use(loadSession(ctx));
+  api.use(provideIdempotencyStore(ctx.db));
   api.use(meRoutes(ctx));
   api.use(companyRoutes(ctx));
   api.use(teamRoutes(ctx));

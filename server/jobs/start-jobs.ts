@@ -4,6 +4,7 @@ import { PHOTO_SWEEP_CRON, PHOTO_SWEEP_QUEUE, photoSweepJob } from './photo-swee
 import { REMINDERS_CRON, REMINDERS_QUEUE, remindersJob } from './reminders-job';
 import { MAIL_CRON, MAIL_QUEUE, mailJob } from './mail-job';
 import { IMPORT_CRON, IMPORT_QUEUE, importJob } from './import-job';
+import { IDEMPOTENCY_SWEEP_CRON, IDEMPOTENCY_SWEEP_QUEUE, idempotencySweepJob } from './idempotency-sweep-job';
 import { BOOKING_REMINDERS_CRON, BOOKING_REMINDERS_QUEUE, bookingRemindersJob } from './booking-reminders-job';
 
 export const JOBS_SCHEMA = 'pgboss';
@@ -30,6 +31,13 @@ const JOBS: Job[] = [
   // Each import claims itself by status, so a run that overlaps another finds nothing to claim.
   { queue: IMPORT_QUEUE, cron: IMPORT_CRON, options: { expireInSeconds: 3600, retryLimit: 2, retryDelay: 60 }, run: (ctx) => importJob(ctx) },
   { queue: PHOTO_SWEEP_QUEUE, cron: PHOTO_SWEEP_CRON, options: { expireInSeconds: 3600, retryLimit: 1, retryDelay: 600 }, run: (ctx) => photoSweepJob(ctx) },
+  // A delete by age: a run that overlaps or repeats another deletes nothing twice.
+  {
+    queue: IDEMPOTENCY_SWEEP_QUEUE,
+    cron: IDEMPOTENCY_SWEEP_CRON,
+    options: { expireInSeconds: 15 * 60, retryLimit: 1, retryDelay: 300 },
+    run: (ctx) => idempotencySweepJob(ctx),
+  },
 ];
 
 /**

@@ -1,9 +1,10 @@
-import type { Request, RequestHandler, Response, Router } from 'express';
+import type { NextFunction, Request, RequestHandler, Response, Router } from 'express';
 import type { z } from 'zod';
 import type { Permission } from '../../shared/policy';
 import { requireHomeowner, requirePermission, requireSignedIn } from '../middleware/authenticate';
 import { JSON_BODY, requireBodyType, type BodyType } from '../middleware/body-type';
 import { validate, type Valid } from '../middleware/validate';
+import { idempotencyKey, releaseClaim, settleClaim } from './idempotency/idempotency-middleware';
 
 /**
  * Every API route declares who may call it; there is no way to register one without saying so.
@@ -18,6 +19,15 @@ export type RouteEntry = { method: Method; path: string; access: Access; schemas
  * send each one what it claims to accept.
  */
 export const routeTable = new Map<string, RouteEntry>();
+
+/** A handler's answer with a status of its own (201 for a new record, 200 for one that already was). */
+export class Reply {
+  constructor(
+    readonly status: number,
+    readonly body: unknown,
+  ) {}
+}
+export const reply = (status: number, body: unknown) => new Reply(status, body);
 
 export type RouteHandler<S extends Schemas> = (input: Valid<S>, req: Request, res: Response) => Promise<unknown> | unknown;
 
@@ -38,13 +48,22 @@ export function defineRoute<S extends Schemas>(
 ) {
   const bodyTypes = options.bodyTypes ?? [JSON_BODY];
   routeTable.set(`${method} ${path}`, { method, path, access: options.access, schemas: options.schemas ?? {}, bodyTypes });
-  router[method](path, requireBodyType(bodyTypes), guardFor(options.access), validate(options.schemas ?? {}), async (req, res, next) => {
+  // idempotencyKey comes after validation: a refused request never claims a key (see lib/idempotency).
+  const chain = [requireBodyType(bodyTypes), guardFor(options.access), validate(options.schemas ?? {}), idempotencyKey];
+  router[method](path, ...chain, async (req: Request, res: Response, next: NextFunction) => {
+    const claim = res.locals.idempotencyClaim;
     try {
       const result = await handler(res.locals.valid as Valid<S>, req, res);
-      if (res.headersSent) return;
-      if (result === undefined) res.status(204).end();
-      else res.status(options.status ?? 200).json(result);
+      // A handler that wrote its own response (a file, a stream) is not replayable.
+      if (res.headersSent) return void (await releaseClaim(req, claim));
+      const { status, body } =
+        result instanceof Reply ? result : result === undefined ? { status: 204, body: undefined } : { status: options.status ?? 200, body: result };
+      // Stored before it is sent, so a repeat that arrives the moment the answer does is replayed, not refused.
+      await settleClaim(req, claim, status, body);
+      if (body === undefined) res.status(status).end();
+      else res.status(status).json(body);
     } catch (err) {
+      await releaseClaim(req, claim);
       next(err);
     }
   });

@@ -115,6 +115,8 @@ export const checklistEntryInput = z.object({
 });
 
 export const visitStartInput = z.object({
+  /** Chosen by the phone when it starts a visit offline, so its queued edits can name the visit before the server has it. */
+  id: z.uuid('Not a valid visit id.').optional(),
   applianceId: z.uuid('Pick an appliance.'),
   type: z.enum(E.VISIT_TYPES, 'Choose the visit type.'),
   visitedOn: isoDate.optional(),

@@ -195,7 +195,8 @@ beforeAll(async () => {
     'post /tag-batches': { count: 1, format: 'single_large' },
     'post /tags/assign': { code: freeTag, applianceId: boiler.id, replaceDamaged: false },
     'post /visits/arrive-by-tag': { code: boilerTag, type: 'repair' },
-    'post /visits': { applianceId: boiler.id, type: 'inspection', visitedOn: '2024-02-02' },
+    // id: the phone's own id for a visit it started offline (mutations make it a non-UUID, a number, an object).
+    'post /visits': { id: '6f1c2d3e-4b5a-4c6d-8e7f-9a0b1c2d3e4f', applianceId: boiler.id, type: 'inspection', visitedOn: '2024-02-02' },
     'put /visits/:id/draft': {
       revision: 0,
       findings: 'Cleaned the burners',

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import multer, { MulterError } from 'multer';
 import type { AppContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
-import { defineRoute } from '../../lib/route';
+import { defineRoute, reply } from '../../lib/route';
 import { currentMember, requirePermission } from '../../middleware/authenticate';
 import { MULTIPART_BODY } from '../../middleware/body-type';
 import { uuidParam } from '../../../shared/schemas/common';
@@ -49,7 +49,7 @@ export function importRoutes(ctx: AppContext) {
     async ({ params, body }, _req, res) => {
       const file = await service.run(currentMember(res), params.id, body);
       // 200 when a small file was imported within the request; 202 while a large one runs on (poll GET /imports/:id).
-      res.status(file.status === 'queued' || file.status === 'importing' ? 202 : 200).json(file);
+      return reply(file.status === 'queued' || file.status === 'importing' ? 202 : 200, file);
     },
   );
   defineRoute(router, 'get', '/imports/:id/errors.csv', { access: { permission: 'records:import' }, schemas: { params: uuidParam } }, async ({ params }, _req, res) => {

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import multer, { MulterError } from 'multer';
 import type { AppContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
-import { defineRoute } from '../../lib/route';
+import { defineRoute, reply } from '../../lib/route';
 import { currentMember, requirePermission } from '../../middleware/authenticate';
 import { MULTIPART_BODY } from '../../middleware/body-type';
 import { uuidParam } from '../../../shared/schemas/common';
@@ -31,7 +31,7 @@ export function photosRoutes(ctx: AppContext) {
     async ({ body }, req, res) => {
       const files = Array.isArray(req.files) ? req.files : [];
       const { result, created } = await service.upload(currentMember(res), body, files);
-      res.status(created ? 201 : 200).json(result);
+      return reply(created ? 201 : 200, result);
     },
   );
   defineRoute(router, 'get', '/photos', { access: { permission: 'records:read' }, schemas: { query: photoListQuery } }, ({ query }, _req, res) =>

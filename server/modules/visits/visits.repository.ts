@@ -42,6 +42,21 @@ export const visitsRepository = {
     await db.execute(sql`select pg_advisory_xact_lock(hashtext(${`visit-start:${applianceId}:${userId}`}))`);
   },
 
+  /** Serialises starts that name the same visit id, whichever company or appliance they are for. */
+  async lockVisitId(db: DbOrTx, visitId: string) {
+    await db.execute(sql`select pg_advisory_xact_lock(hashtext(${`visit-id:${visitId}`}))`);
+  },
+
+  /** Across companies, on purpose: an id is unique in the whole table. The caller must not show another company's row. */
+  async findVisitOwner(db: DbOrTx, id: string) {
+    const [row] = await db
+      .select({ companyId: visits.companyId, applianceId: visits.applianceId, technicianIds: visits.technicianIds })
+      .from(visits)
+      .where(eq(visits.id, id))
+      .limit(1);
+    return row;
+  },
+
   async findOpenDraft(db: DbOrTx, companyId: string, applianceId: string, userId: string) {
     const [row] = await db
       .select()

@@ -48,6 +48,14 @@ export function visitsService(ctx: AppContext) {
         const appliance = await visitsRepository.findAppliance(tx, actor.companyId, input.applianceId);
         if (!appliance) throw notFound('Appliance');
         await visitsRepository.lockStart(tx, appliance.id, actor.userId);
+        if (input.id) {
+          await visitsRepository.lockVisitId(tx, input.id);
+          const owner = await visitsRepository.findVisitOwner(tx, input.id);
+          const ours = owner && owner.companyId === actor.companyId && owner.applianceId === appliance.id && owner.technicianIds.includes(actor.userId);
+          // The same start sent again (an offline outbox replaying): the visit it made. Anything else: not this id.
+          if (ours) return (await visitsRepository.findVisit(tx, actor.companyId, input.id))!;
+          if (owner) throw conflict('This visit id is already in use. Start the visit again without an id to get a new one.', { id: ['This visit id is already in use.'] });
+        }
         const existing = await visitsRepository.findOpenDraft(tx, actor.companyId, appliance.id, actor.userId);
         if (existing) return existing;
 
@@ -56,6 +64,7 @@ export function visitsService(ctx: AppContext) {
         if (input.visitedOn && input.visitedOn > today) throw validationFailed({ visitedOn: ['A visit cannot be dated in the future.'] });
         const template = await findTemplateFor(tx, actor.companyId, appliance.kind, appliance.fuel);
         const created = await visitsRepository.insertVisit(tx, {
+          ...(input.id ? { id: input.id } : {}),
           companyId: actor.companyId,
           applianceId: appliance.id,
           type: input.type,
