@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { NavLink, useLocation } from 'react-router-dom';
 import { Icon, type IconName } from '@/components/ui/icons';
 
@@ -18,7 +18,6 @@ export function PhoneNav({ items, extra = [] }: { items: PhoneNavItem[]; extra?:
   const [open, setOpen] = useState(false);
   const { pathname } = useLocation();
   const sheetId = useId();
-  useEffect(() => setOpen(false), [pathname]);
 
   const allowed = new Set(items.map((i) => i.to));
   const bar = BAR.filter((b) => allowed.has(b.to));
@@ -31,7 +30,7 @@ export function PhoneNav({ items, extra = [] }: { items: PhoneNavItem[]; extra?:
         <ul id={sheetId} className="flex flex-col border-b border-header-soft py-1">
           {rest.map((item) => (
             <li key={item.to}>
-              <NavLink to={item.to} className="flex min-h-tap items-center px-4 font-semibold hover:bg-header-soft">
+              <NavLink to={item.to} onClick={() => setOpen(false)} className="flex min-h-tap items-center px-4 font-semibold hover:bg-header-soft">
                 {item.label}
               </NavLink>
             </li>
@@ -44,6 +43,7 @@ export function PhoneNav({ items, extra = [] }: { items: PhoneNavItem[]; extra?:
             key={b.to}
             to={b.to}
             end={b.to === '/'}
+            onClick={() => setOpen(false)}
             className={({ isActive }) => `${tab} ${isActive ? 'bg-plate text-iron' : 'text-header-text/85'}`}
           >
             <Icon name={b.icon} className="h-5 w-5" />
