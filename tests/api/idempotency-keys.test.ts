@@ -5,6 +5,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { idempotencyKeys, partSwaps, photos, visits } from '../../server/db/schema/index';
 import { IDEMPOTENCY_KEY_TTL_HOURS, sweepIdempotencyKeys } from '../../server/lib/idempotency/sweep-idempotency-keys';
+import { requestFingerprint } from '../../server/lib/idempotency/fingerprint';
+import { STALE_CLAIM_MS } from '../../server/lib/idempotency/idempotency-middleware';
 import { runFileAt } from '../support/clock';
 import { testApp } from '../support/context';
 import { agentsFor, createTenant, type Agent, type Tenant } from '../support/tenant';
@@ -121,6 +123,39 @@ describe('a write sent twice with one Idempotency-Key', () => {
     expect(foreign.status).toBe(200);
     expect(await keyRows(t, k)).toHaveLength(2);
     expect(await keyRows(other, k)).toHaveLength(1);
+  });
+});
+
+describe('a claim left in progress by a request that never finished', () => {
+  it('answers 409 while it is recent, and is taken over once it is older than any request may run', async () => {
+    const { visitId, thermocoupleId } = await startedVisit();
+    const body = { componentId: thermocoupleId, reason: 'Weak output', newDescription: 'thermocouple, 24 in' };
+    const path = `/api/visits/${visitId}/swaps`;
+    const claimAged = (k: string, ageMs: number) =>
+      ctx.db.insert(idempotencyKeys).values({
+        companyId: t.company.id,
+        userId: t.technician.user.id,
+        key: k,
+        method: 'POST',
+        path,
+        fingerprint: requestFingerprint({ method: 'POST', path, body }),
+        status: 'in_progress',
+        createdAt: new Date(Date.now() - ageMs),
+      });
+
+    const recent = key();
+    await claimAged(recent, 60_000);
+    const busy = await swap(as.technician, visitId, body, recent);
+    expect(busy.status).toBe(409);
+    expect(busy.body.error.code).toBe('idempotency_key_in_progress');
+    expect(await swapRows(visitId)).toHaveLength(0);
+
+    const abandoned = key();
+    await claimAged(abandoned, STALE_CLAIM_MS + 60_000);
+    const taken = await swap(as.technician, visitId, body, abandoned);
+    expect(taken.status).toBe(200);
+    expect(await swapRows(visitId)).toHaveLength(1);
+    expect((await keyRows(t, abandoned))[0]).toMatchObject({ status: 'done', responseStatus: 200 });
   });
 });
 

@@ -9,6 +9,8 @@ export const IDEMPOTENCY_KEY_HEADER = 'Idempotency-Key';
 export const IDEMPOTENT_REPLAYED_HEADER = 'Idempotent-Replayed';
 export const MAX_IDEMPOTENCY_KEY_LENGTH = 255;
 const KEYED_METHODS = new Set(['POST', 'PUT', 'PATCH']);
+/** Far longer than any request may run (uploads included); a claim older than this belongs to a process that died. */
+export const STALE_CLAIM_MS = 5 * 60_000;
 
 /** What the route does with its claim on a key once the handler has answered. */
 export type IdempotencyClaim = { complete: (status: number, body: unknown) => Promise<void>; release: () => Promise<void> };
@@ -69,7 +71,7 @@ export const idempotencyKey: RequestHandler = async (req, res, next) => {
     const files = Array.isArray(req.files) ? (req.files as UploadedFile[]) : undefined;
     const fingerprint = requestFingerprint({ method: req.method, path, body: req.body, files });
 
-    // A row deleted between our failed claim and our read (its request failed) is claimed again, once.
+    // A row deleted between our failed claim and our read (its request failed, or its claim was stale) is claimed again, once.
     for (let attempt = 0; attempt < 2; attempt++) {
       if (await idempotencyRepository.claim(db, scope, { method: req.method, path, fingerprint, now: new Date() })) {
         res.locals.idempotencyClaim = {
@@ -86,6 +88,7 @@ export const idempotencyKey: RequestHandler = async (req, res, next) => {
         });
       }
       if (existing.status === 'done') return replay(res, existing.responseStatus ?? 200, existing.responseBody);
+      if (await idempotencyRepository.releaseStale(db, scope, new Date(Date.now() - STALE_CLAIM_MS))) continue;
       break;
     }
     throw new HttpError(409, 'idempotency_key_in_progress', 'A request with this Idempotency-Key is still being handled; try again shortly.', {

@@ -36,6 +36,15 @@ export const idempotencyRepository = {
     await db.delete(idempotencyKeys).where(and(byScope(scope), eq(idempotencyKeys.status, 'in_progress')));
   },
 
+  /** Frees a claim left in progress by a request that never finished (the process died mid-request). */
+  async releaseStale(db: Db, scope: KeyScope, claimedBefore: Date) {
+    const rows = await db
+      .delete(idempotencyKeys)
+      .where(and(byScope(scope), eq(idempotencyKeys.status, 'in_progress'), lt(idempotencyKeys.createdAt, claimedBefore)))
+      .returning({ key: idempotencyKeys.key });
+    return rows.length === 1;
+  },
+
   async deleteOlderThan(db: Db, before: Date) {
     const rows = await db.delete(idempotencyKeys).where(lt(idempotencyKeys.createdAt, before)).returning({ key: idempotencyKeys.key });
     return rows.length;
