@@ -30,6 +30,10 @@ export const IMPORT_FIELDS = {
   siteStreet: { label: 'Street address', required: true, synonyms: ['street', 'address', 'street address', 'address 1', 'address line 1', 'site address', 'service address'] },
   siteTown: { label: 'Town', required: true, synonyms: ['town', 'city', 'municipality', 'locality'] },
   sitePostalCode: { label: 'Postal code', synonyms: ['zip', 'zip code', 'postcode', 'postal code', 'post code'] },
+  siteElevationFt: {
+    label: 'Site elevation (ft)',
+    synonyms: ['elevation', 'elevation ft', 'elevation feet', 'site elevation', 'altitude', 'altitude ft', 'altitude feet', 'feet above sea level'],
+  },
   siteAccessNotes: { label: 'Access notes', synonyms: ['access', 'access notes', 'directions', 'key', 'entry notes'] },
   applianceExternalId: { label: 'Appliance id (from your old system)', synonyms: ['appliance id', 'equipment id', 'unit id', 'boiler id', 'asset id'] },
   applianceKind: { label: 'Kind of appliance', required: true, synonyms: ['kind', 'type', 'appliance', 'appliance type', 'equipment', 'equipment type', 'unit type'] },

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isStorableText, UNSTORABLE_TEXT_MESSAGE } from '../schemas/common';
+import { SITE_ELEVATION_RANGE_FT } from '../schemas/records';
 import type { ApplianceKind, Construction, Fuel, IgnitionType, VentType, VisitOutcome, VisitType } from '../schemas/enums';
 import type { ComponentType } from '../trade/component-types';
 import { applianceKindChoice, constructionChoice, fuelChoice, ignitionChoice, ventChoice, visitOutcomeChoice, visitTypeChoice } from './import-choices';
@@ -13,7 +14,7 @@ export type ImportRow = {
   /** The spreadsheet's row number: the header is row 1. */
   row: number;
   customer: { externalId: string | null; name: string; phone: string | null; email: string | null };
-  site: { street: string; town: string; postalCode: string | null; accessNotes: string | null };
+  site: { street: string; town: string; postalCode: string | null; accessNotes: string | null; elevationFt: number | null };
   appliance: {
     externalId: string | null;
     kind: ApplianceKind;
@@ -62,6 +63,20 @@ const LIMITS: Partial<Record<ImportField, number>> = {
   location: 200,
 };
 const emailSchema = z.email();
+
+const fmtFeet = (n: number) => n.toLocaleString('en-US').replace('-', '−');
+
+/** "5,280", "5280 ft", "-20 feet" → feet; the same whole-foot range as the site form (sites.elevation_ft). */
+function siteElevationFt(value: string | null, fail: (message: string) => void): number | null {
+  if (value === null) return null;
+  const n = Number(value.replace(/[,\s]/g, '').replace(/(ft|feet|')$/i, '').replace('−', '-'));
+  const { min, max } = SITE_ELEVATION_RANGE_FT;
+  if (!Number.isInteger(n) || n < min || n > max) {
+    fail(`'${value}' is not a site elevation in feet (a whole number from ${fmtFeet(min)} to ${fmtFeet(max)}, as on the site form).`);
+    return null;
+  }
+  return n;
+}
 
 /** One row of the file → what would be stored, or every error of the row at once. */
 export function validateImportRow(ctx: RowContext): { value: ImportRow | null; errors: ImportRowError[] } {
@@ -154,6 +169,7 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
   const phone = text('customerPhone');
   const postalCode = text('sitePostalCode');
   const accessNotes = text('siteAccessNotes');
+  const elevationFt = siteElevationFt(text('siteElevationFt'), (message) => fail('siteElevationFt', message));
   const manufacturer = text('manufacturer');
   const model = text('model');
   const serial = text('serial');
@@ -169,7 +185,7 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
     value: {
       row: ctx.row,
       customer: { externalId, name, phone, email: email?.toLowerCase() ?? null },
-      site: { street, town, postalCode, accessNotes },
+      site: { street, town, postalCode, accessNotes, elevationFt },
       appliance: {
         externalId: applianceExternalId,
         kind,

@@ -48,6 +48,8 @@ export type DueRuleDto = {
   applianceKind: E.ApplianceKind | null;
   inspectionIntervalMonths: number | null;
   replacementAgeYears: number | null;
+  /** An adopted learned median: a planning age (inspect and plan, listed in the stock forecast), never a replacement date. */
+  planningAgeYears: number | null;
   replacementPolicy: (typeof REPLACEMENT_POLICIES)[number];
   basis: (typeof DUE_RULE_BASES)[number];
   source: string;

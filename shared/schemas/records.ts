@@ -55,6 +55,9 @@ export const customerInput = z.object({
 export const customerPatch = nonEmptyPatch(customerInput.extend({ kind: z.enum(E.CUSTOMER_KINDS), remindersOptOut: z.boolean() }).partial());
 export type CustomerInput = z.input<typeof customerInput>;
 
+/** Feet above sea level a site may have: the range of the NFPA 54 derate rule (shared/trade/gas-input.ts). */
+export const SITE_ELEVATION_RANGE_FT = { min: -1500, max: 15_000 } as const;
+
 export const siteInput = z.object({
   customerId: z.uuid('Pick a customer.'),
   street: requiredText('Street address', 200),
@@ -62,7 +65,7 @@ export const siteInput = z.object({
   postalCode: optionalText(20),
   accessNotes: optionalText(2000),
   /** Feet above sea level, for the NFPA 54 altitude derate; the range of the derate rule (shared/trade/gas-input.ts). */
-  elevationFt: optionalInt('Elevation', -1500, 15_000),
+  elevationFt: optionalInt('Elevation', SITE_ELEVATION_RANGE_FT.min, SITE_ELEVATION_RANGE_FT.max),
   assignedTechnicianId: z.uuid().nullish(),
 });
 export const sitePatch = nonEmptyPatch(siteInput.omit({ customerId: true }).partial());

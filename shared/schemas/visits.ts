@@ -35,7 +35,7 @@ const reading = (label: string, name: ReadingName) => {
 };
 
 const combustionFields = z.object({
-  o2Pct: n('O2', 0, 20.8),
+  o2Pct: reading('O2', 'o2Pct'),
   coPpm: reading('CO', 'coPpm'),
   flueTempF: z.number('Flue temperature must be a number.').min(FLUE_TEMP_PLAUSIBLE_F.min, FLUE_TEMP_RANGE_MESSAGE).max(FLUE_TEMP_PLAUSIBLE_F.max, FLUE_TEMP_RANGE_MESSAGE),
   airTempF: reading('Combustion-air temperature', 'airTempF'),

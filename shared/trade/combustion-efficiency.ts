@@ -18,7 +18,7 @@ export const MAX_FLUE_TEMP_F = 1500;
 const REFERENCE_K = 298.15; // heating values and the latent heat are stated at 25 °C
 
 /**
- * Excess air (%) from O2 measured in dry flue gas, from the fuel's stoichiometry:
+ * Excess air (%, no heating-value basis: a ratio of air quantities) from O2 measured in dry flue gas, from the fuel's stoichiometry:
  * O2 = e·s / (P + e·s/a)  ⇒  e = O2·P / (s·(1 − O2/a)), with s the stoichiometric O2, P the stoichiometric dry
  * products and a the O2 fraction of air. The shortcut O2/(20.9 − O2) ignores P/s and misses the DOE table.
  */
@@ -46,8 +46,9 @@ export type CombustionLossesPct = {
 };
 
 /**
- * Flue losses by the heat-loss method: dry flue-gas loss plus loss from the moisture formed by burning hydrogen
- * (latent heat included). Excludes jacket/radiation losses, unburned fuel and moisture carried in by the air.
+ * Flue losses by the heat-loss method, both as % of the higher heating value (HHV basis): dry flue-gas loss plus loss
+ * from the moisture formed by burning hydrogen (latent heat included). Excludes jacket/radiation losses, unburned fuel
+ * and moisture carried in by the air (dry air, as US DOE Steam Tip Sheet #4 assumes).
  */
 export function combustionLossesPctHhv(input: EfficiencyInput): CombustionLossesPct {
   const model = FUEL_MODELS[requireFuel('fuel', input.fuel)];
@@ -83,8 +84,11 @@ export function combustionLossesPctHhv(input: EfficiencyInput): CombustionLosses
 }
 
 /**
- * Combustion efficiency, % of the higher heating value: 100 − flue losses (see combustionLossesPctHhv).
- * Not applicable to condensing operation, where part of the latent heat is recovered.
+ * Combustion efficiency, % of the higher heating value (HHV basis, gross): 100 − flue losses (see
+ * combustionLossesPctHhv). Not applicable to condensing operation, where part of the latent heat is recovered.
+ * For natural gas it reads 0.3–0.6 points above US DOE Steam Tip Sheet #4 (2006): the table's flue loss is about 2 %
+ * larger on every cell, which none of the sheet's stated assumptions explains (tests/unit/trade/combustion-grid.test.ts).
+ * Propane and No. 2 oil are not checked against a published efficiency table, only through their stoichiometry.
  */
 export function combustionEfficiencyPct(input: EfficiencyInput): number {
   const { sensiblePctHhv, latentPctHhv } = combustionLossesPctHhv(input);

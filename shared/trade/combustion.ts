@@ -39,9 +39,10 @@ export type CombustionAnalysis = {
   coAirFreePpm: number;
   /** The air-free CO limit of this appliance's standard (200 ppm water heaters, 400 ppm boilers and furnaces). */
   coAirFreeLimitPpm: number;
-  /** % of HHV; null for condensing appliances, where this method does not apply. */
+  /** Combustion efficiency, % of the higher heating value (HHV basis); null for condensing appliances, where this method does not apply. */
   efficiencyPct: number | null;
   efficiencyBasis: string;
+  /** Siegert flue-gas loss, % of the lower heating value (LHV basis, net); not 100 − efficiencyPct. */
   siegertLossPct: number;
   siegertBasis: string;
   flags: TradeFlag[];
@@ -124,7 +125,8 @@ export function analyzeCombustion(input: CombustionInput): CombustionAnalysis {
       co2: `${METHOD_19_SOURCE}; CO2 = CO2max·(20.9 − O2)/20.9`,
       coAirFree: `40 CFR Part 60, Appendix A, Method 19 diluent correction: CO·20.9/(20.9 − O2) (secondary copy); limit: ${airFreeCoLimit(applianceKind).source}`,
       excessAirAndEfficiency:
-        'fuel stoichiometry and heat-loss method; checked for natural gas against US DOE Steam Tip Sheet #4 (2006), secondary copy',
+        'fuel stoichiometry and heat-loss method (HHV basis); checked for natural gas against US DOE Steam Tip Sheet #4 (2006), ' +
+        'secondary copy, which it reads 0.3–0.6 points high; propane and No. 2 oil not checked against a published efficiency table',
       siegert: siegertSource(fuel),
     },
   };

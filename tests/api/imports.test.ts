@@ -140,6 +140,33 @@ describe('bringing a spreadsheet in', () => {
     expect(next.body.mapping).toMatchObject({ customerName: 'Owner', applianceKind: 'Boiler', siteStreet: 'Street' });
   });
 
+  it('takes a site elevation column, guessed from "Altitude (ft)", with the site form\'s range', async () => {
+    // Range as on the site form (sites.elevation_ft): −1,500 to 15,000 ft, the NFPA 54 derate rule's (shared/trade/gas-input.ts)
+    const csv = toCsv(
+      ['Customer', 'Address', 'City', 'Kind', 'Fuel', 'Altitude (ft)'],
+      [
+        ['Alex Example', '7 Pine Rd', 'Highfield', 'Steam', 'Gas', '5,280'],
+        ['Bo Example', '8 Pine Rd', 'Highfield', 'Steam', 'Gas', '16000'],
+        ['Cal Example', '9 Pine Rd', 'Highfield', 'Steam', 'Gas', ''],
+      ],
+    );
+    const res = await upload(as.manager, csv, 'elevations.csv');
+    expect(res.status).toBe(201);
+    expect(res.body.mapping.siteElevationFt).toBe('Altitude (ft)');
+    const preview = await as.manager.post(`/api/imports/${res.body.id}/preview`).send({ mapping: res.body.mapping });
+    expect(preview.status).toBe(200);
+    expect(preview.body.errors).toEqual([
+      expect.objectContaining({ row: 3, column: 'Altitude (ft)', message: "'16000' is not a site elevation in feet (a whole number from −1,500 to 15,000, as on the site form)." }),
+    ]);
+    await as.manager.post(`/api/imports/${res.body.id}/run`).send({ mapping: res.body.mapping });
+    await finished(res.body.id);
+    const stored = await ctx.db.select({ street: sites.street, elevationFt: sites.elevationFt }).from(sites).where(and(eq(sites.companyId, t.company.id), eq(sites.town, 'Highfield')));
+    expect(stored.sort((a, b) => a.street.localeCompare(b.street))).toEqual([
+      { street: '7 Pine Rd', elevationFt: 5280 },
+      { street: '9 Pine Rd', elevationFt: null },
+    ]);
+  });
+
   it('reads a Windows-1252 file without losing its accents', async () => {
     const bytes = Buffer.from('Customer,Address,City,Kind,Fuel\r\nRen\xe9e Ex\xe1mple,3 Birch Rd,Wrenfield,Water heater,Propane\r\n', 'latin1');
     const res = await upload(as.manager, bytes, 'old-system.csv');

@@ -82,27 +82,66 @@ describe('POST /due-rules/:id/adopt-learned-life', () => {
     expect(await ruleFor(fx.t, 'flame_sensor')).toEqual(rule);
   });
 
-  it('sets the replacement age to the learned median, says where it came from, recomputes due dates and audits', async () => {
-    // No inspection interval, so the replacement age alone sets the due dates checked below.
+  it('adopts the learned median as a planning age, not a replacement date: stored rule, due items, stock forecast, audit', async () => {
+    // Age is not a fault: a median describes the population (as ASHRAE's medians do; see PLANNING_MEDIAN_YEARS).
+    // No inspection interval on the rule before, so adopting gives it the yearly inspection of the defaults.
     await ctx.db.update(dueRules).set({ inspectionIntervalMonths: null }).where(and(eq(dueRules.companyId, fx.t.company.id), eq(dueRules.componentType, 'thermocouple')));
     const rule = await ruleFor(fx.t, 'thermocouple');
     const estimate = await thermocouple(fx.as.manager);
     const res = await fx.as.manager.post(`/api/due-rules/${rule.id}/adopt-learned-life`).expect(200);
     const years = Math.round(estimate.medianYears!);
-    expect(res.body).toMatchObject({ id: rule.id, basis: 'learned', replacementPolicy: 'fixed_age', replacementAgeYears: years });
-    expect(res.body.source).toMatch(/^Learned from 36 swaps, 2012–2017: Kaplan–Meier median/);
+    expect(years).toBeGreaterThan(0);
+    expect(res.body).toMatchObject({
+      id: rule.id,
+      basis: 'learned',
+      replacementPolicy: 'on_condition',
+      replacementAgeYears: null,
+      planningAgeYears: years,
+      inspectionIntervalMonths: 12,
+    });
+    expect(res.body.source).toMatch(/^Learned from 36 swaps, 2012–2017: Kaplan–Meier median .* planning age .*not a replacement date/);
     const stored = await ruleFor(fx.t, 'thermocouple');
-    expect(stored).toMatchObject({ basis: 'learned', replacementAgeYears: years, inspectionIntervalMonths: rule.inspectionIntervalMonths });
+    expect(stored).toMatchObject({ basis: 'learned', replacementPolicy: 'on_condition', replacementAgeYears: null, planningAgeYears: years, inspectionIntervalMonths: 12 });
 
-    // A thermocouple in service fitted 2016-03-01 (an upgrade's fresh part) is now due at that age.
+    // The thermocouples in service fitted 2016-03-01 (an upgrade's fresh parts, never inspected) are due for
+    // inspection a year after fitting, not for replacement at the median age.
     const present = await ctx.db
       .select()
       .from(components)
       .where(and(eq(components.companyId, fx.t.company.id), eq(components.typeCode, 'thermocouple'), eq(components.installedOn, '2016-03-01'), isNull(components.removedOn)));
     expect(present.length).toBe(4);
-    for (const c of present) expect(c.dueOn).toBe(`${2016 + years}-03-01`);
+    for (const c of present) expect(c).toMatchObject({ dueOn: '2017-03-01', dueKind: 'inspection' });
+    const due = await fx.as.manager.get('/api/due').query({ type: 'thermocouple', withinDays: 0 }).expect(200);
+    const fresh = (due.body.items as { componentId: string; dueKind: string }[]).filter((i) => present.some((c) => c.id === i.componentId));
+    expect(fresh.map((i) => i.dueKind)).toEqual(['inspection', 'inspection', 'inspection', 'inspection']);
+
+    // The stock forecast lists them to plan for once they pass the learned median: 2016-03-01 + years.
+    const stock = await fx.as.manager.get('/api/due/stock').query({ withinDays: 0 }).expect(200);
+    const planned = (stock.body.pastMedianLife as { typeCode: string; count: number }[]).find((r) => r.typeCode === 'thermocouple');
+    expect(2016 + years).toBeLessThanOrEqual(2026); // the estimate's median is 2–7 years
+    expect(planned?.count).toBe(4);
+    expect(stock.body.pastMedianLifeSource).toMatch(/learned from its own swaps/);
 
     const [audit] = await ctx.db.select().from(auditLog).where(and(eq(auditLog.entityId, rule.id), eq(auditLog.action, 'adopt_learned_life')));
     expect(audit).toMatchObject({ companyId: fx.t.company.id, entity: 'due_rule', actorId: fx.t.manager.user.id });
+  });
+
+  it('keeps replacing by age only where the rule is on a published replacement interval', async () => {
+    // A rule on a published interval (invented for the test) takes the learned median as its replacement age.
+    await ctx.db
+      .update(dueRules)
+      .set({ replacementPolicy: 'fixed_age', replacementAgeYears: 3, planningAgeYears: null, inspectionIntervalMonths: null, basis: 'published', source: 'Demo publication: replace every 3 years' })
+      .where(and(eq(dueRules.companyId, fx.t.company.id), eq(dueRules.componentType, 'thermocouple')));
+    const rule = await ruleFor(fx.t, 'thermocouple');
+    const years = Math.round((await thermocouple(fx.as.manager)).medianYears!);
+    const res = await fx.as.manager.post(`/api/due-rules/${rule.id}/adopt-learned-life`).expect(200);
+    expect(res.body).toMatchObject({ basis: 'learned', replacementPolicy: 'fixed_age', replacementAgeYears: years, planningAgeYears: null });
+    expect(res.body.source).toMatch(/Replaces the 3-year replacement interval of: Demo publication/);
+    expect(await ruleFor(fx.t, 'thermocouple')).toMatchObject({ replacementPolicy: 'fixed_age', replacementAgeYears: years, planningAgeYears: null });
+    const present = await ctx.db
+      .select()
+      .from(components)
+      .where(and(eq(components.companyId, fx.t.company.id), eq(components.typeCode, 'thermocouple'), eq(components.installedOn, '2016-03-01'), isNull(components.removedOn)));
+    for (const c of present) expect(c).toMatchObject({ dueOn: `${2016 + years}-03-01`, dueKind: 'replacement' });
   });
 });

@@ -427,7 +427,7 @@ describe('POST /api/visits/:id/complete: what a completion must hold', () => {
     const res = await complete(visit.id, fullCompletion(visit, { readings: { combustion: { ...goodCombustion, o2Pct: 25, coPpm: 'abc' as unknown as number } } }));
     expect(res.status).toBe(400);
     expect(res.body.error.details).toEqual({
-      'readings.combustion.o2Pct': ['O2 must be at most 20.8.'],
+      'readings.combustion.o2Pct': ['O2 must be at least 0 and below 20.9 % (the analyzer O2 range; 20.9 % is air).'],
       'readings.combustion.coPpm': ['CO must be a number.'],
     });
     await expectNothingWritten(visit.id, appliance.id, 0);

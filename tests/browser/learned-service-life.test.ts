@@ -27,14 +27,15 @@ describe('learned service life on the due rules (desktop)', () => {
     await panel.getByRole('img', { name: /still in service by age/ }).waitFor();
     const adopt = panel.getByRole('button', { name: /Adopt the learned service life/ });
     const label = (await adopt.textContent()) ?? '';
-    const years = Number(/Adopt (\d+) years/.exec(label)?.[1]);
+    const years = Number(/Adopt (\d+) years as the planning age/.exec(label)?.[1]);
     expect(years).toBeGreaterThanOrEqual(2);
     await adopt.click();
     await page.getByText(/Source: Learned from 36 swaps, 2012–2017/).first().waitFor();
     await page.getByText('Learned from our fleet').first().waitFor();
 
     const rules = await db.select().from(dueRules).where(and(eq(dueRules.companyId, fx.t.company.id), eq(dueRules.componentType, 'flame_sensor')));
-    expect(rules.some((r) => r.basis === 'learned' && r.replacementAgeYears === years && r.replacementPolicy === 'fixed_age')).toBe(true);
+    // Age is not a fault: the learned median is a planning age, the part replaced on condition.
+    expect(rules.some((r) => r.basis === 'learned' && r.planningAgeYears === years && r.replacementAgeYears === null && r.replacementPolicy === 'on_condition')).toBe(true);
     const audits = await db.select().from(auditLog).where(and(eq(auditLog.companyId, fx.t.company.id), eq(auditLog.action, 'adopt_learned_life')));
     expect(audits).toHaveLength(1);
     await context.close();

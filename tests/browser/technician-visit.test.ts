@@ -174,7 +174,7 @@ describe('a technician on a phone', () => {
     const combustion = page.locator('li[data-item="combustion_test"]');
     await combustion.getByRole('textbox', { name: /^O2/ }).fill('25');
     await combustion.getByRole('textbox', { name: /^CO\b/ }).fill('abc');
-    await missing.getByText('O2 must be at most 20.8.').waitFor();
+    await missing.getByText('O2 must be at least 0 and below 20.9 % (the analyzer O2 range; 20.9 % is air).').waitFor();
     await missing.getByText('Type a number, like 8.5.').waitFor();
 
     await page.getByRole('button', { name: 'Complete visit' }).click();

@@ -62,7 +62,7 @@ describe('completionRequirements', () => {
   it('lists a half-filled block and out-of-range values by field, as the schema words them', () => {
     const typed = complete({ readings: { combustion: { o2Pct: 25, coPpm: 40 }, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } } });
     expect(requirementDetails(completionRequirements(typed))).toEqual({
-      'readings.combustion.o2Pct': ['O2 must be at most 20.8.'],
+      'readings.combustion.o2Pct': ['O2 must be at least 0 and below 20.9 % (the analyzer O2 range; 20.9 % is air).'],
       'readings.combustion.flueTempF': ['Flue temperature must be a number.'],
       'readings.combustion.airTempF': ['Combustion-air temperature must be a number.'],
     });

@@ -37,6 +37,11 @@ export const dueRules = pgTable(
     applianceKind: applianceKind('appliance_kind'),
     inspectionIntervalMonths: integer('inspection_interval_months'),
     replacementAgeYears: integer('replacement_age_years'),
+    /**
+     * A median life adopted from the company's own swaps: a planning age (inspect and plan; listed in the stock
+     * forecast), never a replacement date. null: the ASHRAE planning median, where there is one, applies.
+     */
+    planningAgeYears: integer('planning_age_years'),
     replacementPolicy: text('replacement_policy').$type<'on_condition' | 'fixed_age' | 'annual'>().notNull(),
     basis: text('basis').$type<DueRuleBasis>().notNull(),
     source: text('source').notNull(),

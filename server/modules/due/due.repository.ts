@@ -20,7 +20,8 @@ export async function recomputeDueForCompany(db: DbOrTx, companyId: string, opti
 }
 
 export type DueRuleRow = typeof dueRules.$inferSelect;
-export type DueRuleChange = Pick<DueRuleRow, 'inspectionIntervalMonths' | 'replacementAgeYears' | 'replacementPolicy' | 'basis' | 'source'>;
+export type DueRuleChange = Pick<DueRuleRow, 'inspectionIntervalMonths' | 'replacementAgeYears' | 'replacementPolicy' | 'basis' | 'source'> &
+  Partial<Pick<DueRuleRow, 'planningAgeYears'>>;
 
 export const dueRepository = {
   listRules(db: DbOrTx, companyId: string) {
@@ -117,20 +118,33 @@ export const dueRepository = {
   },
 
   /** Present, working parts that reach their planning median (years by type) by `through`, grouped by type and spec. */
+  /**
+   * Present, working parts that reach their planning age through `through`: the rule's adopted learned median
+   * (kind-specific rule first), else the default median in `medians`.
+   */
   async pastMedianLife(db: DbOrTx, companyId: string, through: string, medians: Readonly<Record<string, { years: number }>>) {
     const values = sql.join(Object.entries(medians).map(([type, m]) => sql`(${type}::text, ${m.years}::int)`), sql`, `);
     const result = await db.execute<{ type_code: string; spec_key: string; catalog_label: string | null; count: number }>(sql`
-      with medians(type_code, years) as (values ${values})
-      select p.type_code, p.spec_key, cat.label as catalog_label, count(*)::int as count
-      from components p
-      join medians m on m.type_code = p.type_code
-      join appliances a on a.id = p.appliance_id and a.company_id = p.company_id
-      left join component_catalog cat on cat.company_id = p.company_id and cat.code = p.type_code
-      where p.company_id = ${companyId} and p.removed_on is null and not p.condition_failed and a.status <> 'removed'
-        and coalesce(p.installed_on, a.installed_on) is not null
-        and (coalesce(p.installed_on, a.installed_on) + make_interval(years => m.years))::date <= ${through}::date
-      group by p.type_code, p.spec_key, cat.label
-      order by p.type_code, p.spec_key
+      with medians(type_code, years) as (values ${values}),
+      parts as (
+        select p.type_code, p.spec_key, cat.label as catalog_label, coalesce(p.installed_on, a.installed_on) as installed,
+          coalesce(
+            (select dr.planning_age_years from due_rules dr
+             where dr.company_id = p.company_id and dr.component_type = p.type_code and (dr.appliance_kind = a.kind or dr.appliance_kind is null)
+             order by dr.appliance_kind nulls last limit 1),
+            m.years
+          ) as years
+        from components p
+        join appliances a on a.id = p.appliance_id and a.company_id = p.company_id
+        left join medians m on m.type_code = p.type_code
+        left join component_catalog cat on cat.company_id = p.company_id and cat.code = p.type_code
+        where p.company_id = ${companyId} and p.removed_on is null and not p.condition_failed and a.status <> 'removed'
+      )
+      select type_code, spec_key, catalog_label, count(*)::int as count
+      from parts
+      where installed is not null and years is not null and (installed + make_interval(years => years))::date <= ${through}::date
+      group by type_code, spec_key, catalog_label
+      order by type_code, spec_key
     `);
     return result.rows;
   },

@@ -20,6 +20,7 @@ const toRuleDto = ({ rule, catalogLabel }: { rule: DueRuleRow; catalogLabel: str
   applianceKind: rule.applianceKind,
   inspectionIntervalMonths: rule.inspectionIntervalMonths,
   replacementAgeYears: rule.replacementAgeYears,
+  planningAgeYears: rule.planningAgeYears,
   replacementPolicy: rule.replacementPolicy,
   basis: rule.basis,
   source: rule.source,
@@ -115,7 +116,7 @@ export function dueService(ctx: AppContext) {
           .map((r) => ({ typeCode: r.typeCode, typeLabel: typeLabelFor(r.typeCode, r.catalogLabel), specKey: r.specKey, count: r.count }));
       const aged = await dueRepository.pastMedianLife(ctx.db, companyId, through, PLANNING_MEDIAN_YEARS);
       const pastMedianLife = aged.map((r) => ({ typeCode: r.type_code, typeLabel: typeLabelFor(r.type_code, r.catalog_label), specKey: r.spec_key, count: r.count }));
-      return { withinDays, through, replacements: pick('replacement'), inspections: pick('inspection'), pastMedianLife, pastMedianLifeSource: PLANNING_MEDIAN_SOURCE };
+      return { withinDays, through, replacements: pick('replacement'), inspections: pick('inspection'), pastMedianLife, pastMedianLifeSource: `${PLANNING_MEDIAN_SOURCE}; where the company adopted a median learned from its own swaps, that median` };
     },
   };
 }

@@ -53,6 +53,7 @@ export async function writeImportBatch(tx: Tx, source: ImportSource, batch: RowP
         town: row.site.town,
         postalCode: row.site.postalCode,
         accessNotes: row.site.accessNotes,
+        elevationFt: row.site.elevationFt,
         createdBy: actorId,
         updatedBy: actorId,
       })),

@@ -5,7 +5,7 @@ import { MIN_EVENTS_TO_ADOPT, type ServiceLifeDto, type ServiceLifePoint } from 
 import type { DueRuleDto } from '../../../shared/schemas/due';
 import { recordAudit } from '../audit/audit.repository';
 import { companyToday } from '../due/company-today';
-import { dueRepository, recomputeDueForCompany } from '../due/due.repository';
+import { dueRepository, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from '../due/due.repository';
 import { dueService } from '../due/due.service';
 import { typeLabelFor } from '../due/type-label';
 import { catalogRepository } from '../catalog/catalog.repository';
@@ -64,6 +64,32 @@ export function learnedSource(e: ServiceLifeDto): string {
   return `Learned from ${e.events} swaps, ${years}: Kaplan–Meier median ${e.medianYears} years (${ci}; Greenwood, log-log), ${e.atRisk} parts at risk.`;
 }
 
+/** A replacement interval read in a publication (or the manufacturer's instructions), not a median of ages. */
+const onPublishedInterval = (rule: DueRuleRow) => rule.replacementPolicy === 'fixed_age' && (rule.basis === 'published' || rule.basis === 'manufacturer');
+
+/** What adopting a learned median of `years` writes to the rule (see adopt). */
+export function adoptedChange(rule: DueRuleRow, years: number, source: string): DueRuleChange {
+  if (onPublishedInterval(rule)) {
+    return {
+      inspectionIntervalMonths: rule.inspectionIntervalMonths,
+      replacementPolicy: 'fixed_age',
+      replacementAgeYears: years,
+      planningAgeYears: null,
+      basis: 'learned',
+      source: `${source} Replaces the ${rule.replacementAgeYears}-year replacement interval of: ${rule.source}`.slice(0, 500),
+    };
+  }
+  return {
+    inspectionIntervalMonths: rule.inspectionIntervalMonths ?? 12,
+    // A part replaced at every service stays so; anything else is replaced on condition, as the ASHRAE defaults are.
+    replacementPolicy: rule.replacementPolicy === 'annual' ? 'annual' : 'on_condition',
+    replacementAgeYears: null,
+    planningAgeYears: years,
+    basis: 'learned',
+    source: `${source} Adopted as a planning age (inspect and plan), not a replacement date: medians describe populations, not one unit.`,
+  };
+}
+
 export function serviceLifeService(ctx: AppContext) {
   async function estimates(companyId: string, type?: string): Promise<ServiceLifeDto[]> {
     const today = await companyToday(ctx.db, companyId);
@@ -78,7 +104,13 @@ export function serviceLifeService(ctx: AppContext) {
   return {
     estimates,
 
-    /** Sets the rule's replacement age to the learned median (whole years), then recomputes the due dates. */
+    /**
+     * Adopts the learned median (whole years) and recomputes the due dates. Age is not a fault: like the ASHRAE
+     * medians (PLANNING_MEDIAN_YEARS), the learned median describes the population, so it becomes the rule's planning
+     * age (the stock forecast lists parts past it; the part is inspected and replaced on condition), never a
+     * replacement date. Only a rule already on a published or manufacturer's replacement interval keeps replacing by
+     * age, with the learned median as that age.
+     */
     async adopt(actor: Actor, ruleId: string): Promise<DueRuleDto> {
       const found = await dueRepository.findRule(ctx.db, actor.companyId, ruleId);
       if (!found) throw notFound('Due rule');
@@ -89,26 +121,21 @@ export function serviceLifeService(ctx: AppContext) {
         });
       }
       if (estimate.medianYears === null) throw badRequest('The survival curve has not reached one half yet, so there is no median to adopt.', { _: ['No median yet.'] });
-      const change = {
-        inspectionIntervalMonths: found.rule.inspectionIntervalMonths,
-        replacementPolicy: 'fixed_age' as const,
-        replacementAgeYears: Math.max(1, Math.round(estimate.medianYears)),
-        basis: 'learned' as const,
-        source: learnedSource(estimate),
-      };
+      const years = Math.max(1, Math.round(estimate.medianYears));
+      const change = adoptedChange(found.rule, years, learnedSource(estimate));
       await ctx.db.transaction(async (tx) => {
         const before = await dueRepository.findRule(tx, actor.companyId, ruleId);
         if (!before) throw notFound('Due rule');
         await dueRepository.updateRule(tx, actor.companyId, ruleId, change, actor.userId);
         await recomputeDueForCompany(tx, actor.companyId);
-        const { inspectionIntervalMonths, replacementAgeYears, replacementPolicy, basis, source } = before.rule;
+        const { inspectionIntervalMonths, replacementAgeYears, planningAgeYears, replacementPolicy, basis, source } = before.rule;
         await recordAudit(tx, {
           companyId: actor.companyId,
           actorId: actor.userId,
           action: 'adopt_learned_life',
           entity: 'due_rule',
           entityId: ruleId,
-          changes: { before: { inspectionIntervalMonths, replacementAgeYears, replacementPolicy, basis, source }, after: change, events: estimate.events, atRisk: estimate.atRisk },
+          changes: { before: { inspectionIntervalMonths, replacementAgeYears, planningAgeYears, replacementPolicy, basis, source }, after: change, events: estimate.events, atRisk: estimate.atRisk },
         });
       });
       return (await dueService(ctx).listRules(actor.companyId)).find((r) => r.id === ruleId)!;

@@ -3,6 +3,7 @@ import { guessMapping, mappingMemory, normaliseHeader } from '../../../shared/im
 import { parseImportDate } from '../../../shared/imports/parse-import-date';
 import { parseSpecText } from '../../../shared/imports/parse-spec-text';
 import { validateImportRow } from '../../../shared/imports/validate-import-row';
+import { siteInput } from '../../../shared/schemas/records';
 import { SAMPLE_IMPORT_HEADERS } from '../../../server/db/factories/import-csv';
 import { decodeImportBytes, parseImportText } from '../../../server/modules/imports/read-import-file';
 import { addressKey, nameKey } from '../../../server/modules/imports/match-keys';
@@ -29,6 +30,10 @@ describe('guessing the mapping from headers', () => {
       visit2Date: 'Visit 2 Date',
     });
     expect(normaliseHeader('  SERIAL_No. ')).toBe('serial no');
+  });
+
+  it.each(['Elevation', 'Altitude (ft)', 'ELEVATION_FT', 'Site elevation', 'Feet above sea level'])('maps a "%s" column to the site elevation', (header) => {
+    expect(guessMapping(['Customer', 'Address', header]).siteElevationFt).toBe(header);
   });
 
   it('uses one column for one field, and a remembered hand mapping wins over a guess', () => {
@@ -99,6 +104,29 @@ describe('one row', () => {
   it('takes ignition and venting from the file when it has them, and then assumes nothing of them', () => {
     const { value } = row({ ...good, ignitionType: 'HSI', ventType: 'power vented', construction: 'steel' } as Record<string, string>);
     expect(value?.appliance).toMatchObject({ ignitionType: 'hot_surface', ventType: 'power_vent', construction: 'steel_fire_tube', assumed: [] });
+  });
+
+  it.each([
+    ['5280', 5280],
+    ['5,280 ft', 5280],
+    ['-20 feet', -20],
+    ['15000', 15_000],
+    ['-1500', -1500],
+    ['', null],
+  ])('reads the site elevation %j as %s ft', (cell, feet) => {
+    const { value, errors } = row({ ...good, siteElevationFt: cell });
+    expect(errors).toEqual([]);
+    expect(value?.site.elevationFt).toBe(feet);
+  });
+
+  it.each(['15001', '-1501', '5280.5', 'mile high'])('refuses the site elevation %j with the site form\'s range', (cell) => {
+    // Same whole-foot range as the site form (shared/schemas/records.ts siteInput.elevationFt): −1,500 to 15,000 ft
+    const { value, errors } = validateImportRow({ row: 9, cells: { ...good, siteElevationFt: cell }, columns: { siteElevationFt: 'Altitude (ft)' }, today: '2026-11-18', partType });
+    expect(value).toBeNull();
+    expect(errors).toEqual([
+      { row: 9, field: 'siteElevationFt', column: 'Altitude (ft)', value: cell, message: `'${cell}' is not a site elevation in feet (a whole number from −1,500 to 15,000, as on the site form).` },
+    ]);
+    expect(siteInput.shape.elevationFt.safeParse(Number(cell)).success).toBe(false);
   });
 
   it('refuses a date after the company\'s today', () => {

@@ -49,9 +49,11 @@ describe('CO2 from O2', () => {
 
 describe('analyzeCombustion', () => {
   it('reports the DOE-grid efficiency for natural gas at 2 % O2 and a 300 °F rise', () => {
-    // Source: US DOE Steam Tip Sheet #4 (2006), secondary copy: 2 % O2 ≈ 9.5 % excess air; 300 °F rise → 83.1 %
+    // Source: US DOE Steam Tip Sheet #4 (2006), secondary copy: 2 % O2 ≈ 9.5 % excess air; 300 °F rise → 83.1 %.
+    // The model reads high there by about 2 % of the flue loss (0.34 points; see tests/unit/trade/combustion-grid.test.ts).
     const result = analyzeCombustion({ ...base, o2Pct: 2, flueTempF: 377, airTempF: 77 });
     expect(result.excessAirPct).toBeCloseTo(9.5, 0);
+    expect(result.efficiencyPct! - 83.1).toBeGreaterThan(0);
     expect(Math.abs(result.efficiencyPct! - 83.1)).toBeLessThanOrEqual(0.5);
     expect(result.co2MaxPct).toBeCloseTo(11.9, 1);
     expect(result.siegertBasis).toMatch(/net/);

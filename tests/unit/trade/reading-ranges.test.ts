@@ -13,6 +13,7 @@ import {
   type ReadingName,
 } from '../../../shared/trade/index';
 import { readingsInput } from '../../../shared/schemas/visits';
+import { READING_RANGES } from '../../../shared/trade/reading-ranges';
 import { outOf, refusedOn } from './reading-guards';
 
 const combustionBase = { fuel: 'natural_gas', o2Pct: 5, coPpm: 20, flueTempF: 400, airTempF: 70 } as const;
@@ -89,6 +90,20 @@ describe('the visit readings schema names the same range', () => {
     expect(parsed.success).toBe(false);
     const issue = parsed.error!.issues.find((i) => i.path.join('.') === 'combustion.coPpm');
     expect(issue?.message).toBe('CO must be from 0 to 10,000 ppm (the analyzer CO range).');
+  });
+
+  it.each([25, 20.9, -1])('O2 %s %% is a field error naming the analyzer range and air, as analyzeCombustion refuses it', (o2Pct) => {
+    // from memory: combustion analyzer spec sheets (O2 cell 0–20.9 %); O2 of dry air 20.9 % (Method 19's figure)
+    const parsed = readingsInput.safeParse({ combustion: { ...combustionBase, o2Pct } });
+    const issue = parsed.error!.issues.find((i) => i.path.join('.') === 'combustion.o2Pct');
+    expect(issue?.message).toBe('O2 must be at least 0 and below 20.9 % (the analyzer O2 range; 20.9 % is air).');
+    expect(refusedOn(() => analyzeCombustion({ ...combustionBase, o2Pct }))).toBe('o2Pct');
+  });
+
+  it('O2 just below air passes the schema, the same bound the trade functions take', () => {
+    const parsed = readingsInput.safeParse({ combustion: { ...combustionBase, o2Pct: 20.85 } });
+    expect(parsed.error?.issues.find((i) => i.path.join('.') === 'combustion.o2Pct')).toBeUndefined();
+    expect(READING_RANGES.o2Pct).toMatchObject({ min: 0, maxExclusive: 20.9 });
   });
 
   it('a seconds-per-revolution of 0 is a field error naming the range', () => {

@@ -36,6 +36,9 @@ export function SurvivalCurve({ estimate }: { estimate: ServiceLifeDto }) {
   );
 }
 
+/** Mirrors the server: only a rule on a published or manufacturer's replacement interval keeps replacing by age. */
+const adoptsAsReplacementAge = (rule: DueRuleDto) => rule.replacementPolicy === 'fixed_age' && (rule.basis === 'published' || rule.basis === 'manufacturer');
+
 const yearsText = (y: number | null) => (y === null ? 'not reached' : `${y.toFixed(1)}`);
 
 export function LearnedLife({ rule, estimate }: { rule: DueRuleDto; estimate: ServiceLifeDto }) {
@@ -57,7 +60,10 @@ export function LearnedLife({ rule, estimate }: { rule: DueRuleDto; estimate: Se
           {estimate.events} worn out or failed{estimate.events ? `, ${years}` : ''} · {estimate.atRisk} parts on record. Parts still in service, upgraded
           or removed with their boiler count only for as long as they were seen (Kaplan–Meier).
         </p>
-        <p className="text-iron-muted">Rule today: {rule.replacementAgeYears ? `replace at ${rule.replacementAgeYears} years` : 'no fixed replacement age'} ({rule.source})</p>
+        <p className="text-iron-muted">
+          Rule today: {rule.replacementAgeYears ? `replace at ${rule.replacementAgeYears} years` : 'no fixed replacement age'}
+          {rule.planningAgeYears ? `, planning age ${rule.planningAgeYears} years` : ''} ({rule.source})
+        </p>
         {adopt.isError && (
           <Notice kind="danger" title="Not adopted">
             {describeFailure(adopt.error).message}
@@ -65,8 +71,13 @@ export function LearnedLife({ rule, estimate }: { rule: DueRuleDto; estimate: Se
         )}
         {!adopted && estimate.canAdopt && estimate.medianYears !== null && (
           <Button className="mt-2" variant="secondary" disabled={adopt.isPending} onClick={() => adopt.mutate(rule.id)} aria-label={`Adopt the learned service life for ${estimate.typeLabel}`}>
-            Adopt {Math.max(1, Math.round(estimate.medianYears))} years as the replacement age
+            Adopt {Math.max(1, Math.round(estimate.medianYears))} years as the {adoptsAsReplacementAge(rule) ? 'replacement age' : 'planning age'}
           </Button>
+        )}
+        {!adopted && estimate.canAdopt && !adoptsAsReplacementAge(rule) && (
+          <p className="text-iron-muted">
+            A median describes all such parts, not this one: parts past it are listed to inspect and plan for, and are replaced on condition.
+          </p>
         )}
         {!estimate.canAdopt && (
           <p className="text-iron-muted">
