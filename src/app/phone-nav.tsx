@@ -25,7 +25,7 @@ export function PhoneNav({ items, extra = [] }: { items: PhoneNavItem[]; extra?:
   const moreActive = rest.some((i) => i.to !== '/' && pathname.startsWith(i.to));
 
   return (
-    <nav aria-label="Phone" className="no-print fixed inset-x-0 bottom-0 z-20 border-t-2 border-plate-line bg-header text-header-text sm:hidden">
+    <nav aria-label="Shortcuts" className="no-print fixed inset-x-0 bottom-0 z-20 border-t-2 border-plate-line bg-header text-header-text sm:hidden">
       {open && (
         <ul id={sheetId} className="flex flex-col border-b border-header-soft py-1">
           {rest.map((item) => (

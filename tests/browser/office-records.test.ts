@@ -22,7 +22,8 @@ async function signInThroughUi(page: Page, email: string) {
   await page.getByLabel('E-mail', { exact: true }).fill(email);
   await page.getByLabel('Password').fill(DEFAULT_TEST_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('navigation', { name: 'Main' }).waitFor();
+  // The header's home link shows at every width (the main navigation is the desk's; a phone has the bottom bar).
+  await page.getByRole('link', { name: 'Lifeplate home' }).waitFor();
 }
 
 async function apiAgent(email: string) {

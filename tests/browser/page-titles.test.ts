@@ -46,7 +46,7 @@ describe('the phone’s navigation', () => {
     const context = await fx.browser.newContext(PHONE);
     const page = await context.newPage();
     await signInAsMember(page, fx.server.baseUrl, fx.t.technician.user.email);
-    const bar = page.getByRole('navigation', { name: 'Phone' });
+    const bar = page.getByRole('navigation', { name: 'Shortcuts' });
     expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
     const names = await bar.locator(':scope > div > *').allInnerTexts();
     expect(names.map((n) => n.trim())).toEqual(['Round', 'Find', 'Scan', 'More']);

@@ -119,6 +119,8 @@ describe('a technician on a phone', () => {
     await confirmation.getByRole('link', { name: 'Back to the life record' }).click();
     await page.waitForURL(`${fx.server.baseUrl}/appliances/${boiler.id}`);
 
+    // History is folded below the first screen; the technician opens it.
+    await page.getByRole('region', { name: 'History' }).locator('summary').click();
     const history = page.getByRole('list', { name: 'History, newest first' });
     await history.locator('li[data-kind="visit"]').first().waitFor();
     await history.locator('li[data-kind="part_swap"]').first().waitFor();

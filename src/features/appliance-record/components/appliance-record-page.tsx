@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/lib/auth';
 import { ApiError } from '@/lib/api-client';
 import { can } from '@shared/policy';
+import { todayInTimeZone } from '@shared/dates';
 import { LABELS } from '@shared/schemas/enums';
 import { useApplianceRecord } from '@/lib/resources/appliances';
 import { applianceTitle, formatDate } from '../lib/labels';
@@ -76,8 +77,8 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
         </Link>
       )}
       {can(me.data?.principal, 'visits:record') && a.status !== 'removed' && <StartVisit applianceId={a.id} openDraftVisitId={r.openDraftVisitId} booking={r.nextBooking} />}
+      <DueList due={r.due} today={todayInTimeZone(me.data?.company?.timeZone ?? 'UTC')} />
       <RecordHeader record={r} />
-      <DueList due={r.due} />
       <EndOfLife endOfLife={r.endOfLife} ageYears={r.ageYears} />
       <ComponentsList components={r.components} />
       {slots.tag?.(a.id)}

@@ -10,7 +10,7 @@ export function CombustionTrend({ applianceId }: { applianceId: string }) {
   const points = trendPoints(readings.data?.pages.flatMap((p) => p.items) ?? []);
   if (readings.isPending || points.length === 0) return null;
   return (
-    <Section title="Combustion over the years">
+    <Section folded title="Combustion over the years">
       <Sparkline points={points} />
       <table className="tabular w-full text-left text-sm">
         <thead>

@@ -7,7 +7,7 @@ export function ComponentsList({ components }: { components: ComponentDto[] }) {
   const current = components.filter((c) => !c.removedOn);
   const removed = components.filter((c) => c.removedOn);
   return (
-    <Section title="Parts">
+    <Section folded title="Parts" summary={`${current.length} in service${removed.length ? `, ${removed.length} removed` : ''}`}>
       {current.length === 0 ? (
         <p>No parts recorded.</p>
       ) : (

@@ -63,7 +63,7 @@ export function MakeupWaterSection({ applianceId, timeZone, canRecord }: { appli
   }
 
   return (
-    <Section title="Makeup water">
+    <Section folded title="Makeup water">
       <p className="mb-2 text-sm">
         A steam boiler that needs water more often than about once a month should be checked for leaks: excess makeup water brings in oxygen and minerals
         that corrode the boiler (common practice).

@@ -31,7 +31,7 @@ export function Timeline({ applianceId }: { applianceId: string }) {
   const events = timeline.data?.pages.flatMap((p) => p.items) ?? [];
 
   return (
-    <Section title="History">
+    <Section folded title="History">
       <div role="group" aria-label="Show only" className="-mx-1 mb-2 flex gap-1 overflow-x-auto pb-1">
         <Chip active={kind === undefined} onClick={() => setKind(undefined)}>
           All
