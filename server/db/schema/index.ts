@@ -13,3 +13,4 @@ export * from './outgoing-mail';
 export * from './sign-in-throttle';
 export * from './imports';
 export * from './bookings';
+export * from './radiation-surveys';
