@@ -27,6 +27,7 @@ import { checklistRoutes } from './modules/checklists/checklists.routes';
 import { visitsRoutes } from './modules/visits/visits.routes';
 import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
+import { radiationSurveyRoutes } from './modules/radiation-surveys/radiation-surveys.routes';
 import { shareLinkRoutes } from './modules/share-links/share-links.routes';
 import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
@@ -91,6 +92,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(lifeRecordExportRoutes(ctx));
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
+  api.use(radiationSurveyRoutes(ctx));
   api.use(shareLinkRoutes(ctx));
   api.use(homeownerRoutes(ctx));
   api.use(fleetRoutes(ctx));

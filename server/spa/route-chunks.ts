@@ -53,6 +53,18 @@ export const CLIENT_ROUTES: readonly ClientRoute[] = [
       'src/features/appliance-record/components/share-links-section.tsx',
     ],
   },
+  {
+    name: 'radiation-survey',
+    path: '/appliances/:id/radiation-survey',
+    pattern: /^\/appliances\/([0-9a-f-]{36})\/radiation-survey\/?$/i,
+    modules: [...SIGNED_IN, 'src/features/radiation-survey/components/survey-page.tsx'],
+  },
+  {
+    name: 'replacement-proposal',
+    path: '/appliances/:id/radiation-survey/proposal',
+    pattern: /^\/appliances\/([0-9a-f-]{36})\/radiation-survey\/proposal\/?$/i,
+    modules: [...SIGNED_IN, 'src/features/radiation-survey/components/proposal-page.tsx'],
+  },
   { name: 'home', path: '/', pattern: /^\/$/, modules: [...SIGNED_IN, 'src/app/pages/home.tsx'] },
   { name: 'sign-in', path: '/sign-in', pattern: /^\/sign-in\/?$/, modules: ['src/features/auth/components/sign-in-page.tsx'] },
 ];

@@ -120,6 +120,8 @@ export function appRoutes(): RouteObject[] {
             );
           };
         }),
+        guardedPage('appliances/:id/radiation-survey', 'records:read', async () => (await import('@/features/radiation-survey/components/survey-page')).RadiationSurveyPage),
+        guardedPage('appliances/:id/radiation-survey/proposal', 'records:read', async () => (await import('@/features/radiation-survey/components/proposal-page')).ProposalPage),
         guardedPage('visits/:id', 'records:read', async () => {
           const [{ VisitPage }, { VisitPhotos }] = await Promise.all([
             import('@/features/visits/components/visit-page'),

@@ -14,3 +14,4 @@ export * from './sign-in-throttle';
 export * from './imports';
 export * from './bookings';
 export * from './idempotency-keys';
+export * from './radiation-surveys';

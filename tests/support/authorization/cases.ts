@@ -193,6 +193,13 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     body: () => ({ kind: 'added_by_hand', recordedOn: PAST_DAY, gallons: 1 }),
     status: 201,
   },
+  'get /appliances/:id/radiation-surveys': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'get /appliances/:id/radiation-surveys/latest': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'post /appliances/:id/radiation-surveys': {
+    params: (c) => ({ id: c.target.applianceId }),
+    body: () => ({ surveyedOn: PAST_DAY, system: 'steam', rooms: [{ name: 'Parlour', radiators: [{ type: 'cast_iron_column', columns: 3, heightIn: 38, sections: 10 }] }] }),
+    status: 201,
+  },
   'post /appliances/:id/share-links': { params: (c) => ({ id: c.target.applianceId }), body: () => ({}), status: 201 },
   'get /appliances/:id/share-links': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
   'post /share-links/:id/revoke': {

@@ -80,6 +80,11 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
       <DueList due={r.due} today={todayInTimeZone(me.data?.company?.timeZone ?? 'UTC')} />
       <RecordHeader record={r} />
       <EndOfLife endOfLife={r.endOfLife} ageYears={r.ageYears} />
+      {(a.kind === 'steam_boiler' || a.kind === 'hot_water_boiler') && (
+        <Link className="no-print inline-flex min-h-tap items-center font-semibold underline" to={`/appliances/${a.id}/radiation-survey`}>
+          Radiation survey (sizing a replacement)
+        </Link>
+      )}
       <ComponentsList components={r.components} />
       {slots.tag?.(a.id)}
       {slots.photos?.(a.id)}
