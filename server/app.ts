@@ -27,6 +27,7 @@ import { visitsRoutes } from './modules/visits/visits.routes';
 import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
 import { shareLinkRoutes } from './modules/share-links/share-links.routes';
+import { recordTransferRoutes } from './modules/record-transfers/record-transfers.routes';
 import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { serviceLifeRoutes } from './modules/service-life/service-life.routes';
@@ -90,6 +91,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(dueRoutes(ctx));
   api.use(makeupWaterRoutes(ctx));
   api.use(shareLinkRoutes(ctx));
+  api.use(recordTransferRoutes(ctx));
   api.use(homeownerRoutes(ctx));
   api.use(fleetRoutes(ctx));
   api.use(serviceLifeRoutes(ctx));
