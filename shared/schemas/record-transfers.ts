@@ -13,8 +13,7 @@ import { normalizeTransferCode } from '../transfers/transfer-code';
  * The code travels in the body, never in a URL, so it stays out of logs and history.
  */
 
-/** How long a code can be used (common practice for a one-time hand-over code: two weeks). */
-export const TRANSFER_CODE_DAYS = 14;
+export { TRANSFER_CODE_DAYS, TRANSFER_WHAT_IS_COPIED } from '../transfers/transfer-words';
 
 export const TRANSFER_CODE_MESSAGE = 'Enter the 16-character code, for example 7K2M-Q9XD-4HPT-WB3C.';
 
@@ -54,6 +53,3 @@ export type ReceivedTransferDto = { applianceId: string; customerId: string; sit
 
 /** Shown on a copied record and its visits: who recorded it, and when it arrived here. */
 export type TransferProvenanceDto = { senderName: string; receivedAt: string };
-
-export const TRANSFER_WHAT_IS_COPIED =
-  'The receiving company gets a copy of this life record: the appliance, its parts, the completed visits with their readings and outcomes, the part swaps and the photos the homeowner can see. Office notes stay here. This company keeps its own copy.';
