@@ -22,38 +22,37 @@ export async function readTransferableRecord(db: DbOrTx, companyId: string, appl
     .from(sites)
     .innerJoin(customers, and(eq(customers.id, sites.customerId), eq(customers.companyId, companyId)))
     .where(and(eq(sites.companyId, companyId), eq(sites.id, appliance.siteId)));
-  const [parts, visitRows, photoRows] = await Promise.all([
-    db
+  // One after another: inside the redeeming transaction these share one connection.
+  const parts = await db
       .select()
       .from(components)
       .where(and(eq(components.companyId, companyId), eq(components.applianceId, applianceId)))
-      .orderBy(asc(components.createdAt), asc(components.id)),
-    db
+      .orderBy(asc(components.createdAt), asc(components.id));
+  const visitRows = await db
       .select()
       .from(visits)
       .where(and(eq(visits.companyId, companyId), eq(visits.applianceId, applianceId), eq(visits.status, 'completed')))
-      .orderBy(asc(visits.visitedOn), asc(visits.completedAt)),
-    db
+      .orderBy(asc(visits.visitedOn), asc(visits.completedAt));
+  const photoRows = await db
       .select()
       .from(photos)
       .where(and(eq(photos.companyId, companyId), eq(photos.applianceId, applianceId), eq(photos.homeownerVisible, true)))
-      .orderBy(asc(photos.createdAt)),
-  ]);
+      .orderBy(asc(photos.createdAt));
   const visitIds = visitRows.map((v) => v.id);
-  const [swaps, amendments] = visitIds.length
-    ? await Promise.all([
-        db
-          .select()
-          .from(partSwaps)
-          .where(and(eq(partSwaps.companyId, companyId), inArray(partSwaps.visitId, visitIds)))
-          .orderBy(asc(partSwaps.createdAt)),
-        db
-          .select()
-          .from(visitAmendments)
-          .where(and(eq(visitAmendments.companyId, companyId), inArray(visitAmendments.visitId, visitIds)))
-          .orderBy(asc(visitAmendments.createdAt)),
-      ])
-    : [[], []];
+  const swaps = visitIds.length
+    ? await db
+        .select()
+        .from(partSwaps)
+        .where(and(eq(partSwaps.companyId, companyId), inArray(partSwaps.visitId, visitIds)))
+        .orderBy(asc(partSwaps.createdAt))
+    : [];
+  const amendments = visitIds.length
+    ? await db
+        .select()
+        .from(visitAmendments)
+        .where(and(eq(visitAmendments.companyId, companyId), inArray(visitAmendments.visitId, visitIds)))
+        .orderBy(asc(visitAmendments.createdAt))
+    : [];
   return { appliance, place: place!, parts, visits: visitRows, swaps, amendments, photos: photoRows };
 }
 
