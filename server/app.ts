@@ -29,6 +29,7 @@ import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
 import { radiationSurveyRoutes } from './modules/radiation-surveys/radiation-surveys.routes';
 import { shareLinkRoutes } from './modules/share-links/share-links.routes';
+import { recordTransferRoutes } from './modules/record-transfers/record-transfers.routes';
 import { homeownerRoutes } from './modules/homeowner/homeowner.routes';
 import { fleetRoutes } from './modules/fleet/fleet.routes';
 import { serviceLifeRoutes } from './modules/service-life/service-life.routes';
@@ -94,6 +95,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(makeupWaterRoutes(ctx));
   api.use(radiationSurveyRoutes(ctx));
   api.use(shareLinkRoutes(ctx));
+  api.use(recordTransferRoutes(ctx));
   api.use(homeownerRoutes(ctx));
   api.use(fleetRoutes(ctx));
   api.use(serviceLifeRoutes(ctx));

@@ -15,6 +15,8 @@ export const PERMISSIONS = {
   'company:settings': ['owner'],
   // Bringing a whole customer list in at once is an office task.
   'records:import': ['owner', 'manager'],
+  // Sending a life record to another company, or taking one in, is the office's decision, made with the homeowner.
+  'records:transfer': ['owner', 'manager'],
   // Every round is visible to the whole team; technicians may book follow-ups for themselves only (the service checks).
   'bookings:read': ['owner', 'manager', 'technician'],
   'bookings:book': ['owner', 'manager', 'technician'],

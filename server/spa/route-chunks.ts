@@ -51,6 +51,7 @@ export const CLIENT_ROUTES: readonly ClientRoute[] = [
       'src/features/tags/components/appliance-tag.tsx',
       'src/features/appliance-record/components/makeup-water-section.tsx',
       'src/features/appliance-record/components/share-links-section.tsx',
+      'src/features/appliance-record/components/record-transfer-section.tsx',
     ],
   },
   {
@@ -82,6 +83,7 @@ export const OFFICE_SCREENS: readonly string[] = [
   'src/features/tags/components/tag-batches-page.tsx',
   'src/features/reminders/components/outbox-page.tsx',
   'src/features/service-requests/components/service-requests-page.tsx',
+  'src/features/record-transfers/components/receive-record-page.tsx',
 ];
 
 export function matchClientRoute(pathname: string): { route: ClientRoute; param: string | null } | null {

@@ -22,6 +22,7 @@
  *
  * Visits: see shared/schemas/visits.ts.
  */
+import type { TransferProvenanceDto } from './record-transfers';
 import { z } from 'zod';
 import * as E from './enums';
 import { isoDate, nonEmptyPatch, optionalText, requiredText, storableText } from './common';
@@ -218,6 +219,8 @@ export type ApplianceRecordDto = {
   /** Filled by the due engine; an empty list (never invented items) until it has run. */
   due: { componentId: string; typeLabel: string; kind: 'inspection' | 'replacement'; dueOn: string; status: string; reason: string }[];
   endOfLife: { medianYears: number | null; status: 'within' | 'near' | 'past' | 'unknown'; source: string } | null;
+  /** Set when this record was copied from another company with the homeowner's consent (its history was recorded there). */
+  transferredFrom?: TransferProvenanceDto | null;
 };
 
 export type TimelineEventDto = {

@@ -11,6 +11,7 @@
  * Readings are stored in one canonical unit each (°F, in. w.c., psi, mV, ppm, %); the client converts at the edge.
  * The server recomputes the results from shared/trade and stores its own result.
  */
+import type { TransferProvenanceDto } from './record-transfers';
 import { z } from 'zod';
 import { SWAP_CAUSES } from '../stats/swap-causes';
 import * as E from './enums';
@@ -206,4 +207,6 @@ export type VisitDto = {
   revision: number;
   swaps: { id: string; removedComponentId: string; newComponentId: string; typeLabel: string; swappedOn: string; reason: string | null; newDescription: string | null }[];
   amendments: { id: string; reason: string; changes: Record<string, unknown>; createdAt: string; createdByName: string | null }[];
+  /** Set on a visit copied from another company's record: recorded by that company, not by anyone here. */
+  recordedElsewhere?: TransferProvenanceDto | null;
 };

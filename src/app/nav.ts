@@ -14,6 +14,7 @@ const ITEMS: NavItem[] = [
   { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
   { to: '/tags', label: 'Tags', permission: 'catalog:manage' },
   { to: '/imports', label: 'Bring records in', permission: 'records:import' },
+  { to: '/receive', label: 'Receive a record', permission: 'records:transfer' },
   { to: '/team', label: 'Team', permission: 'records:read' },
   { to: '/settings', label: 'Company', permission: 'company:settings' },
 ];

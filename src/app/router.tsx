@@ -142,6 +142,7 @@ export function appRoutes(): RouteObject[] {
         guardedPage('tags', 'catalog:manage', async () => (await import('@/features/tags/components/tag-batches-page')).TagBatchesPage),
         guardedPage('service-requests', 'records:read', async () => (await import('@/features/service-requests/components/service-requests-page')).ServiceRequestsPage),
         guardedPage('outbox', 'dev:outbox', async () => (await import('@/features/reminders/components/outbox-page')).OutboxPage),
+        guardedPage('receive', 'records:transfer', async () => (await import('@/features/record-transfers/components/receive-record-page')).ReceiveRecordPage),
         guardedPage('imports', 'records:import', async () => (await import('@/features/imports/components/imports-page')).ImportsPage),
         guardedPage('catalog', 'catalog:manage', async () => (await import('@/features/catalog/components/catalog-page')).CatalogPage),
         {

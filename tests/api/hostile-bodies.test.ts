@@ -20,6 +20,8 @@ import { MULTIPART_BODY } from '../../server/middleware/body-type';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { insertBooking } from '../../server/db/factories/bookings';
 import { bookingReplyToken } from '../../server/modules/booking-notices/booking-reply-token';
+import { recordTransfers } from '../../server/db/schema/index';
+import { hashTransferCode } from '../../server/modules/record-transfers/record-transfers.service';
 import { testConfig } from '../support/context';
 import { createOwnDatabase } from '../support/own-database';
 import { installWriteCounter } from '../support/write-counter';
@@ -110,6 +112,19 @@ beforeAll(async () => {
   const [rule] = (await ok(as.owner.get('/api/due-rules'), 'read the due rules')).body;
   const [template] = (await ok(as.owner.get('/api/checklist-templates'), 'read the checklists')).body;
 
+  // A transfer code from a second company, so the receiving routes meet a code they could really redeem.
+  const sender = await createTenant(ctx.db);
+  const senderSite = await insertSite(ctx.db, { companyId: sender.company.id, customerId: sender.customer.id });
+  const senderBoiler = await insertAppliance(ctx.db, { companyId: sender.company.id, siteId: senderSite.id });
+  const transferCode = 'K7M2Q9XD4HPTWB3C';
+  await ctx.db.insert(recordTransfers).values({
+    companyId: sender.company.id,
+    applianceId: senderBoiler.id,
+    codeHash: hashTransferCode(transferCode),
+    madeBy: 'office',
+    expiresAt: new Date(Date.now() + 14 * 86_400_000),
+  });
+
   // Installed after the setup above, so it counts only what the hostile requests write; and it does count.
   rowsWritten = await installWriteCounter(ctx.db);
   const start = await rowsWritten();
@@ -156,6 +171,8 @@ beforeAll(async () => {
     'post /bookings/:id/cancel': `/bookings/${booking.id}/cancel`,
     'post /bookings/:id/no-access': `/bookings/${booking.id}/no-access`,
     'post /booking-reply/:token': `/booking-reply/${bookingReplyToken(ctx.config.BETTER_AUTH_SECRET, replyBooking.id)}`,
+    'post /record-transfers/preview': '/record-transfers/preview',
+    'post /record-transfers/redeem': '/record-transfers/redeem',
   };
   // One valid body per route: the mutations below break it one piece at a time.
   samples = {
@@ -225,6 +242,8 @@ beforeAll(async () => {
     'post /bookings/:id/cancel': { reason: 'Customer away' },
     'post /bookings/:id/no-access': { reason: 'Nobody home' },
     'post /booking-reply/:token': { contactName: 'Ada Fenwick', contactPhone: '555-0142', reason: 'At work that morning', preferredTimes: 'Weekday afternoons' },
+    'post /record-transfers/preview': { code: 'k7m2-q9xd-4hpt-wb3c' },
+    'post /record-transfers/redeem': { code: 'K7M2-Q9XD-4HPT-WB3C', siteId: site.id },
   };
 }, 120_000);
 

@@ -3,7 +3,7 @@ import { and, eq } from 'drizzle-orm';
 import type { BrowserContext, Page } from 'playwright-core';
 import { PHONE, screenshotDir, signInAsMember, useBrowserFixture } from '../support/browser';
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
-import { components, visits } from '../../server/db/schema/index';
+import { components, partSwaps, visits } from '../../server/db/schema/index';
 import { todayInTimeZone } from '../../shared/dates';
 
 const fx = useBrowserFixture();
@@ -98,12 +98,17 @@ describe('a technician on a phone', () => {
     const liveEfficiency = await live.locator('[data-live="Efficiency (HHV)"]').textContent();
     expect(liveEfficiency).toMatch(/^\d+\.\d %$/);
 
-    // Part swap in two taps: the thermocouple, then "Replaced today".
+    // Part swap: the thermocouple, why it came out (asked every time, for service-life estimates), then "Replaced today".
     await page.getByRole('button', { name: /^thermocouple/ }).click();
     const sheet = page.getByRole('dialog');
     await sheet.getByRole('button', { name: 'would not hold the pilot' }).click();
     await sheet.getByRole('button', { name: 'Replaced today' }).click();
+    await sheet.getByText('Say why the old part came out.').waitFor();
+    await sheet.getByRole('radio', { name: 'Worn out or failed' }).check();
+    await sheet.getByRole('button', { name: 'Replaced today' }).click();
     await page.getByText('✓ thermocouple replaced · would not hold the pilot').waitFor();
+    const [swapRow] = await fx.server.ctx.db.select().from(partSwaps).where(eq(partSwaps.applianceId, boiler.id));
+    expect(swapRow).toMatchObject({ cause: 'wear_or_failure', reason: 'would not hold the pilot' });
 
     await page.getByRole('textbox', { name: 'Findings' }).fill('Cutoff tripped and stopped the burner. Pilot dropped out; thermocouple replaced.');
     await page.getByRole('button', { name: 'Left operating', exact: true }).click();

@@ -1,7 +1,7 @@
 import { boolean, index, integer, pgEnum, pgTable, text, unique, uuid } from 'drizzle-orm/pg-core';
 import { PHOTO_KINDS } from '../../../shared/schemas/photos';
 import { companies } from './companies';
-import { appliances, components, visits } from './records';
+import { appliances, components, recordTransfers, visits } from './records';
 import { createdAt, createdBy, id } from './columns';
 
 export const photoKind = pgEnum('photo_kind', PHOTO_KINDS);
@@ -29,6 +29,8 @@ export const photos = pgTable(
     displayKey: text('display_key').notNull(),
     thumbKey: text('thumb_key').notNull(),
     bytes: integer('bytes').notNull(),
+    /** Copied from another company's record with the homeowner's consent (record_transfers.id). */
+    importedFromTransferId: uuid('imported_from_transfer_id').references(() => recordTransfers.id, { onDelete: 'set null' }),
     createdBy: createdBy(),
     createdAt: createdAt(),
   },

@@ -139,6 +139,8 @@ export const appliances = pgTable(
     externalId: text('external_id'),
     /** The spreadsheet this record came from, when it was imported (import_files.id). */
     importId: uuid('import_id'),
+    /** Copied from another company's record with the homeowner's consent (record_transfers.id): recorded by that company. */
+    importedFromTransferId: uuid('imported_from_transfer_id').references((): AnyPgColumn => recordTransfers.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),
@@ -176,6 +178,8 @@ export const components = pgTable(
     dueOn: date('due_on'),
     dueKind: text('due_kind').$type<'inspection' | 'replacement'>(),
     dueReason: text('due_reason'),
+    /** Copied from another company's record with the homeowner's consent (record_transfers.id): recorded by that company. */
+    importedFromTransferId: uuid('imported_from_transfer_id').references((): AnyPgColumn => recordTransfers.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     createdBy: createdBy(),
@@ -256,6 +260,8 @@ export const visits = pgTable(
     importId: uuid('import_id'),
     /** The booking this visit was started from (bookings.id; the foreign key is in drizzle/0016_bookings_no_clash.sql). */
     bookingId: uuid('booking_id'),
+    /** Copied from another company's record with the homeowner's consent (record_transfers.id): recorded by that company. */
+    importedFromTransferId: uuid('imported_from_transfer_id').references((): AnyPgColumn => recordTransfers.id, { onDelete: 'set null' }),
     revision: integer('revision').notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -306,6 +312,8 @@ export const partSwaps = pgTable(
     reason: text('reason'),
     /** Why the old part came out, for service-life estimates (shared/stats/swap-causes.ts). */
     cause: text('cause').$type<SwapCause>().notNull().default('wear_or_failure'),
+    /** Copied from another company's record with the homeowner's consent (record_transfers.id): recorded by that company. */
+    importedFromTransferId: uuid('imported_from_transfer_id').references((): AnyPgColumn => recordTransfers.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     createdBy: createdBy(),
   },
@@ -313,6 +321,36 @@ export const partSwaps = pgTable(
     index('part_swaps_visit_idx').on(t.visitId),
     index('part_swaps_removed_component_idx').on(t.companyId, t.removedComponentId),
     check('part_swaps_cause_ck', sql`${t.cause} in ('wear_or_failure', 'upgrade', 'other')`),
+  ],
+);
+
+/**
+ * A one-time code that lets another company copy this appliance's life record, made by the homeowner or by the office at
+ * the homeowner's request. Only the SHA-256 of the code is kept; it is used once (redeemed_at), or withdrawn, or expires.
+ */
+export const recordTransfers = pgTable(
+  'record_transfers',
+  {
+    id: id(),
+    companyId: companyId(),
+    applianceId: uuid('appliance_id')
+      .notNull()
+      .references((): AnyPgColumn => appliances.id, { onDelete: 'cascade' }),
+    codeHash: text('code_hash').notNull().unique(),
+    /** 'office' (an owner or manager) or 'homeowner' (from their own record page). */
+    madeBy: text('made_by').$type<'office' | 'homeowner'>().notNull(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    withdrawnAt: timestamp('withdrawn_at', { withTimezone: true }),
+    redeemedAt: timestamp('redeemed_at', { withTimezone: true }),
+    redeemedByCompanyId: uuid('redeemed_by_company_id').references(() => companies.id, { onDelete: 'set null' }),
+    /** The sending company's name when the record was received, shown beside the copy even if the name changes later. */
+    senderName: text('sender_name'),
+    createdAt: createdAt(),
+    createdBy: createdBy(),
+  },
+  (t) => [
+    index('record_transfers_appliance_idx').on(t.companyId, t.applianceId, t.createdAt),
+    check('record_transfers_made_by_ck', sql`${t.madeBy} in ('office', 'homeowner')`),
   ],
 );
 

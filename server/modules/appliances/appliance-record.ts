@@ -9,6 +9,7 @@ import { sitesRepository } from '../sites/sites.repository';
 import { ageStartDate, endOfLifeFor, wholeYearsBetween } from './appliance-age';
 import { applianceLabel } from './appliance-label';
 import { appliancesRepository, type ApplianceRow } from './appliances.repository';
+import { transferProvenance } from '../record-transfers/transfer-provenance';
 import { toComponentDto } from './component-dto';
 
 const STATUS_ORDER = { replace_now: 0, overdue: 1, due_soon: 2, ok: 3 } as const;
@@ -44,7 +45,7 @@ function toApplianceDto(a: ApplianceRow, replaced: ApplianceRow | null): Applian
 export async function loadApplianceRecord(db: DbOrTx, companyId: string, applianceId: string): Promise<ApplianceRecordDto> {
   const appliance = await appliancesRepository.find(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
-  const [site, today, replaced, componentRows, lastVisit, draft, nextBooking] = await Promise.all([
+  const [site, today, replaced, componentRows, lastVisit, draft, nextBooking, transferredFrom] = await Promise.all([
     sitesRepository.find(db, companyId, appliance.siteId),
     companyToday(db, companyId),
     appliancesRepository.findReplaced(db, companyId, applianceId),
@@ -52,6 +53,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
     appliancesRepository.latestVisit(db, companyId, applianceId, 'completed'),
     appliancesRepository.latestVisit(db, companyId, applianceId, 'draft'),
     nextBookingOf(db, companyId, applianceId),
+    transferProvenance(db, appliance.importedFromTransferId),
   ]);
   const customer = site && (await customersRepository.find(db, companyId, site.customerId));
   if (!site || !customer) throw notFound('Appliance');
@@ -76,5 +78,6 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
       lastVisit?.outcome === 'shut_down_unsafe' ? { visitId: lastVisit.id, visitedOn: lastVisit.visitedOn, reason: lastVisit.outcomeReason } : null,
     due,
     endOfLife: endOfLifeFor(appliance, today),
+    transferredFrom,
   };
 }

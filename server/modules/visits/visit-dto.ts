@@ -2,15 +2,17 @@ import type { DbOrTx } from '../../db/client';
 import type { ReadingKey, ReadingsInput, VisitDto } from '../../../shared/schemas/visits';
 import { typeLabelFor } from '../due/type-label';
 import { isOutcomeRequired, type VisitResults } from '../../../shared/visits/visit-results';
+import { transferProvenance } from '../record-transfers/transfer-provenance';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 /** The visit as stored, with names, its part swaps and every amendment (newest last) beside the original fields. */
 export async function loadVisitDto(db: DbOrTx, companyId: string, visit: VisitRow): Promise<VisitDto> {
-  const [swaps, amendments] = await Promise.all([
+  const [swaps, amendments, recordedElsewhere] = await Promise.all([
     visitsRepository.swapsOfVisit(db, companyId, visit.id),
     visitsRepository.amendmentsOfVisit(db, companyId, visit.id),
+    transferProvenance(db, visit.importedFromTransferId),
   ]);
   const people = [...visit.technicianIds, ...(visit.signedOffBy ? [visit.signedOffBy] : [])];
   const names = await visitsRepository.userNames(db, [...new Set(people)]);
@@ -58,5 +60,6 @@ export async function loadVisitDto(db: DbOrTx, companyId: string, visit: VisitRo
       createdAt: a.createdAt.toISOString(),
       createdByName: a.createdByName,
     })),
+    recordedElsewhere,
   };
 }

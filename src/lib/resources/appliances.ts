@@ -12,6 +12,7 @@ export const applianceKeys = {
   timeline: (id: string, kind?: string) => (kind === undefined ? (['appliance', id, 'timeline'] as const) : (['appliance', id, 'timeline', kind] as const)),
   photos: (id: string) => ['appliance', id, 'photos'] as const,
   shareLinks: (id: string) => ['appliance', id, 'share-links'] as const,
+  recordTransfers: (id: string) => ['appliance', id, 'record-transfers'] as const,
   makeupWater: (id: string) => ['appliance', id, 'makeup-water'] as const,
 };
 

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import type { AppContext } from '../../../server/context';
 import { insertBooking } from '../../../server/db/factories/bookings';
 import { bookingReplyToken } from '../../../server/modules/booking-notices/booking-reply-token';
+import { transferCodeFromBytes } from '../../../shared/transfers/transfer-code';
 import { completeVisitBody } from '../../../bench/lib/complete-visit-body';
 import { draftVisit, memberInvitation, newAppliance, ok, shareLinkOn, spareTechnician, uniqueJpeg, type World } from './world';
 
@@ -38,6 +39,7 @@ export type RouteCase = {
 
 const str = (v: unknown) => String(v);
 const randomShareToken = () => crypto.randomBytes(32).toString('base64url');
+const randomTransferCode = () => transferCodeFromBytes(crypto.randomBytes(16));
 const PAST_DAY = '2024-03-01';
 const serviceRequestBody = { contactName: 'Matrix caller', contactPhone: '555-0142', message: 'The radiators are cold upstairs.' };
 /** A date some days ahead of the real clock (the matrix runs on it), as the company's calendar would write it. */
@@ -209,6 +211,22 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   // The token is the key: anyone holding a live link reads it; a stranger's guess is 404; another company's caller opens their own link.
   'get /share/:token': { params: (c) => ({ token: c.own?.shareToken ?? randomShareToken() }), status: 200, as: { signedOut: 404 }, crossTenant: 200 },
+  'post /appliances/:id/record-transfers': { params: (c) => ({ id: c.target.applianceId }), status: 201 },
+  'get /appliances/:id/record-transfers': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  'post /record-transfers/:id/withdraw': {
+    freshInTarget: async (_ctx, w) => ({ id: (await ok<{ id: string }>('transfer code', w.as.manager.post(`/api/appliances/${w.applianceId}/record-transfers`))).id }),
+    params: (c) => ({ id: str(c.fresh.id) }),
+    status: 200,
+  },
+  'post /homeowner/appliances/:id/record-transfers': { params: (c) => ({ id: c.target.applianceId }), status: 201 },
+  'post /homeowner/record-transfers/:id/withdraw': {
+    freshInTarget: async (_ctx, w) => ({ id: (await ok<{ id: string }>('transfer code', w.as.homeowner.post(`/api/homeowner/appliances/${w.applianceId}/record-transfers`))).id }),
+    params: (c) => ({ id: str(c.fresh.id) }),
+    status: 200,
+  },
+  // A code no one issued: the matrix proves who gets past the guard; tests/api/record-transfers.test.ts the rest.
+  'post /record-transfers/preview': { body: () => ({ code: randomTransferCode() }), status: 404 },
+  'post /record-transfers/redeem': { body: () => ({ code: randomTransferCode() }), status: 404 },
   'get /homeowner/appliances': { status: 200 },
   'get /homeowner/appliances/:id': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
   'get /fleet/annual-service-due': { status: 200 },

@@ -7,6 +7,7 @@ import { ApiError } from '@/lib/api-client';
 import { can } from '@shared/policy';
 import { todayInTimeZone } from '@shared/dates';
 import { LABELS } from '@shared/schemas/enums';
+import { provenanceWords } from '@shared/transfers/provenance-words';
 import { useApplianceRecord } from '@/lib/resources/appliances';
 import { applianceTitle, formatDate } from '../lib/labels';
 import { bookingWindowWords } from '../lib/booking-words';
@@ -23,6 +24,7 @@ import { Timeline } from './timeline';
 // Below the first screen, with their form schemas: fetched once the record has painted, not before it.
 const MakeupWaterSection = lazy(async () => ({ default: (await import('./makeup-water-section')).MakeupWaterSection }));
 const ShareLinksSection = lazy(async () => ({ default: (await import('./share-links-section')).ShareLinksSection }));
+const RecordTransferSection = lazy(async () => ({ default: (await import('./record-transfer-section')).RecordTransferSection }));
 
 /** Sections owned by other features (tags, photos) are handed in by the app's router, so features stay independent. */
 export type RecordSlots = { photos?: (applianceId: string) => ReactNode; tag?: (applianceId: string) => ReactNode };
@@ -62,6 +64,12 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
           and licensed practice.
         </Notice>
       )}
+      {r.transferredFrom && (
+        <Notice title="Copied from another company">
+          {provenanceWords(r.transferredFrom, me.data?.company?.timeZone ?? 'UTC')}, with the homeowner&apos;s consent. Visits before that day were not made by
+          your team.
+        </Notice>
+      )}
       {a.status !== 'in_service' && <Notice title={LABELS.applianceStatus[a.status]}>This appliance is marked {LABELS.applianceStatus[a.status].toLowerCase()}.</Notice>}
       {r.nextBooking && (
         <p className="font-semibold">
@@ -98,6 +106,11 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
       {can(me.data?.principal, 'share:create') && (
         <Suspense fallback={null}>
           <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />
+        </Suspense>
+      )}
+      {can(me.data?.principal, 'records:transfer') && (
+        <Suspense fallback={null}>
+          <RecordTransferSection applianceId={a.id} timeZone={me.data?.company?.timeZone ?? 'UTC'} />
         </Suspense>
       )}
     </Page>

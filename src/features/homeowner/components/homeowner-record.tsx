@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { formatCalendarDate, formatVisitWindow } from '@shared/format/dates';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
@@ -11,7 +12,7 @@ import { ServiceRequestForm } from './service-request-form';
 const date = (iso: string) => formatCalendarDate(iso, { long: true });
 
 /** The homeowner's life record: read-only, plain words first, the numbers alongside. */
-export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; source: RecordSource }) {
+export function HomeownerRecord({ view, source, after }: { view: HomeownerViewDto; source: RecordSource; after?: ReactNode }) {
   const a = view.appliance;
   return (
     <div className="mx-auto flex w-full max-w-2xl flex-col gap-4 px-3 py-4">
@@ -125,6 +126,7 @@ export function HomeownerRecord({ view, source }: { view: HomeownerViewDto; sour
           </a>
         </p>
       </Card>
+      {after}
       <SafetyNotes kind={a.kind} fuel={a.fuel} />
       <p className="text-center text-sm text-iron-muted">
         Kept by {view.company.name} · {view.company.phone}

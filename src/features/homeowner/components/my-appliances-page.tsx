@@ -3,6 +3,7 @@ import { Page, Spinner } from '@/components/ui/page';
 import { Card } from '@/components/ui/card';
 import { useMyAppliance, useMyAppliances } from '../api/get-my-appliances';
 import { HomeownerRecord } from './homeowner-record';
+import { MoveRecordCard } from './move-record-card';
 
 export function MyAppliancesPage() {
   const list = useMyAppliances();
@@ -36,5 +37,5 @@ function MyApplianceView({ id }: { id: string }) {
   const view = useMyAppliance(id);
   if (view.isPending) return <Spinner />;
   if (view.error) return <Page title="Not found">{view.error.message}</Page>;
-  return <HomeownerRecord view={view.data} source={{ kind: 'account', applianceId: id }} />;
+  return <HomeownerRecord view={view.data} source={{ kind: 'account', applianceId: id }} after={<MoveRecordCard applianceId={id} companyName={view.data.company.name} />} />;
 }

@@ -8,6 +8,7 @@ import { can } from '@shared/policy';
 import { LABELS } from '@shared/schemas/enums';
 import type { ReadingKey, VisitDto } from '@shared/schemas/visits';
 import { addYears } from '@shared/trade/iso-date';
+import { provenanceWords } from '@shared/transfers/provenance-words';
 import { READING_LABELS } from '@shared/visits/reading-labels';
 import { AmendForm } from './amend-form';
 import { Panel } from './inputs';
@@ -48,6 +49,11 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
       }
     >
       {justCompleted && <JustCompleted visit={visit} mayAmend={mayAmend} />}
+      {visit.recordedElsewhere && (
+        <Notice title="Recorded by another company">
+          {provenanceWords(visit.recordedElsewhere, me.data?.company?.timeZone ?? 'UTC')}. It stays as they signed it off; corrections are amendments.
+        </Notice>
+      )}
       <p className="flex flex-wrap items-center gap-2">
         <StatusBadge status="ok">Completed</StatusBadge>
         {visit.technicians.map((t) => t.name).join(', ')}

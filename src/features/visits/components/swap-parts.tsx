@@ -4,6 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import type { ComponentDto } from '@shared/schemas/records';
 import type { VisitDto } from '@shared/schemas/visits';
+import { SWAP_CAUSE_LABELS, SWAP_CAUSES, type SwapCause } from '@shared/stats/swap-causes';
 import { useSwapPart } from '../api/swap-part';
 import { Panel, TextInput } from './inputs';
 
@@ -66,6 +67,10 @@ function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; c
   const titleId = useId();
   const swap = useSwapPart();
   const [reason, setReason] = useState('');
+  // Asked every time, never preset: only a part that wore out or failed counts as the end of its service life.
+  const [cause, setCause] = useState<SwapCause | null>(null);
+  const [causeMissing, setCauseMissing] = useState(false);
+  const causeId = useId();
   const [newDescription, setNewDescription] = useState(component.description ?? '');
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();
@@ -92,8 +97,31 @@ function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; c
             {swap.error instanceof ApiError && swap.error.offline ? 'No signal. Try again when you have signal; nothing was recorded yet.' : swap.error.message}
           </Notice>
         )}
+        <fieldset className="flex flex-col gap-1" aria-describedby={causeMissing || details?.cause ? causeId : undefined}>
+          <legend className="text-sm font-semibold">Why did the old part come out?</legend>
+          {SWAP_CAUSES.map((c) => (
+            <label key={c} className="flex min-h-tap items-center gap-2 rounded-plate border-2 border-plate-line bg-plate-deep px-3">
+              <input
+                type="radio"
+                name="swap-cause"
+                value={c}
+                checked={cause === c}
+                onChange={() => {
+                  setCause(c);
+                  setCauseMissing(false);
+                }}
+              />
+              {SWAP_CAUSE_LABELS[c]}
+            </label>
+          ))}
+          {(causeMissing || details?.cause) && (
+            <p id={causeId} className="text-sm font-semibold text-due">
+              {details?.cause?.[0] ?? 'Say why the old part came out.'}
+            </p>
+          )}
+        </fieldset>
         <div className="flex flex-col gap-1">
-          <span className="text-sm font-semibold">Why (optional)</span>
+          <span className="text-sm font-semibold">What was wrong (optional)</span>
           <div className="flex flex-wrap gap-1" role="group" aria-label="Quick reasons">
             {REASONS.map((r) => (
               <button
@@ -113,12 +141,16 @@ function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; c
         <Button
           className="min-h-14 text-xl"
           disabled={swap.isPending}
-          onClick={() =>
+          onClick={() => {
+            if (!cause) {
+              setCauseMissing(true);
+              return;
+            }
             swap.mutate(
-              { visitId, componentId: component.id, reason: reason.trim() || null, newDescription: newDescription.trim() || null },
+              { visitId, componentId: component.id, cause, reason: reason.trim() || null, newDescription: newDescription.trim() || null },
               { onSuccess: onDone },
-            )
-          }
+            );
+          }}
         >
           {swap.isPending ? 'Recording…' : 'Replaced today'}
         </Button>
