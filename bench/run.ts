@@ -1,6 +1,6 @@
 /**
  * `npm run bench [-- --db lifeplate_bench_100k --growth-db lifeplate_bench_10k --quick --no-client --crew 200
- * --crew-seconds 60 --no-crew --crew-only --import-only --bookings-only]`: boots the app on a bench database (see `npm run bench:data`), measures the
+ * --crew-seconds 60 --no-crew --crew-only --import-only --bookings-only --service-life-only]`: boots the app on a bench database (see `npm run bench:data`), measures the
  * figures in docs/performance.md and docs/reliability.md, prints a table and writes bench/results/<date>.json.
  */
 import path from 'node:path';
@@ -25,6 +25,7 @@ async function main() {
     'crew-only': 'boolean',
     'import-only': 'boolean',
     'bookings-only': 'boolean',
+    'service-life-only': 'boolean',
   });
   const log = (line: string) => console.log(`[bench] ${line}`);
   const database = typeof args.db === 'string' ? args.db : benchDbName(100_000);
@@ -40,7 +41,7 @@ async function main() {
       databaseUrl: databaseUrlOn(server.serverUrl, database),
       growthDatabaseUrl: growth,
       quick: Boolean(args.quick),
-      client: !args['no-client'] && !args['crew-only'] && !args['import-only'] && !args['bookings-only'],
+      client: !args['no-client'] && !args['crew-only'] && !args['import-only'] && !args['bookings-only'] && !args['service-life-only'],
       crew:
         args['no-crew'] ? null
         : args.crew || args['crew-seconds'] ? { technicians: positiveInt('crew', args.crew, 200), seconds: positiveInt('crew-seconds', args['crew-seconds'], 60) }
@@ -48,6 +49,7 @@ async function main() {
       crewOnly: Boolean(args['crew-only']),
       importOnly: Boolean(args['import-only']),
       bookingsOnly: Boolean(args['bookings-only']),
+      serviceLifeOnly: Boolean(args['service-life-only']),
       outDir: typeof args.out === 'string' ? args.out : path.join(HERE, 'results'),
       log,
     });

@@ -24,6 +24,7 @@ import { measureClientHalf } from './client-half';
 import { crewRows, FULL_CREW, QUICK_CREW, type CrewScale } from './crew-figures';
 import { importRows } from './import-figure';
 import { bookingRows } from './booking-figures';
+import { serviceLifeRows } from './service-life-figures';
 
 export type RunOptions = {
   databaseUrl: string;
@@ -44,6 +45,8 @@ export type RunOptions = {
   importOnly?: boolean;
   /** Only the booking figures (written to <date>-bookings.json). */
   bookingsOnly?: boolean;
+  /** Only the learned service-life figures (written to <date>-service-life.json). */
+  serviceLifeOnly?: boolean;
 };
 
 const S3_BUCKET = 'lifeplate-bench';
@@ -89,6 +92,11 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
           figures.push(...(await bookingRows(run, scale)));
           return;
         }
+        if (opts.serviceLifeOnly) {
+          await warmUp(run, scale);
+          figures.push(...(await serviceLifeRows(run, scale)));
+          return;
+        }
         log('Warming up…');
         await warmUp(run, scale);
         log('Latency at fixed rates (timeline, search, due, stock)…');
@@ -98,6 +106,8 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
         figures.push(await tagRow(run, scale));
         log('Bookings: week board, round with load list, insert…');
         figures.push(...(await bookingRows(run, scale)));
+        log('Learned service life: one part type\'s fleet curve…');
+        figures.push(...(await serviceLifeRows(run, scale)));
         log('Throughput at 50 connections, then pgbench on the same SQL…');
         figures.push(...(await throughputRows(run, scale)));
 
@@ -127,11 +137,11 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
       });
     }
 
-    if (!opts.crewOnly && !opts.bookingsOnly) {
+    if (!opts.crewOnly && !opts.bookingsOnly && !opts.serviceLifeOnly) {
       log('Import…');
       figures.push(...(await importRows({ databaseUrl: opts.databaseUrl, s3Endpoint: s3.endpoint, s3Bucket: S3_BUCKET }, scale, log)));
     }
-    if (!opts.crewOnly && !opts.importOnly && !opts.bookingsOnly) {
+    if (!opts.crewOnly && !opts.importOnly && !opts.bookingsOnly && !opts.serviceLifeOnly) {
       log('Photo pipeline…');
       const storage = createObjectStorage({ S3_ENDPOINT: s3.endpoint, S3_REGION: 'us-east-1', S3_BUCKET, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' });
       try {
@@ -172,7 +182,7 @@ export async function runBench(opts: RunOptions): Promise<{ figures: BenchFigure
   const print = opts.print ?? ((text: string) => console.log(text));
   print(`\n${formatTable(figures)}\n  (${SHARED_CORES_NOTE}: ${os.cpus().length} cores${opts.quick ? '; --quick: too short for real numbers' : ''})\n`);
   if (p) print(`Due query plan:\n${p.text}\n`);
-  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : opts.importOnly ? 'import' : opts.bookingsOnly ? 'bookings' : null, {
+  const file = writeResults(opts.outDir, opts.crewOnly ? 'crew' : opts.importOnly ? 'import' : opts.bookingsOnly ? 'bookings' : opts.serviceLifeOnly ? 'service-life' : null, {
     date: new Date().toISOString(),
     quick: opts.quick,
     crewOnly: Boolean(opts.crewOnly),

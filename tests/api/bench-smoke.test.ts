@@ -20,6 +20,8 @@ const SERVER_FIGURES = [
   'Week board, 25 technicians: p99',
   'Round with its load list: p99',
   'Booking (insert with the no-clash check): p50',
+  "Learned service life, one part type's fleet curve: p50",
+  "Learned service life, one part type's fleet curve: p99",
   'Timeline throughput',
   'pgbench, the same timeline SQL',
   'Timeline throughput / pgbench',
@@ -87,6 +89,8 @@ describe('bench smoke (1,000 appliances, --quick)', () => {
     expect(byName.get('Concurrent technicians: visits lost or duplicated')!.value).toBe(0);
     // Every timed booking was created, and removed again so the data set stays as generated.
     expect(byName.get('Booking (insert with the no-clash check): p50')!.note).not.toMatch(/not created/);
+    // The learned-life curve answered every request.
+    expect(byName.get("Learned service life, one part type's fleet curve: p99")!.note).not.toMatch(/failed/);
     const after = new pg.Client({ connectionString: databaseUrl });
     await after.connect();
     try {
