@@ -304,6 +304,25 @@ describe('receiving a record', () => {
     expect((await from.owner.post(`/api/record-transfers/${used.id}/withdraw`)).status).toBe(409);
   });
 
+  it('leaves out a photo whose bytes are gone from storage, and copies the rest', async () => {
+    const site = await insertSite(ctx.db, { companyId: sender.company.id, customerId: sender.customer.id });
+    const heater = await insertAppliance(ctx.db, { companyId: sender.company.id, siteId: site.id, kind: 'water_heater' });
+    const up = await from.owner
+      .post('/api/photos')
+      .field('applianceId', heater.id)
+      .field('kind', 'nameplate')
+      .field('homeownerVisible', 'true')
+      .attach('files', await jpeg(60), { filename: 'p.jpg', contentType: 'image/jpeg' });
+    expect(up.status).toBe(201);
+    const [stored] = await ctx.db.select().from(photos).where(eq(photos.applianceId, heater.id));
+    await ctx.storage.delete(stored!.displayKey);
+    const made = (await from.owner.post(`/api/appliances/${heater.id}/record-transfers`)).body as { code: string };
+    const res = await to.owner.post('/api/record-transfers/redeem').send({ code: made.code });
+    expect(res.status).toBe(201);
+    expect(res.body.counts.photos).toBe(0);
+    expect(await ctx.db.select().from(photos).where(eq(photos.applianceId, res.body.applianceId))).toHaveLength(0);
+  });
+
   it('lets only owners and managers receive; signed out is 401', async () => {
     const made = await makeCode();
     expect((await to.technician.post('/api/record-transfers/preview').send({ code: made.code })).status).toBe(403);

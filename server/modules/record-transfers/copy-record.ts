@@ -10,6 +10,13 @@ import type { TransferableRecord } from './read-transferable-record';
 
 export type CopyTarget = { companyId: string; actorId: string; transferId: string; senderName: string; receivedAt: Date; today: string; site: { id: string; customerId: string } | null };
 
+async function readIfStored(storage: ObjectStorage, key: string) {
+  return storage.get(key).catch((err: unknown) => {
+    if ((err as { name?: string }).name === 'NoSuchKey') return null;
+    throw err;
+  });
+}
+
 /**
  * Writes the copy in the receiving company, inside the redeeming transaction: new ids everywhere, links between the
  * copied rows kept (a swap's old and new part, a photo's visit and part), every row marked with the transfer it came from.
@@ -152,12 +159,12 @@ export async function copyRecord(tx: Tx, storage: ObjectStorage, r: Transferable
   for (const p of r.photos) {
     const base = `${companyId}/${applianceId}/${crypto.randomUUID()}`;
     const keys = { display: `${base}-display.jpg`, thumb: `${base}-thumb.jpg` };
-    for (const [from, key] of [
-      [p.displayKey, keys.display],
-      [p.thumbKey, keys.thumb],
-    ] as const) {
-      const object = await storage.get(from);
-      await storage.put(key, object.body, object.contentType ?? 'image/jpeg');
+    const objects = [];
+    for (const from of [p.displayKey, p.thumbKey]) objects.push(await readIfStored(storage, from));
+    // A photo whose bytes are gone from storage is left out rather than copied as a broken picture.
+    if (objects.some((o) => !o)) continue;
+    for (const [i, key] of [keys.display, keys.thumb].entries()) {
+      await storage.put(key, objects[i]!.body, objects[i]!.contentType ?? 'image/jpeg');
       written.push(key);
     }
     photoRows.push({
