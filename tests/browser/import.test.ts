@@ -62,6 +62,8 @@ describe('bringing a company\'s spreadsheet in (desktop)', () => {
     await page.getByRole('list', { name: 'Results' }).getByText(street).first().click();
     await page.waitForURL(/\/appliances\/[0-9a-f-]{36}$/);
     const applianceId = page.url().split('/').at(-1)!;
+    // History is folded below the record's first screen.
+    await page.getByRole('region', { name: 'History' }).locator('summary').click();
     await page.getByText(/Brought in from old-office-list\.csv on/).waitFor();
     await expect.poll(async () => page.getByText('(imported from old-office-list.csv)').count()).toBe(2);
     const stored = await db.select().from(visits).where(and(eq(visits.companyId, companyId), eq(visits.applianceId, applianceId)));

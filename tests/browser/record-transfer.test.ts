@@ -75,6 +75,8 @@ describe('moving a life record to another company', () => {
     await desk.getByRole('link', { name: 'Open the life record' }).click();
 
     await desk.getByText(`Recorded by another company (${fx.t.company.name}); imported Feb 3, 2027`, { exact: false }).waitFor();
+    // History is folded below the record's first screen.
+    await desk.getByRole('region', { name: 'History' }).locator('summary').click();
     await desk.getByText('(recorded by another company', { exact: false }).first().waitFor();
     expect(await desk.getByText('Office only: slow payer').count()).toBe(0);
     const [copy] = await db.select().from(appliances).where(eq(appliances.companyId, receiving.company.id));
