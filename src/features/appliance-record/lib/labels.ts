@@ -1,4 +1,5 @@
 import { formatCalendarDate, formatInstant } from '@shared/format/dates';
+import { formatBtuh } from '@shared/format/quantities';
 import { LABELS } from '@shared/schemas/enums';
 import type { ApplianceDto } from '@shared/schemas/records';
 import type { Status } from '@/components/ui/status-badge';
@@ -26,4 +27,4 @@ export const formatDate = (iso: string | null | undefined) => formatCalendarDate
 /** An instant on the company's clocks (the reader's own zone until the company is known). */
 export const formatDateTime = (iso: string, timeZone = Intl.DateTimeFormat().resolvedOptions().timeZone) => formatInstant(iso, timeZone);
 
-export const btuh = (n: number | null) => (n == null ? null : `${n.toLocaleString('en-US')} Btu/h`);
+export const btuh = (n: number | null) => (n == null ? null : formatBtuh(n));

@@ -1,3 +1,4 @@
+import { formatBtuh } from '@shared/format/quantities';
 import { describeGaugeGlassLevel, type CombustionAnalysis, type GaugeGlassAssessment, type ThermocoupleAssessment, type TradeFlag } from '@shared/trade/index';
 import { FlagList } from './readings/flag-list';
 
@@ -20,7 +21,7 @@ export function ServerResults({ results, title = 'Kept with the visit' }: { resu
     rows.push(['CO air-free', `${r.combustion.coAirFreePpm.toFixed(0)} ppm`]);
     rows.push(['Efficiency (HHV)', r.combustion.efficiencyPct == null ? 'not applicable' : `${r.combustion.efficiencyPct.toFixed(1)} %`]);
   }
-  if (r.gasInput) rows.push(['Gas input', `${Math.round(r.gasInput.inputBtuPerHour).toLocaleString('en-US')} Btu/h`]);
+  if (r.gasInput) rows.push(['Gas input', formatBtuh(r.gasInput.inputBtuPerHour)]);
   if (r.thermocouple) rows.push(['Thermocouple', r.thermocouple.reason]);
   if (r.gaugeGlass) rows.push(['Gauge glass', describeGaugeGlassLevel(r.gaugeGlass)]);
   if (r.lowWaterCutoff) rows.push(['Low-water cutoff', cutoffText(r.lowWaterCutoff)]);

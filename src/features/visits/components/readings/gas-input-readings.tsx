@@ -1,3 +1,4 @@
+import { formatBtuh } from '@shared/format/quantities';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { altitudeDerateNote, DEFAULT_HEATING_VALUE_BTU_PER_FT3, HEATING_VALUE_SOURCE } from '@shared/trade/index';
 import { ChoiceButtons, NumberField } from '../inputs';
@@ -48,7 +49,7 @@ export function GasInputReadings() {
       {r?.ok && (
         <div className="tabular rounded-plate border-2 border-iron bg-plate p-3" role="region" aria-label="Live gas input">
           <p className="text-xs font-semibold uppercase tracking-wide text-iron-muted">Live on this phone</p>
-          <p className="text-xl font-bold">{Math.round(r.value.inputBtuPerHour).toLocaleString('en-US')} Btu/h</p>
+          <p className="text-xl font-bold">{formatBtuh(r.value.inputBtuPerHour)}</p>
           <p className="text-sm">{r.value.cubicFeetPerHour.toFixed(1)} ft³/h</p>
           {r.value.rating && (
             <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">
