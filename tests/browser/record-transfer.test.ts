@@ -17,7 +17,7 @@ const DESKTOP = { viewport: { width: 1366, height: 900 } };
 describe('moving a life record to another company', () => {
   it('the homeowner makes a code; the new company looks it up, sees what it holds, copies it and reads the record marked as recorded elsewhere', async () => {
     const db = fx.server.ctx.db;
-    const site = await insertSite(db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street: '9 Coldharbour Lane', town: 'Ebbsworth' });
+    const site = await insertSite(db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street: '9 Tinderwick Lane', town: 'Ebbsworth' });
     const boiler = await insertAppliance(db, {
       companyId: fx.t.company.id,
       siteId: site.id,
@@ -69,7 +69,7 @@ describe('moving a life record to another company', () => {
     await desk.getByRole('button', { name: 'Look up the code' }).click();
     await desk.getByText(`Recorded by ${fx.t.company.name}.`).waitFor();
     expect(await desk.getByTestId('transfer-counts').textContent()).toContain('1 completed visit');
-    await desk.getByText(`A new customer: ${fx.t.customer.name}, 9 Coldharbour Lane, Ebbsworth`).waitFor();
+    await desk.getByText(`A new customer: ${fx.t.customer.name}, 9 Tinderwick Lane, Ebbsworth`).waitFor();
     await desk.getByRole('button', { name: 'Copy this record to our company' }).click();
     await desk.getByText('Record received').waitFor();
     await desk.getByRole('link', { name: 'Open the life record' }).click();
