@@ -31,7 +31,18 @@ export function serveClient(ctx: AppContext, clientDir: string) {
   router.use('/assets', express.static(path.join(clientDir, 'assets'), { immutable: true, maxAge: '1y', index: false }), (_req, res) => {
     res.status(404).end();
   });
-  router.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+  // The service worker, its manifest and the shell it precaches are checked on every visit, so a deploy reaches
+  // installed phones on their next start (the worker itself then offers "reload" to the technician).
+  const alwaysRevalidate = new Set(['sw.js', 'manifest.webmanifest', 'index.html']);
+  router.use(
+    express.static(clientDir, {
+      index: false,
+      maxAge: '1h',
+      setHeaders: (res, file) => {
+        if (alwaysRevalidate.has(path.basename(file))) res.setHeader('Cache-Control', 'no-cache');
+      },
+    }),
+  );
 
   /** Data the API would refuse (404, 410, 401, 403) is simply left out; the page then asks the API and shows why. */
   async function orNothing<T>(load: () => Promise<T>): Promise<T | undefined> {

@@ -1,12 +1,14 @@
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { NavLink, Outlet } from 'react-router-dom';
 import { useEffect, useState } from 'react';
 import { LogoMark } from '@/components/ui/logo-mark';
-import { useMe, useSignOut } from '@/lib/auth';
+import { useMe } from '@/lib/auth';
 import { ROLE_LABELS } from '@shared/schemas/roles';
 import { can } from '@shared/policy';
 import { useNewServiceRequestCount } from '@/features/service-requests/api/list-service-requests';
 import { navFor } from './nav';
 import { PhoneNav } from './phone-nav';
+import { OfflineBanner } from './offline/offline-banner';
+import { SignOutButton } from './sign-out-button';
 
 /** Dim follows the device's colour scheme until the user presses the button; that choice is kept on the device. */
 function useDimMode() {
@@ -27,8 +29,6 @@ function useDimMode() {
 
 export function AppShell() {
   const me = useMe();
-  const signOut = useSignOut();
-  const navigate = useNavigate();
   const [dim, setDim] = useDimMode();
   const principal = me.data?.principal;
   // The development outbox exists only beside the local mail fake, for the owner; /me says so.
@@ -66,16 +66,7 @@ export function AppShell() {
             >
               {dim ? '☀ Light' : '◐ Dim'}
             </button>
-            <button
-              type="button"
-              className="min-h-tap rounded-plate px-3 text-sm font-semibold hover:bg-header-soft"
-              onClick={async () => {
-                await signOut.mutateAsync();
-                navigate('/sign-in', { replace: true });
-              }}
-            >
-              Sign out
-            </button>
+            <SignOutButton className="min-h-tap rounded-plate px-3 text-sm font-semibold hover:bg-header-soft" />
           </div>
         </div>
         <nav aria-label="Main" className="mx-auto hidden max-w-5xl gap-1 overflow-x-auto px-2 pb-1 sm:flex sm:px-5">
@@ -107,6 +98,7 @@ export function AppShell() {
         </nav>
       </header>
       <main id="main" tabIndex={-1} className={`flex-1 focus:outline-none ${phoneNav ? 'pb-20 sm:pb-0' : ''}`}>
+        <OfflineBanner />
         <Outlet />
       </main>
       {phoneNav && <PhoneNav items={nav} extra={devLinks} />}

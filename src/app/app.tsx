@@ -1,21 +1,13 @@
-import { QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router-dom';
-import { useState } from 'react';
-import { createQueryClient } from '@/lib/query-client';
-import { seedPreloadedQueries } from '@/lib/preload';
 import type { AppRouter } from './router';
+import { UpdatePrompt } from './offline/update-prompt';
 
-function createSeededQueryClient() {
-  const queryClient = createQueryClient();
-  seedPreloadedQueries(queryClient);
-  return queryClient;
-}
-
-export function App({ router }: { router: AppRouter }) {
-  const [queryClient] = useState(createSeededQueryClient);
+export function App({ router, queryClient }: { router: AppRouter; queryClient: QueryClient }) {
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />
+      <UpdatePrompt />
     </QueryClientProvider>
   );
 }

@@ -96,6 +96,13 @@ export function appRoutes(): RouteObject[] {
             return { element: <HomePage /> };
           },
         },
+        {
+          path: 'waiting',
+          lazy: async () => {
+            const { WaitingPage } = await import('./pages/waiting');
+            return { element: <WaitingPage /> };
+          },
+        },
         guardedPage('team', 'records:read', async () => (await import('@/features/team/components/team-page')).TeamPage),
         guardedPage('settings', 'company:settings', async () => (await import('@/features/company/components/company-settings-page')).CompanySettingsPage),
         guardedPage('appliances/new', 'records:write', async () => (await import('@/features/customers/components/new-appliance-page')).NewAppliancePage),

@@ -2,6 +2,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { MeDto } from '@shared/schemas/me';
+import { endSession } from '@/lib/offline/offline-session';
 
 export async function getMe(): Promise<MeDto | null> {
   const me = await api<MeDto | { user: null }>('/me');
@@ -36,6 +37,10 @@ export function useSignOut() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: signOut,
-    onSuccess: () => qc.clear(),
+    // Nothing of this person stays on the phone: the screens' cache, the saved records, the outbox and the drafts.
+    onSuccess: async () => {
+      qc.clear();
+      await endSession();
+    },
   });
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_CHECKLISTS } from '../../server/modules/checklists/default-checklists';
-import { requiredReadingsFor } from '../../server/modules/checklists/required-readings';
+import { requiredReadingsFor } from '../../shared/visits/required-readings';
 import { checklistTemplateInput } from '../../shared/schemas/records';
 
 describe('seeded checklist templates', () => {

@@ -7,7 +7,7 @@ import { addDays, addYears, daysBetween } from '../../../shared/trade/iso-date';
 import { COMPONENT_TYPES, formatSpec } from '../../../shared/trade/component-types';
 import { resultsToStore, keyReadings } from '../../modules/visits/visit-results';
 import { findDefaultChecklist } from '../../modules/checklists/default-checklists';
-import { requiredReadingsFor } from '../../modules/checklists/required-readings';
+import { requiredReadingsFor } from '../../../shared/visits/required-readings';
 import { ATTENTION_NOTES, demoFindings, demoReadings } from './demo-readings';
 import { partSlotsFor, type DemoApplianceShape, type PartSlot } from './demo-parts';
 import type { DemoClock } from './demo-clock';

@@ -16,7 +16,7 @@ import { swapPart, type SwapFields } from './visit-swaps';
 import { visitsRepository, type VisitRow } from './visits.repository';
 import { lockDraft, type Member } from './visit-lock';
 import { findTemplateFor } from '../checklists/checklists.repository';
-import { requiredReadingsFor } from '../checklists/required-readings';
+import { requiredReadingsFor } from '../../../shared/visits/required-readings';
 import { queueVisitReportMail } from '../visit-reports/visit-reports.service';
 
 type StartFields = z.output<typeof visitStartInput>;

@@ -1,6 +1,7 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { ApplianceRecordDto } from '@shared/schemas/records';
+import type { ApplianceRecordDto, Page, TimelineEventDto } from '@shared/schemas/records';
+import type { TimelineKind } from '@shared/schemas/enums';
 
 /**
  * `/appliances/:id` and everything shown under one appliance. Every key starts with `applianceKeys.all`, so
@@ -19,3 +20,17 @@ export const applianceKeys = {
 export const getApplianceRecord = (id: string) => api<ApplianceRecordDto>(`/appliances/${encodeURIComponent(id)}`);
 export const applianceRecordQueryOptions = (id: string) => queryOptions({ queryKey: applianceKeys.record(id), queryFn: () => getApplianceRecord(id) });
 export const useApplianceRecord = (id: string) => useQuery(applianceRecordQueryOptions(id));
+
+const TIMELINE_PAGE_SIZE = 20;
+
+export const getTimeline = (id: string, kind: TimelineKind | undefined, before: string | undefined) =>
+  api<Page<TimelineEventDto>>(`/appliances/${id}/timeline`, { query: { kind, before, limit: TIMELINE_PAGE_SIZE } });
+
+/** The record's history, newest first; the round saves its first page for offline use. */
+export const timelineQueryOptions = (id: string, kind?: TimelineKind) =>
+  infiniteQueryOptions({
+    queryKey: applianceKeys.timeline(id, kind ?? 'all'),
+    queryFn: ({ pageParam }) => getTimeline(id, kind, pageParam),
+    initialPageParam: undefined as string | undefined,
+    getNextPageParam: (last) => last.nextCursor ?? undefined,
+  });

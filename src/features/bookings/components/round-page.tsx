@@ -1,14 +1,15 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { BOOKING_STATUS_LABELS, type BookingDto, type LoadListDto } from '@shared/schemas/bookings';
+import { BOOKING_STATUS_LABELS, type BookingDto, type LoadListDto, type RoundDto } from '@shared/schemas/bookings';
 import { todayInTimeZone } from '@shared/dates';
-import { formatCalendarDate } from '@shared/format/dates';
+import { formatCalendarDate, formatClockTime } from '@shared/format/dates';
 import { addDays } from '@shared/trade/iso-date';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
 import { useMe } from '@/lib/auth';
+import { useSavedForOffline } from '@/lib/offline/use-saved-for-offline';
 import { useRound } from '../api/get-round';
 import { NoAccessForm } from './no-access-form';
 
@@ -40,11 +41,32 @@ export function RoundPage() {
         </Notice>
       ) : (
         <>
+          <SavedForOffline round={round.data} updatedAt={round.dataUpdatedAt} timeZone={me.data?.company?.timeZone} />
           {round.data.bookings.length === 0 ? <p>Nothing booked for this day.</p> : round.data.bookings.map((b) => <BookingCard key={b.id} booking={b} />)}
           <LoadList list={round.data.loadList} />
         </>
       )}
     </Page>
+  );
+}
+
+/** What this phone holds for a basement with no signal, and from when. */
+function SavedForOffline({ round, updatedAt, timeZone }: { round: RoundDto; updatedAt: number; timeZone?: string }) {
+  const ids = [...new Set(round.bookings.flatMap((b) => b.appliances.map((a) => a.id)))];
+  const { saved, online } = useSavedForOffline(ids);
+  const at = formatClockTime(new Date(updatedAt), timeZone);
+  if (!online) {
+    return (
+      <p role="status" className="rounded-plate bg-iron px-3 py-2 font-semibold text-plate" data-saved-for-offline>
+        No signal: showing what was saved at {at}.
+      </p>
+    );
+  }
+  if (ids.length === 0) return null;
+  return (
+    <p role="status" className="text-sm font-semibold" data-saved-for-offline>
+      Saved for offline: {saved === 1 ? '1 record' : `${saved} records`}, updated {at}.
+    </p>
   );
 }
 

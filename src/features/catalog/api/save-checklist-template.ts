@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { api } from '@/lib/api-client';
 import type { ChecklistTemplateDto, checklistTemplateInput } from '@shared/schemas/records';
-import { checklistTemplatesQueryOptions } from './list-checklist-templates';
+import { checklistTemplatesQueryOptions } from '@/lib/resources/checklist-templates';
 
 export type ChecklistTemplateBody = z.output<typeof checklistTemplateInput>;
 

@@ -5,7 +5,7 @@ import { Card } from '@/components/ui/card';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Spinner } from '@/components/ui/page';
-import { useChecklistTemplates } from '../api/list-checklist-templates';
+import { useChecklistTemplates } from '@/lib/resources/checklist-templates';
 import { ChecklistTemplateEditor } from './checklist-template-editor';
 
 export function ChecklistTemplatesSection() {

@@ -2,7 +2,10 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { VisitDto } from '@shared/schemas/visits';
 
-export const getVisit = (id: string) => api<VisitDto>(`/visits/${id}`);
+import { locallyStartedVisit } from './visit-outbox';
+
+/** A visit started with no signal is answered from the outbox until the server has it (it would say 404 till then). */
+export const getVisit = async (id: string) => locallyStartedVisit(id) ?? api<VisitDto>(`/visits/${id}`);
 
 export const visitQueryOptions = (id: string) =>
   queryOptions({

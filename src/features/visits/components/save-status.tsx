@@ -9,6 +9,7 @@ const TEXT: Record<SyncStatus, { icon: string; text: string; cls: string }> = {
   conflict: { icon: '!', text: 'Saved on this phone — not sent', cls: 'bg-due text-white' },
   error: { icon: '!', text: 'Saved on this phone — not sent', cls: 'bg-due text-white' },
   completed: { icon: '✓', text: 'Visit completed', cls: 'bg-ok text-white' },
+  'finished-offline': { icon: '▣', text: 'Finished on this phone — will send when signal returns', cls: 'bg-soon text-black' },
 };
 
 /** Always visible at the bottom of the screen, where the thumb is. */

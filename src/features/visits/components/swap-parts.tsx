@@ -6,13 +6,18 @@ import type { ComponentDto } from '@shared/schemas/records';
 import type { VisitDto } from '@shared/schemas/visits';
 import { SWAP_CAUSE_LABELS, SWAP_CAUSES, type SwapCause } from '@shared/stats/swap-causes';
 import { useSwapPart } from '../api/swap-part';
+import { queuedOf } from '../api/visit-outbox';
+import { useOutbox } from '@/lib/offline/offline-session';
 import { Panel, TextInput } from './inputs';
 
 const REASONS = ['tip swollen', 'would not hold the pilot', 'glass etched', 'leaking', 'worn', 'failed test'];
 
 export function SwapParts({ visit, components, onSwapped }: { visit: VisitDto; components: ComponentDto[] | undefined; onSwapped: (v: VisitDto) => void }) {
   const [picked, setPicked] = useState<ComponentDto | null>(null);
-  const current = (components ?? []).filter((c) => !c.removedOn);
+  const waiting = queuedOf(useOutbox().snapshot.entries, visit.id, 'part-swap');
+  const waitingIds = new Set(waiting.map((e) => (e.request.body as { componentId?: string }).componentId));
+  // A part already swapped on this phone (waiting to send) is not offered again.
+  const current = (components ?? []).filter((c) => !c.removedOn && !waitingIds.has(c.id));
   return (
     <Panel title="Swap a part">
       {visit.swaps.length > 0 && (
@@ -21,6 +26,15 @@ export function SwapParts({ visit, components, onSwapped }: { visit: VisitDto; c
             <li key={s.id} className="rounded-plate bg-ok-soft px-3 py-2 font-semibold text-ok">
               ✓ {s.typeLabel} replaced{s.reason ? ` · ${s.reason}` : ''}
               {s.newDescription ? ` · new: ${s.newDescription}` : ''}
+            </li>
+          ))}
+        </ul>
+      )}
+      {waiting.length > 0 && (
+        <ul aria-label="Swapped on this phone, waiting to send" className="flex flex-col gap-1">
+          {waiting.map((e) => (
+            <li key={e.seq} className="rounded-plate bg-soon-soft px-3 py-2 font-semibold">
+              ▣ {e.label} · {e.state === 'refused' ? `not accepted: ${e.refusal?.message ?? ''}` : 'waiting for signal'}
             </li>
           ))}
         </ul>
@@ -54,7 +68,7 @@ export function SwapParts({ visit, components, onSwapped }: { visit: VisitDto; c
           component={picked}
           onClose={() => setPicked(null)}
           onDone={(v) => {
-            onSwapped(v);
+            if (v) onSwapped(v);
             setPicked(null);
           }}
         />
@@ -63,7 +77,7 @@ export function SwapParts({ visit, components, onSwapped }: { visit: VisitDto; c
   );
 }
 
-function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; component: ComponentDto; onClose: () => void; onDone: (v: VisitDto) => void }) {
+function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; component: ComponentDto; onClose: () => void; onDone: (v: VisitDto | null) => void }) {
   const titleId = useId();
   const swap = useSwapPart();
   const [reason, setReason] = useState('');
@@ -147,7 +161,14 @@ function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; c
               return;
             }
             swap.mutate(
-              { visitId, componentId: component.id, cause, reason: reason.trim() || null, newDescription: newDescription.trim() || null },
+              {
+                visitId,
+                label: `${component.typeLabel} replaced${reason.trim() ? ` · ${reason.trim()}` : ''}`,
+                componentId: component.id,
+                cause,
+                reason: reason.trim() || null,
+                newDescription: newDescription.trim() || null,
+              },
               { onSuccess: onDone },
             );
           }}

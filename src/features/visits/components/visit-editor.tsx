@@ -47,8 +47,9 @@ export function VisitEditor({
   photos?: ReactNode;
   onCompleting: (visitId: string | null) => void;
 }) {
-  const { sync, snapshot } = useDraftSync(initial);
   const appliance = useApplianceRecord(visit.applianceId);
+  const where = appliance.data ? `${appliance.data.customer.name}, ${appliance.data.site.street}` : LABELS.visitType[visit.type];
+  const { sync, snapshot } = useDraftSync(initial, `Finish the visit · ${where}`);
   const [prefs] = useUnitPrefs();
   const tolerancePct = useMe().data?.company?.underFiringTolerancePct ?? null;
   const qc = useQueryClient();
@@ -108,7 +109,8 @@ export function VisitEditor({
     try {
       const done = await sync.complete();
       // The record behind the visit changed (parts, due dates, history); this screen now shows the completed visit.
-      void qc.invalidateQueries({ queryKey: applianceKeys.record(done.applianceId) });
+      // With no signal (done is null) the visit is finished on this phone and waits in the outbox instead.
+      if (done) void qc.invalidateQueries({ queryKey: applianceKeys.record(done.applianceId) });
     } catch (e) {
       onCompleting(null);
       const err = e instanceof Error ? e : new Error('Not completed.');

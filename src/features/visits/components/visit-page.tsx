@@ -5,7 +5,10 @@ import { Notice } from '@/components/ui/notice';
 import { Page, Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import type { VisitDto } from '@shared/schemas/visits';
+import { useOutbox } from '@/lib/offline/offline-session';
 import { useVisit } from '../api/get-visit';
+import { queuedOf } from '../api/visit-outbox';
+import { FinishedOnPhone, RefusedFinish } from './finished-on-phone';
 import { CompletedVisit } from './completed-visit';
 import { VisitEditor } from './visit-editor';
 
@@ -15,6 +18,8 @@ export type VisitSlots = { photos?: (applianceId: string, visitId: string) => Re
 export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   const { id = '' } = useParams();
   const visit = useVisit(id);
+  const { outbox, snapshot: box } = useOutbox();
+  const [queuedFinish] = queuedOf(box.entries, id, 'visit-complete');
   /** The visit this screen has just signed off, so the completed view can say so and what happens next. */
   const [completedHere, setCompletedHere] = useState<string | null>(null);
   useEffect(() => {
@@ -33,7 +38,17 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
     );
   }
   if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} justCompleted={completedHere === visit.data.id} />;
-  return <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} onCompleting={setCompletedHere} />;
+  if (queuedFinish?.state === 'waiting' && outbox) return <FinishedOnPhone visit={visit.data} entry={queuedFinish} onSendNow={outbox.retryNow} />;
+  return (
+    <>
+      {queuedFinish && outbox && (
+        <div className="mx-auto max-w-3xl px-3 pt-3 sm:px-6">
+          <RefusedFinish entry={queuedFinish} onCorrect={() => void outbox.discard(queuedFinish.seq)} />
+        </div>
+      )}
+      <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} onCompleting={setCompletedHere} />
+    </>
+  );
 }
 
 /** Holds on to the first server copy: the draft engine starts from it once, later copies only feed the display. */

@@ -1,4 +1,5 @@
 import type { DraftFields } from './draft-fields';
+import { draftStorageKeyPrefix } from '@/lib/offline/draft-keys';
 
 /** What this phone keeps per visit, so nothing typed is lost to a dead battery, a reload or a basement with no signal. */
 export type StoredDraft = {
@@ -12,7 +13,7 @@ export type StoredDraft = {
   editedAt: number;
 };
 
-export const draftStorageKey = (visitId: string) => `lifeplate:visit-draft:${visitId}`;
+export const draftStorageKey = (visitId: string) => `${draftStorageKeyPrefix}${visitId}`;
 
 export function loadDraft(visitId: string): StoredDraft | null {
   try {

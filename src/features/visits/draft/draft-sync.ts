@@ -3,7 +3,7 @@ import type { VisitDraftInput, VisitDto } from '@shared/schemas/visits';
 import { fieldsFromVisit, payloadKey, rebase, toPayload, type DraftFields, type FieldErrors } from './draft-fields';
 import { clearDraft, loadDraft, saveDraft } from './draft-storage';
 
-export type SyncStatus = 'saved' | 'pending' | 'saving' | 'queued' | 'invalid' | 'conflict' | 'error' | 'completed';
+export type SyncStatus = 'saved' | 'pending' | 'saving' | 'queued' | 'invalid' | 'conflict' | 'error' | 'completed' | 'finished-offline';
 
 export type SyncSnapshot = {
   fields: DraftFields;
@@ -18,6 +18,10 @@ export type DraftTransport = {
   put: (visitId: string, body: VisitDraftInput) => Promise<VisitDto>;
   get: (visitId: string) => Promise<VisitDto>;
   complete: (visitId: string, body: VisitDraftInput) => Promise<VisitDto>;
+  /** True while earlier writes of this visit wait in the outbox (a visit started with no signal): saves wait too. */
+  waitingBehind?: (visitId: string) => boolean;
+  /** Puts the completion in the outbox when there is no signal; `rebase` lets a 409 on replay be redone. */
+  queueComplete?: (visitId: string, body: VisitDraftInput, rebase: { base: DraftFields; fields: DraftFields }) => Promise<void>;
 };
 
 const SAVE_AFTER_MS = 1000;
@@ -128,14 +132,18 @@ export class DraftSync {
     this.schedule(0);
   };
 
-  /** Sends the final state with the complete call; the local copy is cleared only once the server has it. */
-  async complete(): Promise<VisitDto> {
+  /**
+   * Sends the final state with the complete call; the local copy is cleared only once the server has it. With no
+   * signal the completion goes to the outbox instead and this resolves to null: the visit is finished on this phone.
+   */
+  async complete(): Promise<VisitDto | null> {
     clearTimeout(this.timer);
     await this.inFlight;
     const send = () => this.transport.complete(this.visitId, toPayload(this.fields, this.baseRevision));
     let done: VisitDto;
     try {
       try {
+        if (this.transport.waitingBehind?.(this.visitId)) throw new ApiError(0, 'offline', 'Earlier changes of this visit are still waiting to send.');
         done = await send();
       } catch (e) {
         if (!isConflict(e)) throw e;
@@ -143,6 +151,14 @@ export class DraftSync {
         done = await send();
       }
     } catch (e) {
+      if (isRetryable(e) && this.transport.queueComplete) {
+        await this.transport.queueComplete(this.visitId, toPayload(this.fields, this.baseRevision), { base: this.base, fields: this.fields });
+        // The draft stays in localStorage until the server has the visit: a refused completion reopens with everything.
+        this.stopped = true;
+        this.status = 'finished-offline';
+        this.emit();
+        return null;
+      }
       // Not completed: the draft carries on saving as before.
       if (this.dirty) this.schedule(0);
       throw e;
@@ -175,6 +191,10 @@ export class DraftSync {
       this.dirty = false;
       this.setStatus('saved');
       this.persist();
+      return;
+    }
+    if (this.transport.waitingBehind?.(this.visitId)) {
+      this.afterFailure(new ApiError(0, 'offline', 'Waiting for earlier changes of this visit to send.'), conflictRetry);
       return;
     }
     this.setStatus('saving');
