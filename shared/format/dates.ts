@@ -70,7 +70,3 @@ function relativeFormat(locale: string) {
 /** "Jan 6, 2027 · in 35 days": a due date with how far off it is. */
 export const formatDueDate = (isoDate: string, today: string, locale = COMPANY_LOCALE) =>
   `${formatCalendarDate(isoDate, { locale })} · ${relativeDays(isoDate, today, locale)}`;
-
-/** Text worded by the server with yyyy-mm-dd dates inside ("since last inspection 2026-01-06"), made readable. */
-export const withReadableDates = (text: string, locale = COMPANY_LOCALE) =>
-  text.replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (iso) => formatCalendarDate(iso, { locale }));

@@ -21,6 +21,7 @@ const STATUS: Record<DueItemStatus, { look: Status; word: string }> = {
   replace_now: { look: 'due', word: 'Replace now' },
   overdue: { look: 'due', word: 'Overdue' },
   due_soon: { look: 'soon', word: 'Due soon' },
+  later: { look: 'info', word: 'Later' },
 };
 
 export function DueListPage() {
