@@ -71,10 +71,6 @@ function relativeFormat(locale: string) {
 export const formatDueDate = (isoDate: string, today: string, locale = COMPANY_LOCALE) =>
   `${formatCalendarDate(isoDate, { locale })} · ${relativeDays(isoDate, today, locale)}`;
 
-/** Text worded by the server with yyyy-mm-dd dates inside ("since last inspection 2026-01-06"), made readable. */
-export const withReadableDates = (text: string, locale = COMPANY_LOCALE) =>
-  text.replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (iso) => formatCalendarDate(iso, { locale }));
-
 /** "7:42 AM": a time of day on the company's clocks (the phone's own zone when the company's is not known yet). */
 export function formatClockTime(iso: string | Date, timeZone?: string, locale = COMPANY_LOCALE): string {
   const f = format(locale, { hour: 'numeric', minute: '2-digit', ...(timeZone ? { timeZone } : {}) });

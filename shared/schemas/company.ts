@@ -3,6 +3,11 @@ import { nonEmptyPatch, requiredText, storableText } from './common';
 import { MEMBER_ROLES } from './roles';
 import { bookingMinutesSetting, type BookingMinutesSetting } from './bookings';
 
+/** The company's "due soon" window: due dates from today through this many days ahead read "Due soon". */
+export const DUE_SOON_DAYS_DEFAULT = 60;
+export const DUE_SOON_DAYS_MIN = 7;
+export const DUE_SOON_DAYS_MAX = 180;
+
 const timeZones = new Set(Intl.supportedValuesOf('timeZone'));
 
 export const companySettingsInput = nonEmptyPatch(
@@ -18,6 +23,12 @@ export const companySettingsInput = nonEmptyPatch(
       .min(1, 'At least 1 %.')
       .max(50, 'At most 50 %.')
       .nullable()
+      .optional(),
+    dueSoonDays: z
+      .number('Give a number of days.')
+      .int('Use whole days.')
+      .min(DUE_SOON_DAYS_MIN, `At least ${DUE_SOON_DAYS_MIN} days.`)
+      .max(DUE_SOON_DAYS_MAX, `At most ${DUE_SOON_DAYS_MAX} days.`)
       .optional(),
     /** Window lengths by appliance kind; the kinds named replace the stored ones, the rest stay. */
     bookingMinutes: z
@@ -38,6 +49,8 @@ export type CompanyDto = {
   timeZone: string;
   today: string;
   underFiringTolerancePct: number | null;
+  /** "Due soon" covers due dates from today through this many days ahead. */
+  dueSoonDays: number;
   /** Every kind, the company's own minutes over the defaults. */
   bookingMinutes: BookingMinutesSetting;
 };

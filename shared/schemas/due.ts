@@ -71,7 +71,8 @@ export type DueQuery = z.input<typeof dueQuery>;
 
 export const dueStockQuery = z.object({ withinDays });
 
-export type DueItemStatus = 'overdue' | 'due_soon' | 'replace_now';
+/** 'later': inside the list's window but beyond the company's "due soon" window (companies.due_soon_days). */
+export type DueItemStatus = 'overdue' | 'due_soon' | 'later' | 'replace_now';
 
 export type DueItemDto = {
   componentId: string;

@@ -17,9 +17,6 @@ export type ReminderStatus = (typeof REMINDER_STATUSES)[number];
 export const REMINDER_TRIGGERS = ['schedule', 'office'] as const;
 export type ReminderTrigger = (typeof REMINDER_TRIGGERS)[number];
 
-/** How far ahead of a part's due date its reminder goes out; annual service is reminded once it is due. */
-export const PART_REMINDER_LEAD_DAYS = 30;
-
 export const reminderApplianceParams = z.object({ applianceId: z.uuid('Not a valid appliance id.') });
 
 export const remindersListQuery = z.object({

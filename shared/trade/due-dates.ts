@@ -1,3 +1,4 @@
+import { formatCalendarDate } from '../format/dates';
 import { COMPONENT_TYPE_CODES, requireComponentType, type ComponentType } from './component-types';
 import { addMonths, dayNumberToIsoDate, isoDateToDayNumber } from './iso-date';
 import { SERVICE_LIFE_APPLIANCE_KINDS, type ServiceLifeApplianceKind } from './service-life';
@@ -64,7 +65,9 @@ export function computeComponentDue(input: ComponentDueInput): ComponentDue {
 
   // A part with no install date of its own is taken to be original with the appliance.
   const installed = ownInstall ?? applianceInstall;
-  const installedFrom = ownInstall ? `installed ${ownInstall}` : applianceInstall ? `original with the appliance, installed ${applianceInstall}` : null;
+  // Dates in reasons are written for people ("Jan 6, 2026"), never as ISO strings.
+  const day = (iso: string) => formatCalendarDate(iso);
+  const installedFrom = ownInstall ? `installed ${day(ownInstall)}` : applianceInstall ? `original with the appliance, installed ${day(applianceInstall)}` : null;
 
   let replacementDueOn: string | null = null;
   let replacementWhy = '';
@@ -84,7 +87,7 @@ export function computeComponentDue(input: ComponentDueInput): ComponentDue {
     const base = [lastInspected, installed].filter((d): d is string => d !== null).sort().at(-1) ?? null;
     inspectionDueOn = base ? addMonths(base, rule.inspectionIntervalMonths) : dayNumberToIsoDate(today);
     inspectionWhy = base
-      ? `every ${rule.inspectionIntervalMonths} months since ${base === lastInspected ? `last inspection ${base}` : installedFrom}`
+      ? `every ${rule.inspectionIntervalMonths} months since ${base === lastInspected ? `last inspection ${day(base)}` : installedFrom}`
       : 'no inspection or install date on record';
   }
 
@@ -123,7 +126,11 @@ export function computeComponentDue(input: ComponentDueInput): ComponentDue {
   const daysLeft = isoDateToDayNumber('dueOn', next.dueOn) - today;
   const status: DueStatus = daysLeft < 0 ? 'overdue' : daysLeft <= horizonDays ? 'due_soon' : 'ok';
   const when =
-    daysLeft < 0 ? `was due ${next.dueOn} (${-daysLeft} days ago)` : daysLeft === 0 ? `is due today (${next.dueOn})` : `is due ${next.dueOn}, in ${daysLeft} days`;
+    daysLeft < 0
+      ? `was due ${day(next.dueOn)} (${-daysLeft} days ago)`
+      : daysLeft === 0
+        ? `is due today (${day(next.dueOn)})`
+        : `is due ${day(next.dueOn)}, in ${daysLeft} days`;
   const what = next.kind === 'replacement' ? 'Replacement' : 'Inspection';
   return {
     nextDue: { kind: next.kind, dueOn: next.dueOn },

@@ -28,6 +28,7 @@ const OLD_LEARNED = {
 
 // The column itself is already in the test database; the test runs the statement that converts the rules.
 const [, convert] = readFileSync('drizzle/0021_due_rules_learned_planning_age.sql', 'utf8').split('--> statement-breakpoint');
+const READABLE_REASONS = readFileSync('drizzle/0025_due_reasons_readable_dates.sql', 'utf8').split('--> statement-breakpoint');
 
 type Tx = Parameters<Parameters<typeof ctx.db.transaction>[0]>[0];
 
@@ -81,8 +82,13 @@ async function scenario(db: Tx) {
   const [untouched] = await db.select().from(components).where(eq(components.id, parts[1].part.id));
   expect(untouched).toMatchObject({ dueOn: '2025-04-02', dueKind: 'replacement' });
 
+  // The later migration 0025 (run after it in order) says the stored date in words, as the due engine now writes it.
+  for (const s of READABLE_REASONS) await db.execute(sql.raw(s));
+  const [readable] = await db.select().from(components).where(eq(components.id, parts[0].part.id));
+  expect(readable.dueReason).toBe('every 12 months since last inspection Oct 14, 2025');
+
   // The due engine, run again over the migrated part, finds nothing to change.
   await recomputeDueForAppliance(db, t.company.id, parts[0].appliance.id, { today: '2026-12-03' });
   const [again] = await db.select().from(components).where(eq(components.id, parts[0].part.id));
-  expect(again).toMatchObject({ dueOn: migrated.dueOn, dueKind: migrated.dueKind, dueReason: migrated.dueReason });
+  expect(again).toMatchObject({ dueOn: migrated.dueOn, dueKind: migrated.dueKind, dueReason: readable.dueReason });
 }

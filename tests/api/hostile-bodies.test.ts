@@ -196,7 +196,7 @@ beforeAll(async () => {
     'post /appliances/:id/components': { typeCode: 'thermocouple', spec: { lengthIn: 30 }, installedOn: '2023-04-01', note: 'spare' },
     'patch /catalog/component-types/:code': { label: 'Thermocouple', active: true },
     'put /checklist-templates/:id': { name: 'Annual check', items: [{ key: 'burners', section: 'Burner', label: 'Clean the burners', readings: ['co'] }] },
-    'patch /company': { phone: '555-0100', timeZone: 'America/Chicago', underFiringTolerancePct: 10 },
+    'patch /company': { phone: '555-0100', timeZone: 'America/Chicago', underFiringTolerancePct: 10, dueSoonDays: 45 },
     'patch /members/:id': { role: 'technician' },
     'put /due-rules/:id': {
       inspectionIntervalMonths: rule.inspectionIntervalMonths,

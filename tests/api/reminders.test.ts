@@ -62,7 +62,8 @@ describe('the scheduled reminder run', () => {
     b.lapsed = await boiler(id, c.agnes, { annualMonthsAgo: [26, 14] });
     b.partDue = await boiler(id, c.agnes, { annualMonthsAgo: [2] });
     await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'thermocouple', spec: { lengthIn: 24 }, dueOn: addDays(today, 10), dueKind: 'replacement' });
-    await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'thermopile', spec: { lengthIn: 30 }, dueOn: addDays(today, 60), dueKind: 'replacement' });
+    await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'thermopile', spec: { lengthIn: 30 }, dueOn: addDays(today, 61), dueKind: 'replacement' });
+    // ^ one day past the company's "due soon" window (60 days unless the company sets its own): no reminder yet.
     // Due for inspection only: that is what the annual service is for, so no reminder of its own.
     await insertComponent(ctx.db, { companyId: id, applianceId: b.partDue.id, typeCode: 'gauge_glass', dueOn: addDays(today, 3), dueKind: 'inspection' });
     b.removed = await boiler(id, c.agnes, { annualMonthsAgo: [30], status: 'removed' });

@@ -230,6 +230,23 @@ describe('PUT /api/visits/:id/draft', () => {
 });
 
 describe('POST /api/visits/:id/complete', () => {
+  it('a step marked "needs attention" without a note leaves a note on the part that says the visit\'s date in words', async () => {
+    const { appliance, parts } = await boiler(ctx.db, t);
+    const visit = await start(as.technician, appliance.id);
+    const res = await as.technician.post(`/api/visits/${visit.id}/complete`).send(
+      fullCompletion(visit, {
+        checklist: [{ key: 'gauge_glass', mark: 'needs_attention', note: '' }],
+        readings: { combustion: goodCombustion, lowWaterCutoff: { type: 'float', trippedWith: 'water_visible', burnerStopped: true } },
+        outcome: 'left_operating',
+      }),
+    );
+    expect(res.status).toBe(200);
+    const glass = await storedComponent(parts.gaugeGlass.id);
+    expect(glass.conditionFailed).toBe(true);
+    expect(glass.conditionNote).toMatch(/: needs attention \(visit of [A-Z][a-z]{2} \d{1,2}, \d{4}\)\.$/);
+    expect(glass.conditionNote).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+  });
+
   it('signs off and writes parts, due dates, timeline and audit together', async () => {
     const { appliance, parts } = await boiler(ctx.db, t);
     const visit = await start(as.technician, appliance.id);

@@ -23,10 +23,14 @@ describe('reminder e-mails on screen', () => {
     // The owner: only they may open the development outbox.
     await signInAsMember(page, fx.server.baseUrl, fx.t.owner.user.email);
     await page.goto(`${fx.server.baseUrl}/due`);
+    // The due list opens on its due parts; the jump bar leads to the annual services.
+    await page.getByRole('navigation', { name: 'Due list sections' }).getByRole('link', { name: /^Annual services \d+$/ }).click();
+    await page.waitForURL(/\/due#annual-services$/);
     const row = page.locator('tr', { hasText: owner.name }).first();
     await row.getByRole('button', { name: 'Send reminder' }).click();
-    await row.getByText(/Reminder sent \d{4}-\d{2}-\d{2}/).waitFor();
+    await row.getByText(/Reminder sent [A-Z][a-z]{2} \d{1,2}, \d{4}/).waitFor();
     expect(await row.getByRole('button', { name: 'Send reminder' }).count()).toBe(0);
+    await page.getByRole('navigation', { name: 'Due list sections' }).getByRole('link', { name: /^Reminders sent \d+$/ }).click();
     const recent = page.locator('section', { has: page.getByRole('heading', { name: 'Reminders sent' }) });
     await recent.locator('tr', { hasText: owner.name }).getByText('Sent', { exact: true }).waitFor();
 

@@ -1,5 +1,5 @@
 import { describe, expect, it, vi, beforeAll, afterAll } from 'vitest';
-import { daysFromToday, formatCalendarDate, formatDueDate, formatInstant, relativeDays, withReadableDates } from '../../shared/format/dates';
+import { daysFromToday, formatCalendarDate, formatDueDate, formatInstant, relativeDays } from '../../shared/format/dates';
 import { formatBtuh } from '../../shared/format/quantities';
 import { todayInTimeZone } from '../../shared/dates';
 
@@ -49,15 +49,6 @@ describe('relative days', () => {
     expect(relativeDays('2026-12-03', today)).toBe('tomorrow');
     expect(relativeDays('2026-11-29', today)).toBe('3 days ago');
     expect(formatDueDate('2027-01-06', today)).toBe('Jan 6, 2027 · in 35 days');
-  });
-});
-
-describe('withReadableDates', () => {
-  it('rewrites every yyyy-mm-dd inside a server sentence and leaves other numbers alone', () => {
-    expect(withReadableDates('every 12 months since last inspection 2026-01-06 (installed 2004-03-31), 35 days')).toBe(
-      'every 12 months since last inspection Jan 6, 2026 (installed Mar 31, 2004), 35 days',
-    );
-    expect(withReadableDates('no dates here, serial 2026-0106')).toBe('no dates here, serial 2026-0106');
   });
 });
 

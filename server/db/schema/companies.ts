@@ -1,4 +1,5 @@
-import { jsonb, pgEnum, pgTable, smallint, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { check, jsonb, pgEnum, pgTable, smallint, text, timestamp, uuid, uniqueIndex, index } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { createdAt, id, updatedAt } from './columns';
 import { MEMBER_ROLES } from '../../../shared/schemas/roles';
@@ -15,9 +16,11 @@ export const companies = pgTable('companies', {
   underFiringTolerancePct: smallint('under_firing_tolerance_pct'),
   /** A new booking's window by appliance kind, in minutes (shared/schemas/bookings.ts DEFAULT_BOOKING_MINUTES when unset). */
   bookingMinutes: jsonb('booking_minutes').$type<Partial<BookingMinutesSetting>>().notNull().default({}),
+  /** "Due soon" covers due dates from today through this many days ahead (shared/schemas/company.ts DUE_SOON_DAYS_*). */
+  dueSoonDays: smallint('due_soon_days').notNull().default(60),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
-});
+}, (t) => [check('companies_due_soon_days_range', sql`${t.dueSoonDays} between 7 and 180`)]);
 
 export const memberships = pgTable(
   'memberships',

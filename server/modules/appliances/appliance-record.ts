@@ -2,7 +2,7 @@ import type { DbOrTx } from '../../db/client';
 import { notFound } from '../../lib/http-error';
 import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/records';
 import { nextBookingOf } from '../bookings/next-booking';
-import { companyToday } from '../due/company-today';
+import { companyDueClock } from '../due/company-today';
 import { customersRepository } from '../customers/customers.repository';
 import { toCustomerDto } from '../customers/customers.service';
 import { sitesRepository } from '../sites/sites.repository';
@@ -45,9 +45,9 @@ function toApplianceDto(a: ApplianceRow, replaced: ApplianceRow | null): Applian
 export async function loadApplianceRecord(db: DbOrTx, companyId: string, applianceId: string): Promise<ApplianceRecordDto> {
   const appliance = await appliancesRepository.find(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
-  const [site, today, replaced, componentRows, lastVisit, draft, nextBooking, transferredFrom] = await Promise.all([
+  const [site, { today, dueSoonDays }, replaced, componentRows, lastVisit, draft, nextBooking, transferredFrom] = await Promise.all([
     sitesRepository.find(db, companyId, appliance.siteId),
-    companyToday(db, companyId),
+    companyDueClock(db, companyId),
     appliancesRepository.findReplaced(db, companyId, applianceId),
     appliancesRepository.components(db, companyId, applianceId),
     appliancesRepository.latestVisit(db, companyId, applianceId, 'completed'),
@@ -58,7 +58,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
   const customer = site && (await customersRepository.find(db, companyId, site.customerId));
   if (!site || !customer) throw notFound('Appliance');
 
-  const componentDtos = componentRows.map((r) => toComponentDto(r.component, r.catalogLabel, today));
+  const componentDtos = componentRows.map((r) => toComponentDto(r.component, r.catalogLabel, today, dueSoonDays));
   const due = componentDtos
     .filter((c) => c.due && !c.removedOn)
     .map((c) => ({ componentId: c.id, typeLabel: c.typeLabel, kind: c.due!.kind, dueOn: c.due!.dueOn, status: c.due!.status, reason: c.due!.reason }))

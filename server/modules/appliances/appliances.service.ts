@@ -5,7 +5,7 @@ import type { appliancePatch, applianceInput, componentInput, replaceApplianceIn
 import { LABELS } from '../../../shared/schemas/enums';
 import type { Principal } from '../../../shared/schemas/roles';
 import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
+import { companyDueClock, companyToday } from '../due/company-today';
 import { recomputeDueForAppliance } from '../due/due.repository';
 import { sitesRepository } from '../sites/sites.repository';
 import { appendTimelineEvent, listTimeline } from '../timeline/timeline.repository';
@@ -136,13 +136,13 @@ export function appliancesService(ctx: AppContext) {
         const appliance = await appliancesRepository.find(tx, companyId, id, { forUpdate: true });
         if (!appliance) throw notFound('Appliance');
         if (appliance.status === 'removed') throw conflict('This appliance was removed; its record is kept as it was.');
-        const today = await companyToday(tx, companyId);
+        const { today, dueSoonDays } = await companyDueClock(tx, companyId);
         const parts = await componentRows(tx, { companyId, actorId: userId, today }, [input], () => '');
         throwIfErrors(parts.errors);
         const [component] = await appliancesRepository.insertComponents(tx, [{ ...parts.rows[0], applianceId: id }]);
         await recomputeDueForAppliance(tx, companyId, id);
         const row = (await appliancesRepository.components(tx, companyId, id)).find((r) => r.component.id === component.id)!;
-        const added = toComponentDto(row.component, row.catalogLabel, today);
+        const added = toComponentDto(row.component, row.catalogLabel, today, dueSoonDays);
         await appendTimelineEvent(tx, {
           companyId,
           applianceId: id,

@@ -3,11 +3,9 @@ import { describeStoredDue } from '../due/due-status';
 import { typeLabelFor } from '../due/type-label';
 import type { ComponentRow } from './appliances.repository';
 
-/** "Due soon" covers the next 30 days, the window the due list uses. */
-export const DUE_HORIZON_DAYS = 30;
-
-export function toComponentDto(c: ComponentRow, catalogLabel: string | null, today: string): ComponentDto {
-  const described = c.removedOn || !c.dueOn || !c.dueKind ? null : describeStoredDue(c, today, DUE_HORIZON_DAYS);
+/** `dueSoonDays` is the company's "due soon" window (companies.due_soon_days). */
+export function toComponentDto(c: ComponentRow, catalogLabel: string | null, today: string, dueSoonDays: number): ComponentDto {
+  const described = c.removedOn || !c.dueOn || !c.dueKind ? null : describeStoredDue(c, today, dueSoonDays);
   return {
     id: c.id,
     typeCode: c.typeCode,

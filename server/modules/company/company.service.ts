@@ -6,7 +6,7 @@ import type { CompanyDto, CompanySettingsInput } from '../../../shared/schemas/c
 import { DEFAULT_BOOKING_MINUTES, type BookingMinutesSetting } from '../../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.repository';
 
-type CompanyRow = { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null; bookingMinutes: Partial<BookingMinutesSetting> };
+type CompanyRow = { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null; dueSoonDays: number; bookingMinutes: Partial<BookingMinutesSetting> };
 
 const toDto = (c: CompanyRow): CompanyDto => ({
   id: c.id,
@@ -15,6 +15,7 @@ const toDto = (c: CompanyRow): CompanyDto => ({
   timeZone: c.timeZone,
   today: todayInTimeZone(c.timeZone),
   underFiringTolerancePct: c.underFiringTolerancePct,
+  dueSoonDays: c.dueSoonDays,
   bookingMinutes: { ...DEFAULT_BOOKING_MINUTES, ...c.bookingMinutes },
 });
 

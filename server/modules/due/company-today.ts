@@ -9,3 +9,10 @@ export async function companyToday(db: DbOrTx, companyId: string): Promise<strin
   if (!company) throw notFound('Company');
   return todayInTimeZone(company.timeZone);
 }
+
+/** The company's today and its "due soon" window (companies.due_soon_days): what decides "due soon" for it. */
+export async function companyDueClock(db: DbOrTx, companyId: string): Promise<{ today: string; dueSoonDays: number }> {
+  const company = await companyRepository.findById(db, companyId);
+  if (!company) throw notFound('Company');
+  return { today: todayInTimeZone(company.timeZone), dueSoonDays: company.dueSoonDays };
+}

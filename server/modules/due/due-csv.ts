@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import type { DueItemDto } from '../../../shared/schemas/due';
 
-const STATUS_WORDS = { replace_now: 'replace now', overdue: 'overdue', due_soon: 'due soon' } as const;
+const STATUS_WORDS = { replace_now: 'replace now', overdue: 'overdue', due_soon: 'due soon', later: 'later' } as const;
 
 /** The due list as CSV for a spreadsheet; papaparse quotes commas, quotes and line breaks in names and notes. */
 export function dueItemsToCsv(items: DueItemDto[]): string {

@@ -8,7 +8,13 @@ import { sql, type SQL } from 'drizzle-orm';
  * describeStoredDue (due-status.ts) rebuilds the full sentence for a given today.
  *
  * `today` is the company's date, worked out by the caller.
+ *
+ * Dates in due_reason are written for people, as formatCalendarDate (shared/format/dates.ts) writes them in the
+ * company locale (en-US): to_char's 'Mon FMDD, YYYY' gives "Jan 6, 2026" (English month names: no TM prefix, so
+ * lc_time does not change them). The parity test in tests/api/due.test.ts compares the two.
  */
+const READABLE_DATE = sql.raw(`'Mon FMDD, YYYY'`);
+
 export function recomputeDueStatement(scope: SQL, today: string): SQL {
   return sql`
     with base as (
@@ -20,8 +26,8 @@ export function recomputeDueStatement(scope: SQL, today: string): SQL {
         r.inspection_interval_months as interval_months,
         coalesce(c.installed_on, a.installed_on) as installed,
         case
-          when c.installed_on is not null then 'installed ' || to_char(c.installed_on, 'YYYY-MM-DD')
-          when a.installed_on is not null then 'original with the appliance, installed ' || to_char(a.installed_on, 'YYYY-MM-DD')
+          when c.installed_on is not null then 'installed ' || to_char(c.installed_on, ${READABLE_DATE})
+          when a.installed_on is not null then 'original with the appliance, installed ' || to_char(a.installed_on, ${READABLE_DATE})
         end as installed_from,
         c.last_inspected_on as last_inspected,
         ${today}::date as today
@@ -64,7 +70,7 @@ export function recomputeDueStatement(scope: SQL, today: string): SQL {
         case
           when inspect_base is null then 'no inspection or install date on record'
           when inspect_base = last_inspected then
-            'every ' || interval_months || ' months since last inspection ' || to_char(inspect_base, 'YYYY-MM-DD')
+            'every ' || interval_months || ' months since last inspection ' || to_char(inspect_base, ${READABLE_DATE})
           else 'every ' || interval_months || ' months since ' || installed_from
         end as inspection_why
       from dated

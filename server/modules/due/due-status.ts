@@ -1,4 +1,5 @@
 import { daysBetween } from '../../../shared/trade/iso-date';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import type { DueStatus } from '../../../shared/trade/due-dates';
 
 export type StoredDue = { dueOn: string | null; dueKind: 'inspection' | 'replacement' | null; dueReason: string | null; conditionFailed: boolean };
@@ -13,7 +14,11 @@ export function describeStoredDue(due: StoredDue, today: string, horizonDays: nu
   const daysLeft = daysBetween(today, due.dueOn);
   const status: DueStatus = daysLeft < 0 ? 'overdue' : daysLeft <= horizonDays ? 'due_soon' : 'ok';
   const when =
-    daysLeft < 0 ? `was due ${due.dueOn} (${-daysLeft} days ago)` : daysLeft === 0 ? `is due today (${due.dueOn})` : `is due ${due.dueOn}, in ${daysLeft} days`;
+    daysLeft < 0
+      ? `was due ${formatCalendarDate(due.dueOn)} (${-daysLeft} days ago)`
+      : daysLeft === 0
+        ? `is due today (${formatCalendarDate(due.dueOn)})`
+        : `is due ${formatCalendarDate(due.dueOn)}, in ${daysLeft} days`;
   const what = due.dueKind === 'replacement' ? 'Replacement' : 'Inspection';
   return { status, reason: `${what} ${when}: ${due.dueReason}.` };
 }

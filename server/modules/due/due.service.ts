@@ -6,7 +6,7 @@ import type { DueItemDto, DueRuleDto, DueStockDto, DueStockRow } from '../../../
 import type { Page } from '../../../shared/schemas/records';
 import type { ApplianceKind } from '../../../shared/schemas/enums';
 import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from './company-today';
+import { companyDueClock, companyToday } from './company-today';
 import { describeStoredDue } from './due-status';
 import { dueRepository, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from './due.repository';
 import { typeLabelFor } from './type-label';
@@ -64,7 +64,7 @@ export function dueService(ctx: AppContext) {
       companyId: string,
       q: { withinDays: number; type?: string; applianceKind?: ApplianceKind; technicianId?: string; town?: string; after?: string; limit: number },
     ): Promise<Page<DueItemDto>> {
-      const today = await companyToday(ctx.db, companyId);
+      const { today, dueSoonDays } = await companyDueClock(ctx.db, companyId);
       const rows = await dueRepository.listDue(ctx.db, {
         ...q,
         companyId,
@@ -75,7 +75,7 @@ export function dueService(ctx: AppContext) {
       const page = rows.slice(0, q.limit);
       const items = page.map((r): DueItemDto => {
         const c = r.component;
-        const described = describeStoredDue(c, today, q.withinDays)!;
+        const described = describeStoredDue(c, today, dueSoonDays)!;
         return {
           componentId: c.id,
           typeCode: c.typeCode,
@@ -84,7 +84,7 @@ export function dueService(ctx: AppContext) {
           description: c.description,
           dueOn: c.dueOn!,
           dueKind: c.dueKind!,
-          status: described.status === 'ok' ? 'due_soon' : described.status,
+          status: described.status === 'ok' ? 'later' : described.status,
           reason: described.reason,
           appliance: r.appliance,
           site: { ...r.site, assignedTechnicianName: r.technicianName },

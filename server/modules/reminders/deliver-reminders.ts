@@ -2,6 +2,7 @@ import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import type { ReminderStatus } from '../../../shared/schemas/reminders';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import { companyRepository } from '../company/company.repository';
 import { recordAudit } from '../audit/audit.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
@@ -92,7 +93,7 @@ async function finish(tx: Tx, companyId: string, row: Pending, outcome: Outcome,
     sentAt: outcome.status === 'sent' ? now : null,
     attempts: outcome.status === 'sent' || outcome.status === 'failed' ? row.attempts + 1 : row.attempts,
   });
-  const what = row.kind === 'annual_service' ? 'Annual service' : `Part due (${row.part_label ?? 'part'}, ${row.due_on})`;
+  const what = row.kind === 'annual_service' ? 'Annual service' : `Part due (${row.part_label ?? 'part'}, ${formatCalendarDate(row.due_on)})`;
   await appendTimelineEvent(tx, {
     companyId,
     applianceId: row.appliance_id,

@@ -1,5 +1,6 @@
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 import { LABELS } from '../../../shared/schemas/enums';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import type { ReminderKind } from '../../../shared/schemas/reminders';
 
 export type ReminderLine = {
@@ -25,8 +26,7 @@ export const SAFETY_LINE =
   'and call your gas supplier or emergency services from outside. Work on gas and oil appliances is for licensed professionals, ' +
   "following the manufacturer's instructions and local codes: please do not attempt it yourself.";
 
-const longDate = (iso: string) =>
-  new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', year: 'numeric', month: 'long', day: 'numeric' }).format(new Date(`${iso}T00:00:00Z`));
+const longDate = (iso: string) => formatCalendarDate(iso, { long: true });
 
 function applianceWords(a: ReminderLine['appliance']): string {
   return `${LABELS.applianceKind[a.kind]} (${LABELS.fuel[a.fuel].toLowerCase()}) at ${a.street}, ${a.town}`;

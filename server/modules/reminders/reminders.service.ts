@@ -1,9 +1,9 @@
 import type { AppContext } from '../../context';
 import { HttpError, badRequest, conflict, notFound } from '../../lib/http-error';
 import { addDays } from '../../../shared/trade/iso-date';
-import { PART_REMINDER_LEAD_DAYS, type ReminderDto, type RemindersPageDto } from '../../../shared/schemas/reminders';
+import { type ReminderDto, type RemindersPageDto } from '../../../shared/schemas/reminders';
 import { companyRepository } from '../company/company.repository';
-import { companyToday } from '../due/company-today';
+import { companyDueClock, companyToday } from '../due/company-today';
 import { typeLabelFor } from '../due/type-label';
 import { remindersRepository as repo, type NewReminder, type ReminderRow } from './reminders.repository';
 import { deliverReminders } from './deliver-reminders';
@@ -39,10 +39,12 @@ export function toReminderDto({ reminder: r, customerName }: { reminder: Reminde
  */
 export async function runReminders(ctx: AppContext, options: { companyId: string; today?: string }) {
   const { companyId } = options;
-  const today = options.today ?? (await companyToday(ctx.db, companyId));
+  const clock = await companyDueClock(ctx.db, companyId);
+  const today = options.today ?? clock.today;
+  // Parts are reminded once they come inside the company's "due soon" window (companies.due_soon_days).
   const [annual, parts] = await Promise.all([
     repo.annualDue(ctx.db, companyId, today),
-    repo.partsDue(ctx.db, companyId, addDays(today, PART_REMINDER_LEAD_DAYS)),
+    repo.partsDue(ctx.db, companyId, addDays(today, clock.dueSoonDays)),
   ]);
   const rows: NewReminder[] = [
     ...annual.map((a): NewReminder => ({ companyId, applianceId: a.appliance_id, customerId: a.customer_id, kind: 'annual_service', partKey: '', dueOn: a.due_on, trigger: 'schedule' })),

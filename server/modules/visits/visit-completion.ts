@@ -1,5 +1,6 @@
 import type { Tx } from '../../db/client';
 import { LABELS } from '../../../shared/schemas/enums';
+import { formatCalendarDate } from '../../../shared/format/dates';
 import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { componentTypesForChecklistKey } from './checklist-components';
 import { keyReadings, type VisitResults } from './visit-results';
@@ -23,7 +24,7 @@ function findingsByType(visit: VisitRow, readings: ReadingsInput, results: Visit
   };
   for (const item of visit.checklist) {
     if (item.mark !== 'done' && item.mark !== 'needs_attention') continue;
-    const failed = item.mark === 'needs_attention' ? item.note.trim() || `${item.label}: needs attention (visit of ${visit.visitedOn}).` : null;
+    const failed = item.mark === 'needs_attention' ? item.note.trim() || `${item.label}: needs attention (visit of ${formatCalendarDate(visit.visitedOn)}).` : null;
     for (const type of componentTypesForChecklistKey(item.key)) note(type, failed);
   }
   if (results.thermocouple) {

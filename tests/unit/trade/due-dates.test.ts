@@ -48,7 +48,7 @@ describe('computeComponentDue', () => {
   it('overdue', () => {
     const result = due({ lastInspectedOn: '2023-12-01' });
     expect(result).toMatchObject({ nextDue: { dueOn: '2024-12-01' }, status: 'overdue' });
-    expect(result.reason).toMatch(/104 days ago/);
+    expect(result.reason).toBe('Inspection was due Dec 1, 2024 (104 days ago): every 12 months since last inspection Dec 1, 2023.');
   });
 
   it('a failed condition means replace now, whatever the age', () => {
@@ -73,6 +73,8 @@ describe('computeComponentDue', () => {
       status: 'due_soon',
     });
     expect(result.reason).toMatch(/original with the appliance/);
+    // Dates are said in words (formatCalendarDate, en-US), never as ISO strings.
+    expect(result.reason).toBe('Replacement is due Jun 1, 2025, in 31 days: replacement age 10 years (original with the appliance, installed Jun 1, 2015).');
     // a circulator fitted later ages from its own date
     expect(due({ rule: companyTenYears, installedOn: '2020-01-01', today: '2025-05-01' }).replacementDueOn).toBe('2030-01-01');
   });

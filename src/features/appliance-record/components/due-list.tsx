@@ -1,6 +1,6 @@
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { ApplianceRecordDto } from '@shared/schemas/records';
-import { formatDueDate, withReadableDates } from '@shared/format/dates';
+import { formatDueDate } from '@shared/format/dates';
 import { groupDue, type DueGroup } from '../lib/group-due';
 import { dueStatus } from '../lib/labels';
 import { Section } from './section';
@@ -56,7 +56,7 @@ function DueLine({ group, today }: { group: DueGroup; today: string }) {
         <ul className="mb-2 flex flex-col gap-1 pl-3 text-sm">
           {group.items.map((d) => (
             <li key={`${d.componentId}-${d.kind}`}>
-              <span className="font-semibold">{d.typeLabel}</span> · {withReadableDates(d.reason)}
+              <span className="font-semibold">{d.typeLabel}</span> · {d.reason}
             </li>
           ))}
         </ul>

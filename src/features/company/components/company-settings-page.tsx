@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import type { CompanyDto } from '@shared/schemas/company';
+import { DUE_SOON_DAYS_MAX, DUE_SOON_DAYS_MIN, type CompanyDto } from '@shared/schemas/company';
+import { formatCalendarDate } from '@shared/format/dates';
 import { LABELS, type ApplianceKind } from '@shared/schemas/enums';
 import { Page, Spinner } from '@/components/ui/page';
 import { Card } from '@/components/ui/card';
@@ -20,7 +21,7 @@ export function CompanySettingsPage() {
 
 function CompanySettingsForm({ company }: { company: CompanyDto }) {
   const update = useUpdateCompany();
-  const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone, tolerance: company.underFiringTolerancePct?.toString() ?? '' });
+  const [form, setForm] = useState({ name: company.name, phone: company.phone, timeZone: company.timeZone, tolerance: company.underFiringTolerancePct?.toString() ?? '', dueSoonDays: String(company.dueSoonDays) });
   const kinds = Object.keys(company.bookingMinutes) as ApplianceKind[];
   const [minutes, setMinutes] = useState<Record<ApplianceKind, string>>(
     Object.fromEntries(kinds.map((k) => [k, String(company.bookingMinutes[k])])) as Record<ApplianceKind, string>,
@@ -29,14 +30,16 @@ function CompanySettingsForm({ company }: { company: CompanyDto }) {
 
   async function submit(e: FormEvent) {
     e.preventDefault();
-    const { tolerance, ...rest } = form;
+    const { tolerance, dueSoonDays: soon, ...rest } = form;
     const underFiringTolerancePct = tolerance.trim() === '' ? null : Number(tolerance);
+    // An empty or non-numeric entry is sent as typed, so the server's field message says what is wrong.
+    const dueSoonDays = soon.trim() === '' || Number.isNaN(Number(soon)) ? soon : Number(soon);
     const bookingMinutes = Object.fromEntries(kinds.map((k) => [k, Number(minutes[k])]));
-    await update.mutateAsync({ ...rest, underFiringTolerancePct, bookingMinutes }).catch(() => {});
+    await update.mutateAsync({ ...rest, underFiringTolerancePct, dueSoonDays: dueSoonDays as number, bookingMinutes }).catch(() => {});
   }
 
   return (
-    <Page title="Company settings" subtitle={`Today is ${company.today} in ${company.timeZone}.`}>
+    <Page title="Company settings" subtitle={`Today is ${formatCalendarDate(company.today, { long: true })} in ${company.timeZone}.`}>
       <Card>
         <form onSubmit={submit} noValidate className="flex max-w-md flex-col gap-4">
           {update.isSuccess && <Notice title="Saved">Your changes are saved.</Notice>}
@@ -60,6 +63,14 @@ function CompanySettingsForm({ company }: { company: CompanyDto }) {
             value={form.tolerance}
             onChange={(e) => setForm({ ...form, tolerance: e.target.value })}
             error={details?.underFiringTolerancePct}
+          />
+          <TextField
+            label='"Due soon" window (days)'
+            inputMode="numeric"
+            hint={`Parts and inspections due within this many days read "Due soon" on records and the due list; parts due for replacement within it are reminded by e-mail. ${DUE_SOON_DAYS_MIN} to ${DUE_SOON_DAYS_MAX} days.`}
+            value={form.dueSoonDays}
+            onChange={(e) => setForm({ ...form, dueSoonDays: e.target.value })}
+            error={details?.dueSoonDays}
           />
           <fieldset className="flex flex-col gap-3">
             <legend className="text-sm font-semibold">Booking window by appliance (minutes)</legend>

@@ -1,6 +1,7 @@
 import { Button } from '@/components/ui/button';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ApiError } from '@/lib/api-client';
+import { formatCalendarDate } from '@shared/format/dates';
 import type { AnnualServiceDueItem } from '@shared/schemas/fleet';
 import type { ReminderDto } from '@shared/schemas/reminders';
 import { useSendAnnualReminder } from '../api/send-annual-reminder';
@@ -15,13 +16,13 @@ export function AnnualReminderCell({ item, reminder, canSend }: { item: AnnualSe
   const send = useSendAnnualReminder();
   const shown = send.data ?? reminder;
   if (item.customer.remindersOptOut) return <StatusBadge status="info">Opted out</StatusBadge>;
-  if (shown?.status === 'sent') return <StatusBadge status="ok">{`Reminder sent ${shown.sentAt?.slice(0, 10) ?? ''}`.trim()}</StatusBadge>;
+  if (shown?.status === 'sent') return <StatusBadge status="ok">{shown.sentAt ? `Reminder sent ${formatCalendarDate(shown.sentAt.slice(0, 10))}` : 'Reminder sent'}</StatusBadge>;
   if (!item.customer.email) return <span className="text-sm text-iron-muted">No e-mail on file</span>;
   return (
-    <div className="flex flex-col items-start gap-1">
+    <div className="flex items-center gap-2">
       {shown?.status === 'failed' && <StatusBadge status="soon">Not delivered yet</StatusBadge>}
       {canSend && (
-        <Button variant="secondary" disabled={send.isPending} onClick={() => send.mutate(item.applianceId)}>
+        <Button variant="secondary" className="lg:min-h-6 lg:py-0.5 lg:text-sm" disabled={send.isPending} onClick={() => send.mutate(item.applianceId)}>
           {send.isPending ? 'Sending…' : 'Send reminder'}
         </Button>
       )}

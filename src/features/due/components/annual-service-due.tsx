@@ -3,6 +3,7 @@ import { Card } from '@/components/ui/card';
 import { Spinner } from '@/components/ui/page';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { LABELS } from '@shared/schemas/enums';
+import { formatCalendarDate } from '@shared/format/dates';
 import { useMe } from '@/lib/auth';
 import { can } from '@shared/policy';
 import { bookingHref } from '@/lib/booking-link';
@@ -27,7 +28,7 @@ export function AnnualServiceDue() {
         <div className="overflow-x-auto">
           <table className="tabular w-full text-left text-sm">
             <thead>
-              <tr className="border-b-2 border-plate-line">
+              <tr className="border-b-2 border-plate-line whitespace-nowrap">
                 <th className="py-2 pr-3">Last annual service</th>
                 <th className="pr-3">Appliance</th>
                 <th className="pr-3">Customer</th>
@@ -38,28 +39,33 @@ export function AnnualServiceDue() {
             </thead>
             <tbody>
               {due.data.items.map((i) => (
-                <tr key={i.applianceId} className="border-b border-plate-line align-top">
-                  <td className="py-2 pr-3 whitespace-nowrap">{i.lastAnnualOn ?? <StatusBadge status="due">Never recorded</StatusBadge>}</td>
-                  <td className="pr-3">
-                    <Link className="font-semibold text-brass-dark underline" to={`/appliances/${i.applianceId}`}>
+                <tr key={i.applianceId} className="border-b border-plate-line whitespace-nowrap">
+                  <td className="py-1 pr-3">{i.lastAnnualOn ? formatCalendarDate(i.lastAnnualOn) : <StatusBadge status="due">Never recorded</StatusBadge>}</td>
+                  <td className="max-w-[22rem] truncate pr-3" title={`${i.street}, ${i.town}`}>
+                    <Link className="inline-flex min-h-tap items-center font-semibold text-brass-dark underline lg:min-h-6" to={`/appliances/${i.applianceId}`}>
                       {LABELS.applianceKind[i.kind]}, {LABELS.fuel[i.fuel].toLowerCase()}
                     </Link>
-                    <p className="text-xs text-iron-muted">
-                      {i.street}, {i.town}
-                    </p>
+                    <span className="text-iron-muted">
+                      {' '}
+                      · {i.street}, {i.town}
+                    </span>
                   </td>
                   <td className="pr-3">{i.customer.name}</td>
                   <td className="pr-3">
-                    {i.customer.phone && <p>{i.customer.phone}</p>}
-                    {i.customer.email && <p className="text-xs">{i.customer.email}</p>}
-                    {i.customer.remindersOptOut && <StatusBadge status="info">No reminders</StatusBadge>}
+                    {[i.customer.phone, i.customer.email].filter(Boolean).join(' · ')}
+                    {i.customer.remindersOptOut && (
+                      <>
+                        {' '}
+                        <StatusBadge status="info">No reminders</StatusBadge>
+                      </>
+                    )}
                   </td>
-                  <td className="py-2 pr-3">
+                  <td className="py-1 pr-3">
                     <AnnualReminderCell item={i} reminder={currentAnnualReminder(i, reminders.data?.items)} canSend={canSend} />
                   </td>
                   {canBook && (
-                    <td className="no-print py-2 pr-3">
-                      <Link className="inline-flex min-h-tap items-center font-semibold underline" to={bookingHref({ applianceIds: [i.applianceId], source: 'annual_service' })}>
+                    <td className="no-print py-1 pr-3">
+                      <Link className="inline-flex min-h-tap items-center font-semibold underline lg:min-h-6" to={bookingHref({ applianceIds: [i.applianceId], source: 'annual_service' })}>
                         Book<span className="sr-only"> the annual service at {i.street}</span>
                       </Link>
                     </td>

@@ -3,6 +3,7 @@ import { Card } from '@/components/ui/card';
 import { Spinner } from '@/components/ui/page';
 import { StatusBadge, type Status } from '@/components/ui/status-badge';
 import type { ReminderStatus } from '@shared/schemas/reminders';
+import { formatCalendarDate } from '@shared/format/dates';
 import { useReminders } from '../api/get-reminders';
 
 const STATUS: Record<ReminderStatus, { look: Status; word: string }> = {
@@ -26,7 +27,7 @@ export function RemindersSent() {
         <div className="overflow-x-auto">
           <table className="tabular w-full text-left text-sm">
             <thead>
-              <tr className="border-b-2 border-plate-line">
+              <tr className="border-b-2 border-plate-line whitespace-nowrap">
                 <th className="py-2 pr-3">When</th>
                 <th className="pr-3">Customer</th>
                 <th className="pr-3">About</th>
@@ -36,19 +37,19 @@ export function RemindersSent() {
             </thead>
             <tbody>
               {reminders.data.items.map((r) => (
-                <tr key={r.id} className="border-b border-plate-line align-top">
-                  <td className="py-2 pr-3 whitespace-nowrap">{(r.sentAt ?? r.createdAt).slice(0, 10)}</td>
+                <tr key={r.id} className="border-b border-plate-line whitespace-nowrap">
+                  <td className="py-1 pr-3">{formatCalendarDate((r.sentAt ?? r.createdAt).slice(0, 10))}</td>
                   <td className="pr-3">
                     {r.customerName}
-                    {r.toEmail && <p className="text-xs text-iron-muted">{r.toEmail}</p>}
+                    {r.toEmail && <span className="text-iron-muted"> · {r.toEmail}</span>}
                   </td>
                   <td className="pr-3">
-                    <Link className="font-semibold text-brass-dark underline" to={`/appliances/${r.applianceId}`}>
+                    <Link className="inline-flex min-h-tap items-center font-semibold text-brass-dark underline lg:min-h-6" to={`/appliances/${r.applianceId}`}>
                       {r.kind === 'annual_service' ? 'Annual service' : (r.partLabel ?? 'Part due')}
                     </Link>
-                    <p className="text-xs text-iron-muted">{r.trigger === 'office' ? 'Sent by the office' : 'Daily run'}</p>
+                    <span className="text-iron-muted"> · {r.trigger === 'office' ? 'sent by the office' : 'daily run'}</span>
                   </td>
-                  <td className="pr-3 whitespace-nowrap">{r.dueOn}</td>
+                  <td className="pr-3">{formatCalendarDate(r.dueOn)}</td>
                   <td className="pr-3">
                     <StatusBadge status={STATUS[r.status].look}>{STATUS[r.status].word}</StatusBadge>
                   </td>

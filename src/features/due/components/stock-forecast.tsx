@@ -1,6 +1,7 @@
 import { Card } from '@/components/ui/card';
 import { Spinner } from '@/components/ui/page';
 import type { DueStockRow } from '@shared/schemas/due';
+import { formatCalendarDate } from '@shared/format/dates';
 import { useDueStock } from '../api/get-due-stock';
 
 function StockList({ rows, empty }: { rows: DueStockRow[]; empty: string }) {
@@ -26,7 +27,7 @@ export function StockForecast({ withinDays }: { withinDays: number }) {
   if (stock.isPending) return <Spinner />;
   if (!stock.data) return null;
   return (
-    <Card title={`Stock forecast through ${stock.data.through}`}>
+    <Card title={`Stock forecast through ${formatCalendarDate(stock.data.through)}`}>
       <div className="grid gap-4 md:grid-cols-3">
         <div>
           <h3 className="mb-1 font-semibold">Parts to replace</h3>

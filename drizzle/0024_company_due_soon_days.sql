@@ -1,0 +1,2 @@
+ALTER TABLE "companies" ADD COLUMN "due_soon_days" smallint DEFAULT 60 NOT NULL;--> statement-breakpoint
+ALTER TABLE "companies" ADD CONSTRAINT "companies_due_soon_days_range" CHECK ("companies"."due_soon_days" between 7 and 180);
