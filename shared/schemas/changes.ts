@@ -33,5 +33,7 @@ export type ChangeDto = {
   details: string[];
   /** The amendment's reason or the entry's note, when it has one. */
   why: string | null;
+  /** The visit the change belongs to (a visit's own change, a part swap or a photo taken on it), else null. */
+  visit: { id: string; visitedOn: string } | null;
 };
 export type ChangesPageDto = { items: ChangeDto[]; nextCursor: string | null };

@@ -93,6 +93,8 @@ describe('GET /api/visits/:id/changes', () => {
     expect(outcome).toMatchObject({ who: t.manager.user.name, why: OUTCOME_REASON });
     expect(outcome.details).toContain('Changed the outcome from left operating to shut down as unsafe.');
     expect(co).toMatchObject({ who: t.manager.user.name, why: CO_REASON, details: ['Changed the CO reading from 50 ppm to 120 ppm.'] });
+    // The fixed clock's day in the company's zone (New York).
+    for (const i of items) expect(i.visit).toEqual({ id: visitId, visitedOn: '2026-11-18' });
     const completed = items.find((i) => i.what === 'Completed the visit')!;
     expect(completed).toMatchObject({ who: t.technician.user.name, details: ['Outcome: left operating.'], why: null });
 
@@ -159,6 +161,8 @@ describe('GET /api/appliances/:id/changes', () => {
     );
     const created = items.find((i) => i.what === 'Created the life record')!;
     expect(created.who).toBe(t.manager.user.name);
+    expect(created.visit).toBeNull();
+    expect(items.find((i) => i.what === 'Completed the visit')!.visit).toEqual({ id: visitId, visitedOn: '2026-11-18' });
     expect(items.find((i) => i.what === "Changed the record's location")!.who).toBe(t.technician.user.name);
     // No action or entity code reaches the words.
     for (const i of items) for (const words of [i.what, ...i.details]) expect(words).not.toMatch(/\b[a-z]+_[a-z_]+\b/);

@@ -102,6 +102,10 @@ describe('record of changes (desk, 1366 px)', () => {
     await recordChanges.locator(':scope > li').first().getByText('Amended the findings', { exact: true }).waitFor();
     await recordChanges.getByText(REASON).waitFor();
     await recordChanges.getByText('Created the life record', { exact: true }).waitFor();
+    // Each visit's change names its visit, in words, and opens it.
+    const visitLink = recordChanges.locator(':scope > li').first().getByRole('link', { name: /^Visit of / });
+    expect(await visitLink.getAttribute('href')).toBe(`/visits/${visitId}`);
+    expect(await visitLink.innerText()).not.toMatch(/\d{4}-\d{2}-\d{2}/);
     await context.close();
   });
 

@@ -9,6 +9,8 @@ export type ChangeRow = {
   entity_id: string;
   changes: Record<string, unknown> | null;
   who: string | null;
+  visit_id: string | null;
+  visited_on: string | null;
 };
 export type VisitOriginal = {
   id: string;
@@ -39,9 +41,12 @@ async function page(db: DbOrTx, companyId: string, about: SQL, q: { limit: numbe
     ? sql`and (l.created_at, l.id) < (select c.created_at, c.id from audit_log c where c.company_id = ${companyId} and c.id = ${q.cursor}::bigint)`
     : sql``;
   const result = await db.execute<ChangeRow>(sql`
-    select l.id::text as id, l.created_at as at, l.action, l.entity, l.entity_id, l.changes, u.name as who
+    select l.id::text as id, l.created_at as at, l.action, l.entity, l.entity_id, l.changes, u.name as who,
+      v.id::text as visit_id, v.visited_on::text as visited_on
     from audit_log l
     left join users u on u.id = l.actor_id
+    left join visits v on v.company_id = l.company_id
+      and v.id::text = (case when l.entity = 'visit' then l.entity_id else l.changes->>'visitId' end)
     where l.company_id = ${companyId} and (${about}) ${after}
     order by l.created_at desc, l.id desc
     limit ${q.limit + 1}`);

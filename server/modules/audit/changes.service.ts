@@ -37,7 +37,7 @@ async function toPage(db: DbOrTx, companyId: string, page: { items: ChangeRow[];
   const amended = await amendmentWords(db, companyId, page.items);
   const items: ChangeDto[] = page.items.map((r) => {
     const words = amended.get(r.id) ?? describeChange({ action: r.action, entity: r.entity, changes: r.changes });
-    return { id: r.id, at: r.at.toISOString(), who: r.who, ...words };
+    return { id: r.id, at: r.at.toISOString(), who: r.who, visit: r.visit_id && r.visited_on ? { id: r.visit_id, visitedOn: r.visited_on } : null, ...words };
   });
   return { items, nextCursor: page.nextCursor };
 }

@@ -3,7 +3,8 @@ import type { InfiniteData, UseInfiniteQueryResult } from '@tanstack/react-query
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/lib/auth';
-import { formatInstant } from '@shared/format/dates';
+import { Link } from 'react-router-dom';
+import { formatCalendarDate, formatInstant } from '@shared/format/dates';
 import { can } from '@shared/policy';
 import type { ChangeDto, ChangesPageDto } from '@shared/schemas/changes';
 import { useApplianceChanges } from '../api/get-appliance-changes';
@@ -19,7 +20,16 @@ export function ApplianceChanges({ applianceId }: { applianceId: string }) {
   const allowed = can(me.data?.principal, 'records:history');
   const changes = useApplianceChanges(applianceId, allowed && open);
   if (!allowed) return null;
-  return <Folded intro="Every change to this life record, its parts and its visits: who made it and why." open={open} onToggle={setOpen} changes={changes} timeZone={me.data?.company?.timeZone ?? 'UTC'} />;
+  return (
+    <Folded
+      intro="Every change to this life record, its parts and its visits: who made it and why."
+      open={open}
+      onToggle={setOpen}
+      changes={changes}
+      timeZone={me.data?.company?.timeZone ?? 'UTC'}
+      showVisit
+    />
+  );
 }
 
 /** One visit's history of changes (its start, sign-off and each amendment with its reason). */
@@ -38,9 +48,11 @@ type FoldedProps = {
   onToggle: (open: boolean) => void;
   changes: UseInfiniteQueryResult<InfiniteData<ChangesPageDto>>;
   timeZone: string;
+  /** On the record, each visit's change names its visit and links to it. */
+  showVisit?: boolean;
 };
 
-function Folded({ intro, open, onToggle, changes, timeZone }: FoldedProps) {
+function Folded({ intro, open, onToggle, changes, timeZone, showVisit = false }: FoldedProps) {
   const items = changes.data?.pages.flatMap((p) => p.items) ?? [];
   return (
     <section aria-label={TITLE} className="no-print rounded-plate border-2 border-plate-line bg-plate-deep p-3 text-iron">
@@ -59,7 +71,7 @@ function Folded({ intro, open, onToggle, changes, timeZone }: FoldedProps) {
         {changes.isSuccess && items.length === 0 && <p>No changes recorded yet.</p>}
         <ol className="flex flex-col gap-2" aria-label="Changes, newest first">
           {items.map((c) => (
-            <ChangeRow key={c.id} change={c} timeZone={timeZone} />
+            <ChangeRow key={c.id} change={c} timeZone={timeZone} showVisit={showVisit} />
           ))}
         </ol>
         {changes.hasNextPage && (
@@ -72,10 +84,15 @@ function Folded({ intro, open, onToggle, changes, timeZone }: FoldedProps) {
   );
 }
 
-function ChangeRow({ change, timeZone }: { change: ChangeDto; timeZone: string }) {
+function ChangeRow({ change, timeZone, showVisit }: { change: ChangeDto; timeZone: string; showVisit: boolean }) {
   return (
     <li className="rounded-plate border-l-4 border-plate-line bg-plate p-2" data-change={change.id}>
       <p className="font-semibold">{change.what}</p>
+      {showVisit && change.visit && (
+        <Link className="inline-flex min-h-tap items-center text-sm font-semibold underline" to={`/visits/${change.visit.id}`}>
+          Visit of {formatCalendarDate(change.visit.visitedOn)}
+        </Link>
+      )}
       {change.details.length > 0 && (
         <ul className="ml-4 list-disc text-sm">
           {change.details.map((d) => (
