@@ -3,6 +3,7 @@ import request from 'supertest';
 import { and, eq } from 'drizzle-orm';
 import type { Page } from 'playwright-core';
 import { useBrowserFixture } from '../support/browser';
+import { seriousAxeViolations } from '../support/axe';
 import { DEFAULT_TEST_PASSWORD } from '../../server/db/factories/users';
 import { auditLog } from '../../server/db/schema/index';
 import type { ApplianceRecordDto, SiteDto } from '../../shared/schemas/records';
@@ -81,6 +82,8 @@ describe('record of changes (desk, 1366 px)', () => {
     await newest.getByText(new RegExp(`· ${fx.t.manager.user.name}$`)).waitFor();
     await changes.getByText('Completed the visit', { exact: true }).waitFor();
     await changes.getByText('Started a visit (annual maintenance)', { exact: true }).waitFor();
+    // Opened, the section has no serious or critical axe violation.
+    expect(await seriousAxeViolations(page)).toEqual([]);
     const shown = await history.innerText();
     // Words only: no action codes, entity names or ISO instants.
     expect(shown).not.toMatch(/\b(amend|save_draft|complete|visit_report_\w+)\b/);
@@ -106,6 +109,7 @@ describe('record of changes (desk, 1366 px)', () => {
     const visitLink = recordChanges.locator(':scope > li').first().getByRole('link', { name: /^Visit of / });
     expect(await visitLink.getAttribute('href')).toBe(`/visits/${visitId}`);
     expect(await visitLink.innerText()).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    expect(await seriousAxeViolations(page)).toEqual([]);
     await context.close();
   });
 
