@@ -214,6 +214,16 @@ export function describeChange(row: AuditRowFacts): ChangeWords {
       return { what: 'Sent a copy of the record to another company', details: [], why: null };
     case 'service_request:create':
       return { what: 'A service request came in', details: [], why: null };
+    case 'booking:booked':
+      return { what: 'Booked a visit', details: [], why: text(c.note) };
+    case 'booking:moved':
+      return { what: 'Moved a booked visit', details: [], why: text(c.reason) ?? text(c.note) };
+    case 'booking:confirmed':
+      return { what: 'Confirmed a booked visit', details: [], why: null };
+    case 'booking:cancelled':
+      return { what: 'Cancelled a booked visit', details: [], why: text(c.reason) };
+    case 'booking:no_access':
+      return { what: 'Recorded that nobody could let us in for a booked visit', details: [], why: text(c.reason) };
     case 'reminder:send':
       return { what: 'Sent a service reminder', details: [], why: null };
     default:

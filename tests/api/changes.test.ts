@@ -178,6 +178,23 @@ describe('GET /api/appliances/:id/changes', () => {
     expect((await otherAs.owner.get(recordUrl(applianceId))).status).toBe(404);
   });
 
+  it("tells the record's bookings, with the reason a booking was cancelled", async () => {
+    const booked = await as.manager
+      .post('/api/bookings')
+      .send({ applianceIds: [applianceId], technicianId: t.technician.user.id, start: '2026-11-25T09:00', end: '2026-11-25T10:30', source: 'phone' });
+    expect(booked.status, JSON.stringify(booked.body)).toBe(201);
+    const reason = 'The homeowner is away that week.';
+    await as.manager.post(`/api/bookings/${booked.body.id}/cancel`).send({ reason }).expect(200);
+    const { items } = (await as.manager.get(recordUrl(applianceId)).query({ limit: 2 })).body as ChangesPageDto;
+    expect(items.map((i) => [i.what, i.why, i.who])).toEqual([
+      ['Cancelled a booked visit', reason, t.manager.user.name],
+      ['Booked a visit', null, t.manager.user.name],
+    ]);
+    // Not the visit's: its own history is unchanged.
+    const visitItems = ((await as.manager.get(visitUrl(visitId))).body as ChangesPageDto).items;
+    expect(visitItems.map((i) => i.what)).not.toContain('Booked a visit');
+  });
+
   it('answers a field-level 400 for a bad page size', async () => {
     const res = await as.manager.get(recordUrl(applianceId)).query({ limit: '-3' });
     expect(res.status).toBe(400);

@@ -21,14 +21,15 @@ export type VisitOriginal = {
   readings: Record<string, unknown>;
 };
 
-/** Rows about one appliance: the record itself, its parts, its visits and their swaps, and what names it in its changes. */
+/** Rows about one appliance: the record itself, its parts, its visits and their swaps, its bookings, and what names it in its changes. */
 const aboutAppliance = (companyId: string, applianceId: string) => sql`
   (l.entity = 'appliance' and l.entity_id = ${applianceId}::text)
   or (l.entity = 'component' and l.entity_id in (select id::text from components where company_id = ${companyId} and appliance_id = ${applianceId}))
   or (l.entity = 'visit' and l.entity_id in (select id::text from visits where company_id = ${companyId} and appliance_id = ${applianceId}))
   or (l.entity = 'part_swap' and l.changes->>'visitId' in (select id::text from visits where company_id = ${companyId} and appliance_id = ${applianceId}))
   or (l.entity = 'makeup_water_entry' and l.entity_id in (select id::text from makeup_water_entries where company_id = ${companyId} and appliance_id = ${applianceId}))
-  or (l.entity <> 'appliance' and l.changes->>'applianceId' = ${applianceId}::text)`;
+  or (l.entity <> 'appliance' and l.changes->>'applianceId' = ${applianceId}::text)
+  or (l.entity = 'booking' and jsonb_exists(l.changes->'applianceIds', ${applianceId}::text))`;
 
 /** Rows about one visit: the visit's own and the part swaps recorded on it. */
 const aboutVisit = (visitId: string) => sql`
