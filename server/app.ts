@@ -24,6 +24,7 @@ import { siteRoutes } from './modules/sites/sites.routes';
 import { applianceRoutes } from './modules/appliances/appliances.routes';
 import { catalogRoutes } from './modules/catalog/catalog.routes';
 import { checklistRoutes } from './modules/checklists/checklists.routes';
+import { changesRoutes } from './modules/audit/changes.routes';
 import { visitsRoutes } from './modules/visits/visits.routes';
 import { dueRoutes } from './modules/due/due.routes';
 import { makeupWaterRoutes } from './modules/makeup-water/makeup-water.routes';
@@ -89,6 +90,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   api.use(catalogRoutes(ctx));
   api.use(checklistRoutes(ctx));
   api.use(visitsRoutes(ctx));
+  api.use(changesRoutes(ctx));
   api.use(visitReportRoutes(ctx));
   api.use(lifeRecordExportRoutes(ctx));
   api.use(dueRoutes(ctx));

@@ -7,6 +7,8 @@ export const PERMISSIONS = {
   'visits:record': ['owner', 'manager', 'technician'],
   'visits:amend-any': ['owner', 'manager'],
   'visits:amend-own': ['owner', 'manager', 'technician'],
+  // The history of changes (who changed a record or a visit, what and why) is the office's to read.
+  'records:history': ['owner', 'manager'],
   'catalog:manage': ['owner', 'manager'],
   'share:create': ['owner', 'manager', 'technician'],
   'share:revoke': ['owner', 'manager'],

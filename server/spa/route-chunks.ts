@@ -52,6 +52,7 @@ export const CLIENT_ROUTES: readonly ClientRoute[] = [
       'src/features/appliance-record/components/makeup-water-section.tsx',
       'src/features/appliance-record/components/share-links-section.tsx',
       'src/features/appliance-record/components/record-transfer-section.tsx',
+      'src/features/change-history/components/change-history.tsx',
     ],
   },
   {

@@ -10,6 +10,8 @@ import { withErrorScreens } from './route-error';
  */
 
 // The record's tag and photo sections sit below its first screen: their chunks load once the record has painted.
+const ApplianceChanges = lazy(async () => ({ default: (await import('@/features/change-history/components/change-history')).ApplianceChanges }));
+const VisitChanges = lazy(async () => ({ default: (await import('@/features/change-history/components/change-history')).VisitChanges }));
 const AppliancePhotos = lazy(async () => ({ default: (await import('@/features/photos/components/appliance-photos')).AppliancePhotos }));
 const ApplianceTag = lazy(async () => ({ default: (await import('@/features/tags/components/appliance-tag')).ApplianceTag }));
 
@@ -122,6 +124,11 @@ export function appRoutes(): RouteObject[] {
                       <ApplianceTag applianceId={id} />
                     </Suspense>
                   ),
+                  changes: (id) => (
+                    <Suspense fallback={null}>
+                      <ApplianceChanges applianceId={id} />
+                    </Suspense>
+                  ),
                 }}
               />
             );
@@ -135,7 +142,18 @@ export function appRoutes(): RouteObject[] {
             import('@/features/photos/components/appliance-photos'),
           ]);
           return function VisitWithPhotos() {
-            return <VisitPage slots={{ photos: (applianceId, visitId) => <VisitPhotos applianceId={applianceId} visitId={visitId} /> }} />;
+            return (
+              <VisitPage
+                slots={{
+                  photos: (applianceId, visitId) => <VisitPhotos applianceId={applianceId} visitId={visitId} />,
+                  changes: (applianceId, visitId) => (
+                    <Suspense fallback={null}>
+                      <VisitChanges applianceId={applianceId} visitId={visitId} />
+                    </Suspense>
+                  ),
+                }}
+              />
+            );
           };
         }),
         guardedPage('customers', 'records:read', async () => (await import('@/features/customers/components/customers-page')).CustomersPage),

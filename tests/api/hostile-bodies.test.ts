@@ -48,7 +48,10 @@ let as: { owner: Agent; homeowner: Agent };
 let rowsWritten: () => Promise<number>;
 let paths: Record<string, string>;
 let samples: Record<string, Record<string, unknown>>;
-const sent = { bodies: 0, refused: 0, accepted: 0, startedAt: 0 };
+/** Read routes whose query is fuzzed below (GET routes take no body): the history of changes. */
+const QUERY_ROUTES = ['get /appliances/:id/changes', 'get /visits/:id/changes'];
+let queryPaths: Record<string, string>;
+const sent = { bodies: 0, refused: 0, accepted: 0, queries: 0, startedAt: 0 };
 
 /** Setup that must work, or the fuzzing below would prove nothing. */
 async function ok<T extends { status: number; body: unknown }>(res: Promise<T> | T, what: string): Promise<T> {
@@ -174,6 +177,10 @@ beforeAll(async () => {
     'post /record-transfers/preview': '/record-transfers/preview',
     'post /record-transfers/redeem': '/record-transfers/redeem',
   };
+  queryPaths = {
+    'get /appliances/:id/changes': `/appliances/${boiler.id}/changes`,
+    'get /visits/:id/changes': `/visits/${amendVisit}/changes`,
+  };
   // One valid body per route: the mutations below break it one piece at a time.
   samples = {
     'post /customers': { name: 'Hollis Brae', kind: 'landlord', phone: '555-0101', email: 'hollis@example.test', remindersOptOut: false, notes: 'Side door' },
@@ -255,6 +262,7 @@ afterAll(async () => {
   // The count is part of the claim: at least RUNS_PER_ROUTE bodies for every route with a body.
   const seconds = ((performance.now() - sent.startedAt) / 1000).toFixed(1);
   process.stdout.write(`hostile bodies: ${sent.bodies} sent in ${seconds} s, ${sent.refused} refused, ${sent.accepted} accepted, ${mails.length} e-mails\n`);
+  process.stdout.write(`hostile queries: ${sent.queries} sent\n`);
 });
 
 async function signIn(email: string): Promise<Agent> {
@@ -434,6 +442,51 @@ describe('hostile bodies', () => {
           if (hostile.contentType === 'text') expect(res.status, what).toBe(415);
           if (res.status < 400) return void (sent.accepted += 1);
           sent.refused += 1;
+          expect(after, what).toEqual(prior);
+        }),
+        { seed: SEED + [...key].reduce((h, c) => (h * 31 + c.charCodeAt(0)) | 0, 0), numRuns: RUNS_PER_ROUTE },
+      );
+    },
+    60_000,
+  );
+});
+
+// ---- hostile queries ----------------------------------------------------------------------------------------
+
+/** A query value as it arrives: text of any kind (NUL, lone surrogates, huge), numbers past the limits, repeats. */
+const hostileQueryValue: fc.Arbitrary<string | string[]> = fc.oneof(
+  fc.string({ unit: anyUnit, maxLength: 40 }),
+  fc.tuple(fc.string({ maxLength: 10 }), unstorableChar, fc.string({ maxLength: 10 })).map(([a, bad, b]) => `${a}${bad}${b}`),
+  fc.constantFrom('x'.repeat(10_001), '-1', '0', '1e3', '9'.repeat(40), 'NaN', '', '[object Object]'),
+  fc.integer().map(String),
+  fc.double({ noNaN: true }).map(String),
+  fc.array(fc.string({ maxLength: 5 }), { minLength: 2, maxLength: 3 }),
+);
+const hostileQuery = fc.dictionary(fc.oneof(fc.constantFrom('limit', 'cursor'), fc.constantFrom(...HOSTILE_KEYS)), hostileQueryValue, { maxKeys: 3 });
+
+describe('hostile queries', () => {
+  it('cover the history-of-changes routes, which exist and read a query', () => {
+    expect(Object.keys(queryPaths).sort()).toEqual([...QUERY_ROUTES].sort());
+    for (const key of QUERY_ROUTES) expect(routeTable.get(key)?.schemas.query, key).toBeDefined();
+  });
+
+  it.each(QUERY_ROUTES)(
+    '%s: no 5xx and nothing written, and a valid query answers 200',
+    async (key) => {
+      const valid = await as.owner.get(`/api${queryPaths[key]}`).query({ limit: '5' });
+      expect(valid.status).toBe(200);
+      let before = await rowsWritten();
+      await fc.assert(
+        fc.asyncProperty(hostileQuery, async (query) => {
+          const search = new URLSearchParams();
+          for (const [k, v] of Object.entries(query)) for (const one of [v].flat()) search.append(k, one);
+          const res = await as.owner.get(`/api${queryPaths[key]}?${search.toString()}`);
+          const [prior, after] = [before, await rowsWritten()];
+          before = after;
+          sent.queries += 1;
+          const what = JSON.stringify({ route: key, status: res.status, query: search.toString().slice(0, 300), answer: JSON.stringify(res.body).slice(0, 300) });
+          expect(res.status, what).toBeLessThan(500);
+          if (res.status === 400) expect(Object.keys(res.body.error.details ?? {}).length, what).toBeGreaterThan(0);
           expect(after, what).toEqual(prior);
         }),
         { seed: SEED + [...key].reduce((h, c) => (h * 31 + c.charCodeAt(0)) | 0, 0), numRuns: RUNS_PER_ROUTE },

@@ -20,12 +20,14 @@ import { open } from '../../server/lib/sealed-box';
 import type { Mail } from '../../server/lib/mailer';
 import { MAIL_SEAL_PURPOSE } from '../../server/modules/mail/mail-queue';
 import { serviceLifeService } from '../../server/modules/service-life/service-life.service';
-import { DEMO_COMPANY, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
+import { DEMO_COMPANY, DEMO_HOMEOWNER, OTHER_COMPANY } from '../../server/db/seed/demo-accounts';
 import { todayInTimeZone } from '../../shared/dates';
 import { addDays } from '../../shared/trade/iso-date';
 import { testApp } from '../support/context';
 import { completionRequirements } from '../../shared/visits/completion-requirements';
 import type { TradeFlag } from '../../shared/trade/trade-flag';
+import { analyzeMakeupWater } from '../../shared/trade/makeup-water';
+import { makeupWaterService } from '../../server/modules/makeup-water/makeup-water.service';
 
 const { ctx } = testApp();
 afterAll(() => ctx.pool.end());
@@ -84,6 +86,20 @@ async function seededAt(tx: Tx, name: string, timeZone: string, now: Date) {
   return { today, instants, dates, misdated, failedDueOn: failedParts.map((p) => p.dueOn) };
 }
 
+/** Each in-service steam boiler's makeup-water log as the app analyses it (shared/trade/makeup-water.ts, company defaults). */
+async function steamLogs(tx: Tx, companyId: string) {
+  const steam = await tx
+    .select({ id: appliances.id })
+    .from(appliances)
+    .where(and(eq(appliances.companyId, companyId), eq(appliances.kind, 'steam_boiler'), eq(appliances.status, 'in_service')));
+  const entries = await tx.select().from(makeupWaterEntries).where(eq(makeupWaterEntries.companyId, companyId)).orderBy(makeupWaterEntries.recordedOn);
+  return steam.map((a) => {
+    const log = entries.filter((e) => e.applianceId === a.id);
+    const analysis = log.length >= 2 ? analyzeMakeupWater(log.map((e) => ({ date: e.recordedOn, kind: 'meter_reading' as const, gallons: e.gallons! }))) : null;
+    return { applianceId: a.id, readings: log.length, analysis, flags: analysis?.flags.map((f) => f.code) ?? [] };
+  });
+}
+
 /** Seeds the whole demo inside a transaction that is then rolled back, so it can be seeded again at another time. */
 async function seedAndRollBack<T>(inspect: (tx: Tx) => Promise<T>): Promise<T> {
   let result: T | undefined;
@@ -118,10 +134,11 @@ describe('demo seed', () => {
   it.each(CLOCKS)('writes nothing that has not happened yet when it runs at %s in the company’s zone', async (_label, at) => {
     const now = new Date(at);
     vi.setSystemTime(now);
-    const seen = await seedAndRollBack(async (tx) => ({
-      demo: await seededAt(tx, DEMO_COMPANY.name, DEMO_COMPANY.timeZone, now),
-      other: await seededAt(tx, OTHER_COMPANY.name, OTHER_COMPANY.timeZone, now),
-    }));
+    const seen = await seedAndRollBack(async (tx) => {
+      const demo = await seededAt(tx, DEMO_COMPANY.name, DEMO_COMPANY.timeZone, now);
+      const [company] = await tx.select({ id: companies.id }).from(companies).where(eq(companies.name, DEMO_COMPANY.name));
+      return { demo, other: await seededAt(tx, OTHER_COMPANY.name, OTHER_COMPANY.timeZone, now), steam: await steamLogs(tx, company.id) };
+    });
     expect(seen.demo.today).toBe(at.slice(0, 10));
     // The small company has no unsafe visit and no feeder meter; the demo company has every kind of stamp, so the
     // check looked at real rows.
@@ -135,6 +152,11 @@ describe('demo seed', () => {
     // The feeder meters are read at 08:00: this morning's reading, or yesterday's before then.
     const lastReading = seen.demo.dates.find((d) => d.label === 'makeup_water_entries.recorded_on')!.latest;
     expect(lastReading).toBe(now.getTime() >= Date.parse(`${seen.demo.today}T08:00:00${at.slice(-6)}`) ? seen.demo.today : addDays(seen.demo.today, -1));
+    // Whenever it is seeded, every steam boiler has a season of weekly readings; one shows the leak, the rest do not.
+    expect(seen.steam.length).toBeGreaterThanOrEqual(3);
+    expect(Math.min(...seen.steam.map((s) => s.readings))).toBeGreaterThanOrEqual(13);
+    expect(seen.steam.filter((s) => s.flags.includes('sharp_rise'))).toHaveLength(1);
+    expect(seen.steam.filter((s) => s.flags.length === 0).length).toBe(seen.steam.length - 1);
     // A part failed on condition is due on the company's today, not the database server's.
     expect(seen.demo.failedDueOn.length).toBeGreaterThanOrEqual(1);
     expect(new Set(seen.demo.failedDueOn)).toEqual(new Set([seen.demo.today]));
@@ -197,6 +219,48 @@ describe('demo seed', () => {
     const removed = demoAppliances.filter((a) => a.status === 'removed');
     expect(removed).toHaveLength(1);
     expect(demoAppliances.some((a) => a.id === removed[0].replacedById)).toBe(true);
+  });
+
+  it('gives every demo steam boiler a heating season of weekly meter readings: one shows the leak flag, the others a normal small rate', async () => {
+    const [demo] = await ctx.db.select().from(companies).where(eq(companies.name, DEMO_COMPANY.name));
+    const steam = await ctx.db
+      .select({ id: appliances.id })
+      .from(appliances)
+      .where(and(eq(appliances.companyId, demo.id), eq(appliances.kind, 'steam_boiler'), eq(appliances.status, 'in_service')));
+    expect(steam.length).toBeGreaterThanOrEqual(3);
+    // What the life record's makeup-water section shows (GET /appliances/:id/makeup-water).
+    const shown = await Promise.all(steam.map(async (a) => ({ id: a.id, ...(await makeupWaterService(ctx).get(demo.id, a.id)) })));
+    for (const s of shown) {
+      // Weekly from October 1, 2025 (the latest October 1 at least 13 weeks before December 3) to the morning of the seed.
+      expect(s.entries[0].recordedOn >= '2025-10-01' && s.entries[0].recordedOn < '2025-10-08').toBe(true);
+      expect(s.entries.at(-1)!.recordedOn).toBe('2026-12-03');
+      expect(s.entries.length).toBe(62);
+    }
+    const codes = (s: (typeof shown)[number]) => s.analysis!.flags.map((f) => f.code);
+    const leaking = shown.filter((s) => codes(s).includes('sharp_rise'));
+    expect(leaking).toHaveLength(1);
+    // "Look for a new leak": the latest 30 days at least twice the earlier periods' median, and more than 1 gal above it
+    // (company defaults in shared/trade/makeup-water.ts, common practice).
+    const rise = leaking[0].analysis!.flags.find((f) => f.code === 'sharp_rise')!;
+    expect(rise.value).toBeGreaterThanOrEqual(rise.threshold!);
+    expect(leaking[0].analysis!.latest30DayGallons!).toBeGreaterThanOrEqual(2 * leaking[0].analysis!.previous30DayMedianGallons!);
+    const normal = shown.filter((s) => codes(s).length === 0);
+    expect(normal.length).toBe(shown.length - 1);
+    for (const s of normal) {
+      // Water no more often than about once a month: no leak warning. common practice (trade-sources.md, "Makeup water")
+      expect(s.analysis!.meanDaysBetweenFills!).toBeGreaterThanOrEqual(30);
+      // A small rate: under a gallon a week (our demo's own choice, not a published limit).
+      expect(s.analysis!.gallonsPerWeek!).toBeGreaterThan(0);
+      expect(s.analysis!.gallonsPerWeek!).toBeLessThan(1);
+    }
+    // The demo homeowner's own boiler is a normal one.
+    const homeowners = await ctx.db
+      .select({ id: appliances.id })
+      .from(appliances)
+      .innerJoin(sites, eq(sites.id, appliances.siteId))
+      .innerJoin(customers, eq(customers.id, sites.customerId))
+      .where(and(eq(appliances.companyId, demo.id), eq(appliances.kind, 'steam_boiler'), eq(customers.email, DEMO_HOMEOWNER.email)));
+    for (const h of homeowners) expect(leaking[0].id).not.toBe(h.id);
   });
 
   it('has enough worn-out parts of one type for a manager to adopt a learned service life', async () => {

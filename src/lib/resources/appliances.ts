@@ -15,6 +15,9 @@ export const applianceKeys = {
   shareLinks: (id: string) => ['appliance', id, 'share-links'] as const,
   recordTransfers: (id: string) => ['appliance', id, 'record-transfers'] as const,
   makeupWater: (id: string) => ['appliance', id, 'makeup-water'] as const,
+  /** The history of changes (audit trail) of the record, and of one of its visits: an amendment refreshes both. */
+  changes: (id: string) => ['appliance', id, 'changes'] as const,
+  visitChanges: (id: string, visitId: string) => ['appliance', id, 'visit-changes', visitId] as const,
 };
 
 export const getApplianceRecord = (id: string) => api<ApplianceRecordDto>(`/appliances/${encodeURIComponent(id)}`);

@@ -139,6 +139,8 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     status: 201,
   },
   'get /appliances/:id/timeline': { params: (c) => ({ id: c.target.applianceId }), status: 200 },
+  // The history of changes is the office's (records:history): technicians and homeowners get 403.
+  'get /appliances/:id/changes': { params: (c) => ({ id: c.target.applianceId }), query: () => ({ limit: '10' }), status: 200 },
   'get /catalog/component-types': { status: 200 },
   // Part-type codes are the same words in every company; each company changes its own catalog entry.
   'patch /catalog/component-types/:code': { params: (c) => ({ code: c.target.catalogCode }), body: () => ({ active: true }), status: 200, crossTenant: 200 },
@@ -146,6 +148,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   'put /checklist-templates/:id': { params: (c) => ({ id: c.target.checklistTemplate.id }), body: (c) => c.target.checklistTemplate.body, status: 200 },
   'post /visits': { body: (c) => ({ applianceId: c.target.spareApplianceId, type: 'repair' }), status: 200, crossTenant: 404 },
   'get /visits/:id': { params: (c) => ({ id: c.target.visitId }), status: 200 },
+  'get /visits/:id/changes': { params: (c) => ({ id: c.target.visitId }), query: () => ({ limit: '10' }), status: 200 },
   'put /visits/:id/draft': {
     freshInTarget: async (ctx, w) => ({ visitId: (await visitOnNewAppliance(ctx, w)).visit.id }),
     params: (c) => ({ id: str(c.fresh.visitId) }),

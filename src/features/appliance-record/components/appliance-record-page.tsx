@@ -27,7 +27,12 @@ const ShareLinksSection = lazy(async () => ({ default: (await import('./share-li
 const RecordTransferSection = lazy(async () => ({ default: (await import('./record-transfer-section')).RecordTransferSection }));
 
 /** Sections owned by other features (tags, photos) are handed in by the app's router, so features stay independent. */
-export type RecordSlots = { photos?: (applianceId: string) => ReactNode; tag?: (applianceId: string) => ReactNode };
+export type RecordSlots = {
+  photos?: (applianceId: string) => ReactNode;
+  tag?: (applianceId: string) => ReactNode;
+  /** The history of changes (owners and managers; the slot shows nothing to anyone else). */
+  changes?: (applianceId: string) => ReactNode;
+};
 
 export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
   const { id = '' } = useParams();
@@ -103,6 +108,7 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
         </Suspense>
       )}
       <Timeline applianceId={a.id} />
+      {slots.changes?.(a.id)}
       {can(me.data?.principal, 'share:create') && (
         <Suspense fallback={null}>
           <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />

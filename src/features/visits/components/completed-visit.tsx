@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Page } from '@/components/ui/page';
@@ -31,7 +32,7 @@ function skippedReadings(visit: VisitDto): { label: string; reason: string }[] {
     .map(([key, reason]) => ({ label: READING_LABELS[key as ReadingKey] ?? key, reason: reason! }));
 }
 
-export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitDto; justCompleted?: boolean }) {
+export function CompletedVisit({ visit, justCompleted = false, changes }: { visit: VisitDto; justCompleted?: boolean; changes?: ReactNode }) {
   const me = useMe();
   const principal = me.data?.principal;
   const mayAmend =
@@ -116,6 +117,7 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
         </Panel>
       )}
       {mayAmend && <AmendForm visit={visit} current={{ findings: latest(visit, 'findings'), recommendations: latest(visit, 'recommendations') }} />}
+      {changes}
     </Page>
   );
 }

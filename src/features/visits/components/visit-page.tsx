@@ -13,7 +13,11 @@ import { CompletedVisit } from './completed-visit';
 import { VisitEditor } from './visit-editor';
 
 /** The photos section belongs to another feature and is handed in by the app's router. */
-export type VisitSlots = { photos?: (applianceId: string, visitId: string) => ReactNode };
+export type VisitSlots = {
+  photos?: (applianceId: string, visitId: string) => ReactNode;
+  /** The completed visit's history of changes (owners and managers). */
+  changes?: (applianceId: string, visitId: string) => ReactNode;
+};
 
 export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   const { id = '' } = useParams();
@@ -37,7 +41,7 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
       </Page>
     );
   }
-  if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} justCompleted={completedHere === visit.data.id} />;
+  if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} justCompleted={completedHere === visit.data.id} changes={slots.changes?.(visit.data.applianceId, visit.data.id)} />;
   if (queuedFinish?.state === 'waiting' && outbox) return <FinishedOnPhone visit={visit.data} entry={queuedFinish} onSendNow={outbox.retryNow} />;
   return (
     <>
