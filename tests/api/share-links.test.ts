@@ -61,7 +61,7 @@ describe('share links', () => {
     expect(view.headers['x-robots-tag']).toBe('noindex, nofollow');
     expect(view.headers['referrer-policy']).toBe('no-referrer');
     expect(view.body.appliance.address).toBe('12 Quarry Lane, Wrenfield');
-    expect(view.body.visits[0]).toMatchObject({ what: 'Annual maintenance', checked: ['Burner and pilot'], outcomeWords: 'Left running' });
+    expect(view.body.visits[0]).toMatchObject({ what: 'Annual maintenance', checked: ['Burner and pilot'], outcomeWords: 'Left operating' });
     expect(view.body.visits[0].readingsInWords[0]).toMatch(/about 81 %/);
     expect(view.body.nextAnnualServiceDue).toBe('2027-10-15');
     // Internal notes and technician-only fields never reach it.

@@ -9,6 +9,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { useComponentTypes } from '@/lib/resources/component-types';
 import { useUpdateComponentType } from '../api/update-component-type';
 import { describeFailure, zodFieldErrors } from '@/lib/form-errors';
+import { RECORD_WORDS } from '@shared/glossary';
 
 const GROUPS: Record<string, string> = { gas: 'Gas burner and controls', oil: 'Oil burner', steam: 'Steam', hot_water: 'Hot water', common: 'Common' };
 
@@ -16,7 +17,7 @@ export function ComponentCatalogSection() {
   const types = useComponentTypes();
   const groups = Object.keys(GROUPS).concat([...new Set((types.data ?? []).map((t) => t.group))].filter((g) => !(g in GROUPS)));
   return (
-    <Card title={<span id="component-catalog">Component catalog</span>}>
+    <Card title={<span id="part-types">{RECORD_WORDS.partTypes}</span>}>
       <p className="mb-3 text-sm text-iron-muted">
         The part types your technicians pick from. Rename one to your shop&rsquo;s word for it. A deactivated type is no longer
         offered for new parts; parts already recorded keep it and stay readable.

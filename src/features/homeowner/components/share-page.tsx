@@ -4,6 +4,7 @@ import { Spinner } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
 import { useSharedRecord } from '../api/get-shared-record';
 import { HomeownerRecord } from './homeowner-record';
+import { RECORD_WORDS } from '@shared/glossary';
 
 /** Opened from a share link, without signing in. An expired or revoked link says so and nothing more. */
 export function SharePage() {
@@ -15,7 +16,7 @@ export function SharePage() {
         <div className="mx-auto flex max-w-2xl items-center gap-2 px-3 py-2">
           <LogoMark />
           <span className="font-bold">Lifeplate</span>
-          <span className="text-sm text-header-text/70">· your appliance&apos;s service record</span>
+          <span className="text-sm text-header-text/70">{`· your appliance’s ${RECORD_WORDS.lifeRecord}`}</span>
         </div>
       </header>
       {record.isPending ? (

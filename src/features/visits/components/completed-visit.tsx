@@ -13,6 +13,7 @@ import { READING_LABELS } from '@shared/visits/reading-labels';
 import { AmendForm } from './amend-form';
 import { Panel } from './inputs';
 import { ServerResults } from './server-results';
+import { OUTCOME_LABELS } from '@shared/glossary';
 
 const dayFormat = { format: (isoDate: string) => formatCalendarDate(isoDate) };
 const stampFormat = { format: (iso: string) => formatInstant(iso, Intl.DateTimeFormat().resolvedOptions().timeZone) };
@@ -62,11 +63,11 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
         </a>
       </p>
       {visit.outcome === 'shut_down_unsafe' ? (
-        <Notice kind="danger" title="Shut down as unsafe">
+        <Notice kind="danger" title={OUTCOME_LABELS.shut_down_unsafe}>
           {visit.outcomeReason} {visit.outcomeToldWhom && `Told: ${visit.outcomeToldWhom}.`}
         </Notice>
       ) : visit.outcome === 'left_operating' ? (
-        <StatusBadge status="ok">Left operating</StatusBadge>
+        <StatusBadge status="ok">{OUTCOME_LABELS.left_operating}</StatusBadge>
       ) : null}
 
       <Panel title="As recorded on the day">
