@@ -5,3 +5,4 @@ export * from './part-names';
 export * from './quick-reasons';
 export * from './visit-steps';
 export * from './words';
+export * from './result-words';
