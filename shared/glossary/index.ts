@@ -6,3 +6,4 @@ export * from './quick-reasons';
 export * from './visit-steps';
 export * from './words';
 export * from './result-words';
+export * from './share-links';
