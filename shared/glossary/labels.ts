@@ -31,5 +31,20 @@ export const LABELS = {
   },
   visitOutcome: OUTCOME_LABELS,
   importStatus: { uploaded: 'not imported yet', queued: 'waiting to import', importing: 'importing', done: 'imported', failed: 'stopped with an error' },
+  /** The life record's history entries, by kind (the History filter's words). */
+  timelineKind: {
+    visit: 'Visits',
+    part_swap: 'Part swaps',
+    reading: 'Readings',
+    install: 'Installs',
+    amendment: 'Amendments',
+    status: 'Status',
+    note: 'Notes',
+    photo: 'Photos',
+    makeup_water: 'Makeup water',
+    reminder: 'Reminders',
+    booking: 'Bookings',
+    import: 'Imports',
+  },
   checkMark: { done: 'Done', not_applicable: 'Not applicable', needs_attention: 'Needs attention' },
 } as const;

@@ -8,7 +8,7 @@ import { lifeRecordPath, visitReportPath, type RecordSource } from '../api/recor
 import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
 import { ServiceRequestForm } from './service-request-form';
-import { explainSteps, OUTCOME_LABELS } from '@shared/glossary';
+import { explainSteps, OUTCOME_LABELS, RECORD_SECTIONS } from '@shared/glossary';
 
 const date = (iso: string) => formatCalendarDate(iso, { long: true });
 
@@ -30,7 +30,7 @@ export function HomeownerRecord({ view, source, after }: { view: HomeownerViewDt
           <p className="mt-1 font-semibold">Do not turn it back on or relight it yourself. Call {view.company.name} to have the fault repaired first.</p>
         </Notice>
       )}
-      <Card title="What it is">
+      <Card title={RECORD_SECTIONS.whatItIs}>
         <p>
           {a.title}
           {a.makeAndModel ? `, made by ${a.makeAndModel}` : ''}.
