@@ -17,9 +17,9 @@ export function combustionWorking(c: Partial<Pick<CombustionAnalysis, 'sources' 
   const s = c.sources;
   if (!s) return [];
   return [
-    `${RESULT_WORDS.co2.label}: ${s.co2}`,
-    `${RESULT_WORDS.coAirFree.label}: ${s.coAirFree}`,
-    `${RESULT_WORDS.excessAir.label} and ${RESULT_WORDS.efficiency.label.toLowerCase()}: ${s.excessAirAndEfficiency}${c.efficiencyBasis ? ` (${c.efficiencyBasis})` : ''}`,
+    `Carbon dioxide: ${s.co2}`,
+    `Air-free CO: ${s.coAirFree}`,
+    `Excess air and efficiency: ${s.excessAirAndEfficiency}${c.efficiencyBasis ? ` (${c.efficiencyBasis})` : ''}`,
   ];
 }
 
