@@ -10,6 +10,7 @@ import { pdfPageText } from '../support/pdf-text';
 import { runFileAt } from '../support/clock';
 import { agentsFor, createTenant, type Agent, type Tenant } from '../support/tenant';
 import { fullCompletion } from '../support/visit-completion';
+import { VISIT_STEPS } from '../../shared/glossary/visit-steps';
 
 const { app, ctx } = testApp();
 runFileAt('2026-11-18T12:00:00-05:00');
@@ -87,6 +88,10 @@ describe('visit report on completion', () => {
     // The thermocouple fitted 2019-06-01 and swapped on 2026-11-18: 7 whole years.
     expect(text).toContain('Thermocouple (new: thermocouple, 24 in): the old one was 7 years old; reason: Weak output.');
     expect(text).toContain('Next yearly service: November 18, 2027.');
+    // Each checked step with its plain line from the glossary (shared/glossary/visit-steps.ts), then its items.
+    expect(text).toContain('What we checked');
+    expect(text.replace(/\s+/g, ' ')).toContain(`Carbon monoxide: ${VISIT_STEPS['Carbon monoxide']}`);
+    expect(text).not.toContain('(carbon monoxide)');
     expect(text).toMatch(/manufacturer's instructions and local codes/);
 
     const shareUrl = /https?:\/\/\S+\/s\/([A-Za-z0-9_-]{43})/.exec(mail.text ?? '')!;
