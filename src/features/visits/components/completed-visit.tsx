@@ -75,7 +75,7 @@ export function CompletedVisit({ visit, justCompleted = false }: { visit: VisitD
         <Field label="Recommendations" value={visit.recommendations} />
         {visit.customerAckName && <Field label="Acknowledged by the customer" value={visit.customerAckName} />}
         {visit.swaps.length > 0 && (
-          <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${s.swappedOn})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
+          <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${dayFormat.format(s.swappedOn)})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
         )}
         <ServerResults results={visit.results} title="Results" />
         {skipped.length > 0 && (
@@ -182,7 +182,7 @@ function ChangeList({ changes }: { changes: Record<string, unknown> }) {
 }
 
 function describe(key: string, v: unknown): string {
-  if (key === 'swaps' && Array.isArray(v)) return v.map((s: { swappedOn?: string; previousSwappedOn?: string }) => `${s.previousSwappedOn ?? '?'} → ${s.swappedOn ?? '?'}`).join('; ');
+  if (key === 'swaps' && Array.isArray(v)) return v.map((s: { swappedOn?: string; previousSwappedOn?: string }) => `${s.previousSwappedOn ? dayFormat.format(s.previousSwappedOn) : '?'} → ${s.swappedOn ? dayFormat.format(s.swappedOn) : '?'}`).join('; ');
   if (key === 'outcome' && v && typeof v === 'object') {
     const o = v as { outcome?: keyof typeof LABELS.visitOutcome; outcomeReason?: string };
     return [o.outcome ? LABELS.visitOutcome[o.outcome] : null, o.outcomeReason].filter(Boolean).join(': ');
