@@ -46,5 +46,7 @@ export const LABELS = {
     booking: 'Bookings',
     import: 'Imports',
   },
+  /** A photo's kind as a household reads it (the office's words are PHOTO_KIND_LABELS in schemas/photos.ts). */
+  photoKindForHousehold: { nameplate: 'Rating plate', before: 'Before the work', after: 'After the work', finding: 'What was found', other: 'Photo' },
   checkMark: { done: 'Done', not_applicable: 'Not applicable', needs_attention: 'Needs attention' },
 } as const;
