@@ -7,6 +7,7 @@ import { applianceKindChoice, constructionChoice, fuelChoice, ignitionChoice, ve
 import { IMPORT_FIELDS, PART_SLOTS, VISIT_SLOTS, type ImportField } from './import-fields';
 import { IMPORT_DATE_FORMATS_HINT, parseImportDate } from './parse-import-date';
 import { parseSpecText } from './parse-spec-text';
+import { RECORD_WORDS } from '../glossary/words';
 
 export type ImportRowError = { row: number; field: ImportField; column: string; value: string; message: string };
 
@@ -143,7 +144,7 @@ export function validateImportRow(ctx: RowContext): { value: ImportRow | null; e
     }
     const typeCode = ctx.partType(typeText);
     if (!typeCode) {
-      fail(typeField, `'${typeText}' is not a part type of your catalog.`);
+      fail(typeField, `'${typeText}' is not one of your part types (see ${RECORD_WORDS.catalogPage}).`);
       continue;
     }
     const spec = specText === null ? {} : parseSpecText(typeCode, specText);

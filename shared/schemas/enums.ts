@@ -37,34 +37,5 @@ export type VisitOutcome = (typeof VISIT_OUTCOMES)[number];
 export type CheckMark = (typeof CHECK_MARKS)[number];
 export type TimelineKind = (typeof TIMELINE_KINDS)[number];
 
-export const LABELS = {
-  applianceKind: { steam_boiler: 'Steam boiler', hot_water_boiler: 'Hot-water boiler', water_heater: 'Water heater', furnace: 'Furnace' },
-  fuel: { natural_gas: 'Natural gas', propane: 'Propane', oil_no2: 'No. 2 oil' },
-  construction: {
-    cast_iron: 'Cast iron',
-    steel_fire_tube: 'Steel fire-tube',
-    steel_water_tube: 'Steel water-tube',
-    copper: 'Copper',
-    condensing: 'Condensing',
-    electric: 'Electric',
-  },
-  ignitionType: {
-    standing_pilot: 'Standing pilot',
-    intermittent_pilot: 'Intermittent pilot',
-    direct_spark: 'Direct spark',
-    hot_surface: 'Hot-surface',
-    oil_burner: 'Oil-burner ignition',
-  },
-  ventType: { draft_hood: 'Draft hood', barometric_damper: 'Barometric damper', power_vent: 'Power vent', direct_vent: 'Direct vent' },
-  applianceStatus: { in_service: 'In service', out_of_service: 'Out of service', removed: 'Removed' },
-  customerKind: { homeowner: 'Homeowner', landlord: 'Landlord', property_manager: 'Property manager' },
-  visitType: {
-    annual_maintenance: 'Annual maintenance',
-    repair: 'Repair',
-    install: 'Install',
-    no_heat: 'No-heat call',
-    inspection: 'Inspection',
-  },
-  visitOutcome: { left_operating: 'Left operating', shut_down_unsafe: 'Shut down as unsafe' },
-  checkMark: { done: 'Done', not_applicable: 'Not applicable', needs_attention: 'Needs attention' },
-} as const;
+/** Display names of these values live in the glossary (shared/glossary/labels.ts); re-exported here for old imports. */
+export { LABELS } from '../glossary/labels';

@@ -37,8 +37,6 @@ export type ShareLinkDto = {
 };
 export type CreatedShareLinkDto = ShareLinkDto & { url: string };
 
-export const SHARE_LINK_GONE_MESSAGE = 'This link has expired: ask your service company for a new one.';
-
 export type HomeownerVisitDto = {
   /** Names the visit's report: /share/:token/visits/:id/report. */
   id: string;

@@ -1,5 +1,6 @@
 import type { Principal } from '@shared/schemas/roles';
 import { can, type Permission } from '@shared/policy';
+import { RECORD_WORDS } from '@shared/glossary';
 
 type NavItem = { to: string; label: string; permission?: Permission; homeowner?: boolean };
 
@@ -11,7 +12,7 @@ const ITEMS: NavItem[] = [
   { to: '/service-requests', label: 'Service requests', permission: 'records:read' },
   { to: '/due', label: 'Due list', permission: 'catalog:manage' },
   { to: '/customers', label: 'Customers', permission: 'records:read' },
-  { to: '/catalog', label: 'Parts & checklists', permission: 'catalog:manage' },
+  { to: '/catalog', label: RECORD_WORDS.catalogPage, permission: 'catalog:manage' },
   { to: '/tags', label: 'Tags', permission: 'catalog:manage' },
   { to: '/imports', label: 'Bring records in', permission: 'records:import' },
   { to: '/receive', label: 'Receive a record', permission: 'records:transfer' },

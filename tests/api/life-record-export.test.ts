@@ -135,7 +135,7 @@ describe('life-record export as PDF', () => {
     expect(text).toContain('Serial: SN-EXPORT-771');
     expect(text).toContain('thermocouple: 8 years old when removed; removed November 18, 2026 (Weak output).');
     expect(text).toContain('thermocouple (thermocouple, 24 in): 0 years old; check by November 18, 2027.');
-    expect(text).toContain('November 18, 2026: Annual maintenance, left running');
+    expect(text).toContain('November 18, 2026: Annual maintenance, left operating');
     expect(text).toContain('Carbon monoxide in the flue: 75 ppm air-free, well under the 400 ppm limit.');
     expect(text).not.toContain(SECRET_NOTE);
     // Two photos, two embedded images.

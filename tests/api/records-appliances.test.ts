@@ -90,7 +90,7 @@ describe('POST /appliances', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.details).toEqual({
       siteId: ['Pick a site of your company.'],
-      'components.1.typeCode': ['Pick a part type from your catalog.'],
+      'components.1.typeCode': ['Pick one of your part types (see Parts & checklists).'],
       'components.2.spec.lengthIn': [expect.stringContaining('greater than 0')],
     });
     expect(await ctx.db.select().from(appliances).where(eq(appliances.serial, 'NOPE-1'))).toHaveLength(0);

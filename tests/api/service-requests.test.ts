@@ -22,7 +22,6 @@ let neighbourBoilerId: string;
 let otherBoilerId: string;
 let retiredManagerEmail: string;
 
-const GONE = { error: { code: 'gone', message: 'This link has expired: ask your service company for a new one.' } };
 const tokenOf = (url: string) => url.split('/s/')[1];
 const rowsFor = (applianceId: string) => ctx.db.select().from(serviceRequests).where(eq(serviceRequests.applianceId, applianceId));
 
@@ -146,7 +145,8 @@ describe('a service request through a share link', () => {
     expect((await as.manager.post(`/api/share-links/${revoked.id}/revoke`)).status).toBe(200);
     const afterRevoke = await as.anonymous.post(`/api/share/${revoked.token}/service-requests`).send(body);
     expect(afterRevoke.status).toBe(410);
-    expect(afterRevoke.body).toEqual(GONE);
+    expect(afterRevoke.body.error.code).toBe('share_link_revoked');
+    expect(afterRevoke.body.error.message).toContain(`${t.company.name} withdrew this link`);
 
     const expiredToken = crypto.randomBytes(32).toString('base64url');
     await ctx.db.insert(shareLinks).values({
@@ -158,7 +158,8 @@ describe('a service request through a share link', () => {
     });
     const expired = await as.anonymous.post(`/api/share/${expiredToken}/service-requests`).send(body);
     expect(expired.status).toBe(410);
-    expect(expired.body).toEqual(GONE);
+    expect(expired.body.error.code).toBe('share_link_expired');
+    expect(expired.body.error.message).toContain('This link has expired.');
     const stored = await ctx.db.select().from(serviceRequests).where(eq(serviceRequests.shareLinkId, revoked.id));
     expect(stored).toHaveLength(0);
   });

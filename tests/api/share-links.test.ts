@@ -61,7 +61,7 @@ describe('share links', () => {
     expect(view.headers['x-robots-tag']).toBe('noindex, nofollow');
     expect(view.headers['referrer-policy']).toBe('no-referrer');
     expect(view.body.appliance.address).toBe('12 Quarry Lane, Wrenfield');
-    expect(view.body.visits[0]).toMatchObject({ what: 'Annual maintenance', checked: ['Burner and pilot'], outcomeWords: 'Left running' });
+    expect(view.body.visits[0]).toMatchObject({ what: 'Annual maintenance', checked: ['Burner and pilot'], outcomeWords: 'Left operating' });
     expect(view.body.visits[0].readingsInWords[0]).toMatch(/about 81 %/);
     expect(view.body.nextAnnualServiceDue).toBe('2027-10-15');
     // Internal notes and technician-only fields never reach it.
@@ -71,7 +71,7 @@ describe('share links', () => {
     }
   });
 
-  it('answers 410 once revoked, with nothing about the appliance, and 404 for a token never issued', async () => {
+  it('answers 410 share_link_revoked once the company withdrew it, naming whom to ask and nothing about the appliance, and 404 for a token never issued', async () => {
     const made = await as.manager.post(`/api/appliances/${boilerId}/share-links`).send({});
     const token = tokenOf(made.body.url);
     expect((await as.technician.post(`/api/share-links/${made.body.id}/revoke`)).status).toBe(403);
@@ -79,14 +79,23 @@ describe('share links', () => {
     expect(revoked.body.status).toBe('revoked');
     const res = await as.anonymous.get(`/api/share/${token}`);
     expect(res.status).toBe(410);
-    expect(res.body).toEqual({ error: { code: 'gone', message: 'This link has expired: ask your service company for a new one.' } });
+    expect(res.body).toEqual({
+      error: {
+        code: 'share_link_revoked',
+        message: `${t.company.name} withdrew this link, so the record is no longer shared through it. To see it again, ask ${t.company.name} for a new link: call ${t.company.phone}.`,
+      },
+    });
     expect((await as.anonymous.get(`/api/share/${'A'.repeat(43)}`)).status).toBe(404);
   });
 
-  it('answers 410 once expired', async () => {
+  it('answers 410 share_link_expired once expired, told apart from a withdrawn link', async () => {
     const made = await as.manager.post(`/api/appliances/${boilerId}/share-links`).send({ expiresInDays: 1 });
     await ctx.db.update(shareLinks).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(shareLinks.id, made.body.id));
-    expect((await as.anonymous.get(`/api/share/${tokenOf(made.body.url)}`)).status).toBe(410);
+    const res = await as.anonymous.get(`/api/share/${tokenOf(made.body.url)}`);
+    expect(res.status).toBe(410);
+    expect(res.body).toEqual({
+      error: { code: 'share_link_expired', message: `This link has expired. To see the record again, ask ${t.company.name} for a new link: call ${t.company.phone}.` },
+    });
     const list = await as.manager.get(`/api/appliances/${boilerId}/share-links`);
     expect(list.body.find((l: { id: string }) => l.id === made.body.id).status).toBe('expired');
   });

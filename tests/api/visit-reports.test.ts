@@ -10,6 +10,7 @@ import { pdfPageText } from '../support/pdf-text';
 import { runFileAt } from '../support/clock';
 import { agentsFor, createTenant, type Agent, type Tenant } from '../support/tenant';
 import { fullCompletion } from '../support/visit-completion';
+import { VISIT_STEPS } from '../../shared/glossary/visit-steps';
 
 const { app, ctx } = testApp();
 runFileAt('2026-11-18T12:00:00-05:00');
@@ -76,17 +77,21 @@ describe('visit report on completion', () => {
     expect(mail.subject).toMatch(/^Your visit report, November 18, 2026: /);
     // GOOD_COMBUSTION: 50 ppm CO at 7 % O2 is 50 × 20.9 / (20.9 − 7) ≈ 75 ppm air-free (the air-free formula in shared/trade/combustion.ts).
     expect(mail.text).toContain('Carbon monoxide in the flue: 75 ppm air-free, well under the 400 ppm limit.');
-    expect(mail.text).toContain('Outcome: Left running.');
+    expect(mail.text).toContain('Outcome: Left operating.');
     expect(mail.headers.get('x-lifeplate-company')).toBe(t.company.id);
     expect(mail.attachments).toHaveLength(1);
     expect(mail.attachments[0]).toMatchObject({ contentType: 'application/pdf', filename: 'visit-report-2026-11-18.pdf' });
     const text = await pdfText(mail.attachments[0].content);
     expect(text).toContain('Visit report: Annual maintenance, November 18, 2026');
-    expect(text).toContain('Outcome: Left running');
+    expect(text).toContain('Outcome: Left operating');
     expect(text).toContain('Carbon monoxide in the flue: 75 ppm air-free, well under the 400 ppm limit.');
     // The thermocouple fitted 2019-06-01 and swapped on 2026-11-18: 7 whole years.
     expect(text).toContain('Thermocouple (new: thermocouple, 24 in): the old one was 7 years old; reason: Weak output.');
     expect(text).toContain('Next yearly service: November 18, 2027.');
+    // Each checked step with its plain line from the glossary (shared/glossary/visit-steps.ts), then its items.
+    expect(text).toContain('What we checked');
+    expect(text.replace(/\s+/g, ' ')).toContain(`Carbon monoxide: ${VISIT_STEPS['Carbon monoxide']}`);
+    expect(text).not.toContain('(carbon monoxide)');
     expect(text).toMatch(/manufacturer's instructions and local codes/);
 
     const shareUrl = /https?:\/\/\S+\/s\/([A-Za-z0-9_-]{43})/.exec(mail.text ?? '')!;

@@ -338,6 +338,10 @@ describe('office screens for the life record (desktop)', () => {
     await page.getByText('Each visit keeps its own copy of the checklist').waitFor();
     await page.getByRole('button', { name: `Edit ${template.name}` }).click();
     const editor = page.getByRole('form', { name: `Edit checklist ${template.name}` });
+    // No internal code on the page: part types, item keys and readings are shown by their names only.
+    await page.getByRole('heading', { name: 'Part types' }).waitFor();
+    expect(await page.locator('main').innerText()).not.toMatch(/\b[a-z]+(?:_[a-z0-9]+)+\b|\b[a-z]+[A-Z][A-Za-z]+\b/);
+    await editor.getByText(/asks for readings: Combustion test/).first().waitFor();
     await editor.getByRole('button', { name: 'Move item 2 up' }).click();
     await editor.getByRole('button', { name: `Remove item ${before.length}` }).click();
     await editor.getByRole('button', { name: '+ Add item' }).click();

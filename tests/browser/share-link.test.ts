@@ -6,7 +6,7 @@ import { visits } from '../../server/db/schema/index';
 const fx = useBrowserFixture();
 
 describe('share link for the homeowner', () => {
-  it('the manager makes a link; a fresh browser opens it without signing in and reads the record; revoked, it says so', async () => {
+  it('the manager makes a link; a fresh browser opens it without signing in and reads the record; withdrawn, it says so and whom to ask', async () => {
     const site = await insertSite(fx.server.ctx.db, { companyId: fx.t.company.id, customerId: fx.t.customer.id, street: '3 Larkspur Row', town: 'Wrenfield' });
     const boiler = await insertAppliance(fx.server.ctx.db, { companyId: fx.t.company.id, siteId: site.id, kind: 'steam_boiler', fuel: 'natural_gas' });
     await fx.server.ctx.db.insert(visits).values({
@@ -44,7 +44,8 @@ describe('share link for the homeowner', () => {
     await page.getByRole('button', { name: 'Revoke' }).click();
     await page.getByText('Revoked').waitFor();
     await phone.reload();
-    await phone.getByText('This link has expired: ask your service company for a new one.').waitFor();
+    await phone.getByRole('heading', { name: 'This link was withdrawn' }).waitFor();
+    await phone.getByText(`${fx.t.company.name} withdrew this link, so the record is no longer shared through it. To see it again, ask ${fx.t.company.name} for a new link: call ${fx.t.company.phone}.`).waitFor();
     expect(await phone.getByText('Cleaned the gauge glass').count()).toBe(0);
     await office.close();
     await home.close();

@@ -246,7 +246,7 @@ describe('who else may open a tag', () => {
   it('a stranger sees whose tag it is and how to call them, nothing about the home', async () => {
     const { page, errors } = await phonePage();
     await page.goto(`${server.baseUrl}/t/${boilerCode}`);
-    await page.getByText(/service record is kept by/).waitFor();
+    await page.getByText(/life record is kept by/).waitFor();
     const text = await page.locator('body').innerText();
     expect(text).toContain(t.company.name);
     expect(text).not.toContain(t.customer.name);

@@ -101,14 +101,18 @@ describe('a technician on a phone', () => {
     // Part swap: the thermocouple, why it came out (asked every time, for service-life estimates), then "Replaced today".
     await page.getByRole('button', { name: /^thermocouple/ }).click();
     const sheet = page.getByRole('dialog');
-    await sheet.getByRole('button', { name: 'would not hold the pilot' }).click();
+    // The quick reasons are the thermocouple's own (shared/glossary/quick-reasons.ts), none of another part's.
+    const quick = sheet.getByRole('group', { name: 'Quick reasons' });
+    await quick.getByRole('button', { name: 'low millivolts' }).waitFor();
+    expect(await quick.getByRole('button', { name: /glass|nozzle/ }).count()).toBe(0);
+    await quick.getByRole('button', { name: 'pilot drops out' }).click();
     await sheet.getByRole('button', { name: 'Replaced today' }).click();
     await sheet.getByText('Say why the old part came out.').waitFor();
     await sheet.getByRole('radio', { name: 'Worn out or failed' }).check();
     await sheet.getByRole('button', { name: 'Replaced today' }).click();
-    await page.getByText('✓ thermocouple replaced · would not hold the pilot').waitFor();
+    await page.getByText('✓ thermocouple replaced · pilot drops out').waitFor();
     const [swapRow] = await fx.server.ctx.db.select().from(partSwaps).where(eq(partSwaps.applianceId, boiler.id));
-    expect(swapRow).toMatchObject({ cause: 'wear_or_failure', reason: 'would not hold the pilot' });
+    expect(swapRow).toMatchObject({ cause: 'wear_or_failure', reason: 'pilot drops out' });
 
     await page.getByRole('textbox', { name: 'Findings' }).fill('Cutoff tripped and stopped the burner. Pilot dropped out; thermocouple replaced.');
     await page.getByRole('button', { name: 'Left operating', exact: true }).click();
@@ -148,7 +152,7 @@ describe('a technician on a phone', () => {
     const swappedOn = removed[0]?.removedOn ?? '';
     expect([todayAtStart, todayAtEnd]).toContain(swappedOn);
     expect(current.map((p) => p.installedOn)).toEqual([swappedOn]);
-    expect(removed.map((p) => [p.removedOn, p.removalReason])).toEqual([[swappedOn, 'would not hold the pilot']]);
+    expect(removed.map((p) => [p.removedOn, p.removalReason])).toEqual([[swappedOn, 'pilot drops out']]);
     const [y, m, d] = swappedOn.split('-').map(Number);
     const swappedShown = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
     expect(await thermocouple.textContent()).toContain(`Installed ${swappedShown}`);

@@ -80,7 +80,7 @@ describe('the visit report', () => {
     expect(text).toContain('Appliance: Steam boiler, natural gas');
     expect(text).toContain('21 Fernhollow, Wrenfield');
     expect(text).toMatch(/Visit report: Annual maintenance, \w+ \d{1,2}, \d{4}/);
-    expect(text).toContain('Outcome: Left running');
+    expect(text).toContain('Outcome: Left operating');
     expect(text).toContain('Low-water safety switch (cutoff) test: passed, the burner stopped when the water was lowered, as it should.');
     await home.close();
   });

@@ -5,6 +5,7 @@ import type { componentInput } from '../../../shared/schemas/records';
 import { formatSpec, TradeInputError, type ComponentType } from '../../../shared/trade/index';
 import { catalogRepository } from '../catalog/catalog.repository';
 import type { NewComponent } from './appliances.repository';
+import { RECORD_WORDS } from '../../../shared/glossary/words';
 
 type ComponentInput = z.output<typeof componentInput>;
 
@@ -24,7 +25,7 @@ export async function componentRows(
   inputs.forEach((c, i) => {
     const entry = catalog.get(c.typeCode);
     if (!entry || !entry.active) {
-      errors[`${fieldPrefix(i)}typeCode`] = ['Pick a part type from your catalog.'];
+      errors[`${fieldPrefix(i)}typeCode`] = [`Pick one of your part types (see ${RECORD_WORDS.catalogPage}).`];
       return;
     }
     if (c.installedOn && c.installedOn > scope.today) {

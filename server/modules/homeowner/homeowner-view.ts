@@ -7,6 +7,7 @@ import { typeLabelFor } from '../due/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
 import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
+import { outcomeWords } from '../../../shared/glossary/outcomes';
 
 const MEANING = {
   replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
@@ -68,7 +69,7 @@ export async function buildHomeownerView(db: DbOrTx, companyId: string, applianc
         visitedOn: v.visitedOn,
         what: LABELS.visitType[v.type],
         outcome: v.outcome,
-        outcomeWords: v.outcome === 'shut_down_unsafe' ? `Shut down as unsafe: ${v.outcomeReason ?? 'see the technician’s note'}` : v.outcome ? 'Left running' : null,
+        outcomeWords: outcomeWords(v.outcome, v.outcomeReason),
         checked,
         replaced: swaps.filter((s) => s.visitId === v.id).map((s) => ({ part: s.label ?? typeLabelFor(s.typeCode), reason: s.reason })),
         findings: v.findings,

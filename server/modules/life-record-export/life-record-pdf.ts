@@ -3,6 +3,7 @@ import { LABELS } from '../../../shared/schemas/enums';
 import type { LifeRecordExport } from '../../../shared/schemas/life-record-export';
 import { createPdfWriter } from '../../lib/pdf-writer';
 import { SAFETY_NOTES } from '../visit-reports/visit-report-content';
+import { outcomeInSentence } from '../../../shared/glossary/outcomes';
 
 const longDate = (iso: string) =>
   new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', year: 'numeric', month: 'long', day: 'numeric' }).format(new Date(`${iso}T00:00:00Z`));
@@ -53,7 +54,7 @@ export async function renderLifeRecordPdf(doc: LifeRecordExport, photos: PdfPhot
   w.heading('Visits');
   if (!doc.visits.length) w.bullet('No completed visits yet.');
   for (const v of doc.visits) {
-    const outcome = v.outcome === 'shut_down_unsafe' ? `shut down as unsafe${v.outcomeReason ? `: ${v.outcomeReason}` : ''}` : v.outcome ? 'left running' : 'completed';
+    const outcome = v.outcome === 'shut_down_unsafe' && v.outcomeReason ? `${outcomeInSentence(v.outcome)}: ${v.outcomeReason}` : v.outcome ? outcomeInSentence(v.outcome) : 'completed';
     w.text(`${longDate(v.visitedOn)}: ${LABELS.visitType[v.type]}, ${outcome}`, { bold: true, gapAfter: 1 });
     if (v.findings.trim()) w.bullet(`Findings: ${v.findings}`);
     if (v.recommendations.trim()) w.bullet(`Recommended: ${v.recommendations}`);

@@ -1,18 +1,24 @@
 import crypto from 'node:crypto';
 import type { DbOrTx } from '../../db/client';
-import { gone, notFound } from '../../lib/http-error';
-import { SHARE_LINK_GONE_MESSAGE } from '../../../shared/schemas/homeowner';
+import { HttpError, notFound } from '../../lib/http-error';
+import { SHARE_LINK_GONE_CODES, shareLinkGoneMessage } from '../../../shared/glossary/share-links';
+import { homeownerRepository } from '../homeowner/homeowner.repository';
 import { shareLinksRepository as repo } from './share-links.repository';
 
 export const hashShareToken = (token: string) => crypto.createHash('sha256').update(token).digest('hex');
 
 /**
- * The active link behind a token, for every public route under /share/:token. Unknown tokens answer 404, expired or
- * revoked ones 410, and neither says anything about the appliance.
+ * The active link behind a token, for every public route under /share/:token. Unknown tokens answer 404; a link the
+ * company withdrew answers 410 `share_link_revoked`, one whose time ran out 410 `share_link_expired`, each naming the
+ * company and its phone to ask for a new one and saying nothing about the appliance.
  */
 export async function resolveShareToken(db: DbOrTx, token: string) {
   const row = await repo.findByHash(db, hashShareToken(token));
   if (!row) throw notFound('Share link');
-  if (row.revokedAt || row.expiresAt <= new Date()) throw gone(SHARE_LINK_GONE_MESSAGE);
+  const why = row.revokedAt ? 'revoked' : row.expiresAt <= new Date() ? 'expired' : null;
+  if (why) {
+    const company = await homeownerRepository.company(db, row.companyId);
+    throw new HttpError(410, SHARE_LINK_GONE_CODES[why], shareLinkGoneMessage(why, company));
+  }
   return row;
 }

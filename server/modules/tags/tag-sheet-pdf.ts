@@ -2,6 +2,7 @@ import QRCode from 'qrcode';
 import { PDFDocument, rgb, StandardFonts, type PDFPage } from 'pdf-lib';
 import { formatTagCode } from '../../../shared/tags/tag-code';
 import { PT_PER_IN, TAG_FORMATS, tagsPerPage, type TagFormat } from './tag-formats';
+import { RECORD_WORDS } from '../../../shared/glossary/words';
 
 export type TagSheetInput = { codes: string[]; baseUrl: string; companyName: string; format: TagFormat['id'] };
 
@@ -74,7 +75,7 @@ export async function renderTagSheetPdf(input: TagSheetInput): Promise<Uint8Arra
     const codeSize = Math.min(large ? 24 : 12, textW / bold.widthOfTextAtSize(printed, 1));
     page.drawText(printed, { x: textX, y: top - pad - codeSize, size: codeSize, font: bold });
     const small = large ? 10 : 6.5;
-    const lines = [...wrap(input.companyName, (t) => regular.widthOfTextAtSize(t, small) <= textW), ...wrap('Scan for this appliance’s service record', (t) => regular.widthOfTextAtSize(t, small) <= textW)];
+    const lines = [...wrap(input.companyName, (t) => regular.widthOfTextAtSize(t, small) <= textW), ...wrap(`Scan for this appliance’s ${RECORD_WORDS.lifeRecord}`, (t) => regular.widthOfTextAtSize(t, small) <= textW)];
     lines.slice(0, large ? 6 : 4).forEach((line, k) => {
       page.drawText(line, { x: textX, y: top - pad - codeSize - (k + 1) * (small + 2) - 2, size: small, font: regular, color: rgb(0.2, 0.2, 0.2) });
     });

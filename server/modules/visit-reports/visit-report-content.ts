@@ -10,6 +10,7 @@ import { homeownerRepository } from '../homeowner/homeowner.repository';
 import { typeLabelFor } from '../due/type-label';
 import { visitsRepository } from '../visits/visits.repository';
 import { visitAsCorrected } from './visit-as-corrected';
+import { outcomeWords } from '../../../shared/glossary/outcomes';
 
 export type VisitReport = {
   company: { name: string; phone: string };
@@ -86,7 +87,7 @@ export async function loadVisitReport(db: DbOrTx, companyId: string, visitId: st
       visitedOn: visit.visitedOn,
       what: LABELS.visitType[visit.type],
       technicians: visit.technicianIds.map((id) => names.get(id) ?? '').filter(Boolean),
-      outcomeWords: unsafe ? `Shut down as unsafe: ${reason}` : 'Left running',
+      outcomeWords: outcomeWords(visit.outcome, reason) ?? 'Completed',
     },
     unsafe: unsafe
       ? { headline: 'This appliance was shut down as unsafe and must not be used.', reason, mustDo: unsafeSteps(company) }

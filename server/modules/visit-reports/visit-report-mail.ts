@@ -1,4 +1,5 @@
 import type { VisitReport } from './visit-report-content';
+import { RECORD_WORDS } from '../../../shared/glossary/words';
 
 const longDate = (iso: string) =>
   new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', year: 'numeric', month: 'long', day: 'numeric' }).format(new Date(`${iso}T00:00:00Z`));
@@ -22,7 +23,7 @@ function lines(r: VisitReport, links: Links): string[] {
     `Outcome: ${r.visit.outcomeWords}.`,
     ...r.readings.map((m) => `- ${m.reading}: ${m.value}, ${m.meaning}.`),
     '',
-    'The full visit report is attached as a PDF. The appliance’s record, with every visit, is here:',
+    `The full visit report is attached as a PDF. The appliance’s ${RECORD_WORDS.lifeRecord}, with every visit, is here:`,
     links.shareUrl,
     '',
     ...r.safetyNotes,
@@ -49,7 +50,7 @@ export function visitReportHtml(r: VisitReport, links: Links): string {
     `<p>${e(r.company.name)} visited your ${e(r.appliance.title.toLowerCase())} at ${e(r.appliance.address)} on ${e(longDate(r.visit.visitedOn))} (${e(r.visit.what.toLowerCase())}).</p>`,
     `<p><strong>Outcome: ${e(r.visit.outcomeWords)}.</strong></p>`,
     r.readings.length ? `<ul>${r.readings.map((m) => `<li>${e(`${m.reading}: ${m.value}, ${m.meaning}.`)}</li>`).join('')}</ul>` : '',
-    `<p>The full visit report is attached as a PDF. <a href="${e(links.shareUrl)}">Open the appliance’s record</a> to see every visit.</p>`,
+    `<p>The full visit report is attached as a PDF. <a href="${e(links.shareUrl)}">Open the appliance’s ${RECORD_WORDS.lifeRecord}</a> to see every visit.</p>`,
     `<p>${r.safetyNotes.map(e).join('<br>')}</p>`,
     `<p style="font-size: 0.9em;">You get this e-mail because ${e(r.company.name)} services your heating equipment. <a href="${e(links.unsubscribeUrl)}">Stop e-mails from us</a>.</p>`,
     '</body></html>',

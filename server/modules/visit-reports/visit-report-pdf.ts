@@ -1,4 +1,5 @@
 import { createPdfWriter } from '../../lib/pdf-writer';
+import { explainSteps } from '../../../shared/glossary/visit-steps';
 import type { VisitReport } from './visit-report-content';
 
 const longDate = (iso: string) =>
@@ -44,8 +45,12 @@ export async function renderVisitReportPdf(r: VisitReport): Promise<Uint8Array> 
     }
   }
   if (r.checklist.length) {
-    w.heading('Checklist');
-    for (const c of r.checklist) w.bullet(`${capital(c.result)} (${c.section.toLowerCase()}): ${c.label}`);
+    w.heading('What we checked');
+    const sections = [...new Set(r.checklist.map((c) => c.section))];
+    for (const { step, why } of explainSteps(sections)) {
+      w.text(why ? `${step}: ${why}` : step, { size: 10, bold: true, gapAfter: 1 });
+      for (const c of r.checklist.filter((i) => i.section === step)) w.bullet(`${capital(c.result)}: ${c.label}`);
+    }
   }
   w.heading('Coming due');
   if (r.nextAnnualServiceDue) w.bullet(`Next yearly service: ${longDate(r.nextAnnualServiceDue)}.`);

@@ -7,6 +7,7 @@ import { keyReadings, type VisitResults } from './visit-results';
 import { visitsRepository, type VisitRow } from './visits.repository';
 import { appendTimelineEvent } from '../timeline/timeline.repository';
 import { typeLabelFor } from '../due/type-label';
+import { outcomeInSentence } from '../../../shared/glossary/outcomes';
 
 type Finding = { inspected: boolean; failedNote: string | null };
 
@@ -59,7 +60,7 @@ export async function applyFindingsToComponents(tx: Tx, companyId: string, actor
 
 /** "Annual maintenance: left operating. Replaced: thermocouple (24 in)." */
 export function visitSummary(visit: VisitRow, swaps: { typeCode: string; catalogLabel: string | null; newSpecKey: string }[]): string {
-  const parts = [`${LABELS.visitType[visit.type]}${visit.outcome ? `: ${LABELS.visitOutcome[visit.outcome].toLowerCase()}` : ' completed'}.`];
+  const parts = [`${LABELS.visitType[visit.type]}${visit.outcome ? `: ${outcomeInSentence(visit.outcome)}` : ' completed'}.`];
   if (swaps.length) {
     const replaced = swaps.map((s) => `${typeLabelFor(s.typeCode, s.catalogLabel)}${s.newSpecKey ? ` (${s.newSpecKey})` : ''}`);
     parts.push(`Replaced: ${replaced.join(', ')}.`);

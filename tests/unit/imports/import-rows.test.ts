@@ -97,7 +97,7 @@ describe('one row', () => {
       'row 214, Customer: is empty; every row needs it.',
       "row 214, Kind: 'heat pump' is not one we know; use one of: Steam boiler, Hot-water boiler, Water heater, Furnace.",
       "row 214, Installed: '13/31/2004' is not a date; use YYYY-MM-DD, MM/DD/YYYY or a month name such as Jan 6, 2004.",
-      "row 214, Part 1: 'flux capacitor' is not a part type of your catalog.",
+      "row 214, Part 1: 'flux capacitor' is not one of your part types (see Parts & checklists).",
     ]);
   });
 

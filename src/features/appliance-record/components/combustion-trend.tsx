@@ -2,6 +2,7 @@ import { useTimeline } from '../api/get-timeline';
 import { formatDate } from '../lib/labels';
 import { trendPoints, type TrendPoint } from '../lib/reading-trend';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 const fmt = (n: number | null, digits = 0) => (n == null ? '—' : n.toFixed(digits));
 
@@ -10,7 +11,7 @@ export function CombustionTrend({ applianceId }: { applianceId: string }) {
   const points = trendPoints(readings.data?.pages.flatMap((p) => p.items) ?? []);
   if (readings.isPending || points.length === 0) return null;
   return (
-    <Section folded title="Combustion over the years">
+    <Section folded title={RECORD_SECTIONS.combustionTrend}>
       <Sparkline points={points} />
       <table className="tabular w-full text-left text-sm">
         <thead>

@@ -2,12 +2,13 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import type { ComponentDto } from '@shared/schemas/records';
 import { dueStatus, formatDate } from '../lib/labels';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 export function ComponentsList({ components }: { components: ComponentDto[] }) {
   const current = components.filter((c) => !c.removedOn);
   const removed = components.filter((c) => c.removedOn);
   return (
-    <Section folded title="Parts" summary={`${current.length} in service${removed.length ? `, ${removed.length} removed` : ''}`}>
+    <Section folded title={RECORD_SECTIONS.parts} summary={`${current.length} in service${removed.length ? `, ${removed.length} removed` : ''}`}>
       {current.length === 0 ? (
         <p>No parts recorded.</p>
       ) : (

@@ -4,6 +4,7 @@ import { formatDueDate } from '@shared/format/dates';
 import { groupDue, type DueGroup } from '../lib/group-due';
 import { dueStatus } from '../lib/labels';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 const KIND_WORDS = { inspection: ['inspection', 'inspections'], replacement: ['replacement', 'replacements'] } as const;
 
@@ -16,7 +17,7 @@ export function DueList({ due, today }: { due: ApplianceRecordDto['due']; today:
   const later = groupDue(due.filter((d) => d.status === 'ok'));
   const laterCount = later.reduce((n, g) => n + g.items.length, 0);
   return (
-    <Section title="What is due">
+    <Section title={RECORD_SECTIONS.whatIsDue}>
       {due.length === 0 && <p>Nothing due is recorded.</p>}
       {due.length > 0 && now.length === 0 && <p>Nothing is due soon.</p>}
       {now.length > 0 && (

@@ -7,6 +7,7 @@ import { makeupWaterEntryInput } from '@shared/schemas/makeup-water';
 import { todayInTimeZone } from '@shared/dates';
 import { useAddMakeupWater, useMakeupWater } from '../api/makeup-water';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 const gal = (n: number | null | undefined, digits = 1) => (n == null ? '—' : `${n.toFixed(digits)} gal`);
 
@@ -63,7 +64,7 @@ export function MakeupWaterSection({ applianceId, timeZone, canRecord }: { appli
   }
 
   return (
-    <Section folded title="Makeup water">
+    <Section folded title={RECORD_SECTIONS.makeupWater}>
       <p className="mb-2 text-sm">
         A steam boiler that needs water more often than about once a month should be checked for leaks: excess makeup water brings in oxygen and minerals
         that corrode the boiler (common practice).

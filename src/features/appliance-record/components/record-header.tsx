@@ -2,12 +2,13 @@ import { LABELS } from '@shared/schemas/enums';
 import type { ApplianceRecordDto } from '@shared/schemas/records';
 import { btuh, formatDate, makeModel } from '../lib/labels';
 import { Fact, Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 export function RecordHeader({ record }: { record: ApplianceRecordDto }) {
   const { appliance: a, site, lastVisit } = record;
   const rating = btuh(a.inputBtuh) ?? (a.firingRateGph != null ? `${a.firingRateGph} gph` : 'Not recorded');
   return (
-    <Section title="What it is">
+    <Section title={RECORD_SECTIONS.whatItIs}>
       <dl className="grid grid-cols-2 gap-x-3 gap-y-2">
         <Fact label="Construction">{LABELS.construction[a.construction]}</Fact>
         <Fact label="Age">{record.ageYears == null ? 'Unknown' : `${record.ageYears} ${record.ageYears === 1 ? 'year' : 'years'}`}</Fact>

@@ -5,6 +5,7 @@ import { formatInstant } from '@shared/format/dates';
 import { TRANSFER_CODE_DAYS, TRANSFER_WHAT_IS_COPIED } from '@shared/transfers/transfer-words';
 import { useCreateRecordTransfer, useRecordTransfers, useWithdrawRecordTransfer } from '../api/record-transfers';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 const STATUS = { open: ['ok', 'Open'], used: ['info', 'Used'], withdrawn: ['info', 'Withdrawn'], expired: ['info', 'Expired'] } as const;
 
@@ -14,7 +15,7 @@ export function RecordTransferSection({ applianceId, timeZone }: { applianceId: 
   const create = useCreateRecordTransfer(applianceId);
   const withdraw = useWithdrawRecordTransfer(applianceId);
   return (
-    <Section title="Transfer to another company">
+    <Section title={RECORD_SECTIONS.transfer}>
       <p className="mb-2 text-sm">
         When the homeowner moves to another heating-service company, make a code at their request and give it to them. {TRANSFER_WHAT_IS_COPIED} The code
         works once, for {TRANSFER_CODE_DAYS} days.

@@ -5,6 +5,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { ApiError } from '@/lib/api-client';
 import { useCreateShareLink, useRevokeShareLink, useShareLinks } from '../api/share-links';
 import { Section } from './section';
+import { RECORD_SECTIONS } from '@shared/glossary';
 
 const STATUS = { active: ['ok', 'Active'], expired: ['info', 'Expired'], revoked: ['info', 'Revoked'] } as const;
 
@@ -19,7 +20,7 @@ export function ShareLinksSection({ applianceId, canRevoke }: { applianceId: str
   const details = create.error instanceof ApiError ? create.error.details : undefined;
 
   return (
-    <Section title="Share with the homeowner">
+    <Section title={RECORD_SECTIONS.share}>
       <p className="mb-2 text-sm">
         A share link lets the owner read this record in plain words, without an account. It shows no office notes. Anyone holding the link can open
         it, so send it only to the owner.

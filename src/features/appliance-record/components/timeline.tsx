@@ -3,27 +3,28 @@ import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import type { TimelineKind } from '@shared/schemas/enums';
+import { LABELS, RECORD_SECTIONS } from '@shared/glossary';
 import type { TimelineEventDto } from '@shared/schemas/records';
 import { useTimeline } from '../api/get-timeline';
 import { formatDateTime } from '../lib/labels';
 import { Section } from './section';
 
-const KINDS: { kind: TimelineKind; label: string; icon: string }[] = [
-  { kind: 'visit', label: 'Visits', icon: '◆' },
-  { kind: 'part_swap', label: 'Part swaps', icon: '⇄' },
-  { kind: 'reading', label: 'Readings', icon: '◔' },
-  { kind: 'install', label: 'Installs', icon: '+' },
-  { kind: 'amendment', label: 'Amendments', icon: '✎' },
-  { kind: 'status', label: 'Status', icon: '●' },
-  { kind: 'note', label: 'Notes', icon: '✉' },
-  { kind: 'photo', label: 'Photos', icon: '▣' },
-  { kind: 'makeup_water', label: 'Makeup water', icon: '≈' },
-  { kind: 'reminder', label: 'Reminders', icon: '◷' },
-  { kind: 'booking', label: 'Bookings', icon: '▦' },
-  { kind: 'import', label: 'Imports', icon: '⇣' },
+const KINDS: { kind: TimelineKind; icon: string }[] = [
+  { kind: 'visit', icon: '◆' },
+  { kind: 'part_swap', icon: '⇄' },
+  { kind: 'reading', icon: '◔' },
+  { kind: 'install', icon: '+' },
+  { kind: 'amendment', icon: '✎' },
+  { kind: 'status', icon: '●' },
+  { kind: 'note', icon: '✉' },
+  { kind: 'photo', icon: '▣' },
+  { kind: 'makeup_water', icon: '≈' },
+  { kind: 'reminder', icon: '◷' },
+  { kind: 'booking', icon: '▦' },
+  { kind: 'import', icon: '⇣' },
 ];
 const ICON = Object.fromEntries(KINDS.map((k) => [k.kind, k.icon])) as Record<TimelineKind, string>;
-const WORD = Object.fromEntries(KINDS.map((k) => [k.kind, k.label])) as Record<TimelineKind, string>;
+const WORD: Record<TimelineKind, string> = LABELS.timelineKind;
 
 export function Timeline({ applianceId }: { applianceId: string }) {
   const [kind, setKind] = useState<TimelineKind | undefined>(undefined);
@@ -31,14 +32,14 @@ export function Timeline({ applianceId }: { applianceId: string }) {
   const events = timeline.data?.pages.flatMap((p) => p.items) ?? [];
 
   return (
-    <Section folded title="History">
+    <Section folded title={RECORD_SECTIONS.history}>
       <div role="group" aria-label="Show only" className="-mx-1 mb-2 flex gap-1 overflow-x-auto pb-1">
         <Chip active={kind === undefined} onClick={() => setKind(undefined)}>
           All
         </Chip>
         {KINDS.slice(0, 6).map((k) => (
           <Chip key={k.kind} active={kind === k.kind} onClick={() => setKind(k.kind)}>
-            {k.label}
+            {WORD[k.kind]}
           </Chip>
         ))}
       </div>

@@ -79,18 +79,15 @@ export function ChecklistTemplateEditor({ template, onClose }: { template: Check
             <li
               key={item.rowId}
               aria-label={`Item ${i + 1}`}
+              data-item-key={item.key || undefined}
               className={`rounded-plate border-2 p-3 ${hasErrors ? 'border-due bg-due-soft/30' : 'border-plate-line bg-plate'}`}
             >
               <div className="mb-2 flex flex-wrap items-center gap-2">
                 <span className="font-semibold">
                   {hasErrors && <span aria-hidden="true">⚠ </span>}Item {i + 1}
                 </span>
-                {item.key ? (
-                  <span className="text-xs text-iron-muted">key {item.key}</span>
-                ) : (
-                  <span className="text-xs text-iron-muted">new item</span>
-                )}
-                {item.readings?.length ? <span className="text-xs text-iron-muted">· asks for readings: {item.readings.join(', ')}</span> : null}
+                {!item.key && <span className="text-xs text-iron-muted">new item</span>}
+                {item.readings?.length ? <span className="text-xs text-iron-muted">· asks for readings: {item.readings.map(readingLabel).join(', ')}</span> : null}
                 <div className="ml-auto flex gap-1">
                   <Button variant="ghost" disabled={i === 0} onClick={() => move(i, -1)} aria-label={`Move item ${i + 1} up`}>
                     ↑
@@ -140,6 +137,9 @@ export function ChecklistTemplateEditor({ template, onClose }: { template: Check
     </form>
   );
 }
+
+/** A reading's name; an unknown key (from an older template) made readable, never shown as a code. */
+const readingLabel = (key: string) => (Object.hasOwn(READING_LABELS, key) ? READING_LABELS[key as keyof typeof READING_LABELS] : key.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase());
 
 /** Which readings a visit from this template must record (or skip with a reason) before it can be completed. */
 function RequiredReadingsNote({ requiredReadings }: { requiredReadings: ChecklistTemplateDto['requiredReadings'] }) {

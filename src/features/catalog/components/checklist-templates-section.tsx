@@ -7,6 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import { Spinner } from '@/components/ui/page';
 import { useChecklistTemplates } from '@/lib/resources/checklist-templates';
 import { ChecklistTemplateEditor } from './checklist-template-editor';
+import { RECORD_WORDS } from '@shared/glossary';
 
 export function ChecklistTemplatesSection() {
   const templates = useChecklistTemplates();
@@ -14,7 +15,7 @@ export function ChecklistTemplatesSection() {
   const editing = templates.data?.find((t) => t.id === editingId);
 
   return (
-    <Card title={<span id="checklist-templates">Checklist templates</span>}>
+    <Card title={<span id="checklist-templates">{RECORD_WORDS.checklistTemplates}</span>}>
       <div className="mb-3">
         <Notice title="Edits never change history">
           Each visit keeps its own copy of the checklist from the day it was started. Changing a template here only

@@ -9,14 +9,14 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { useComponentTypes } from '@/lib/resources/component-types';
 import { useUpdateComponentType } from '../api/update-component-type';
 import { describeFailure, zodFieldErrors } from '@/lib/form-errors';
+import { PART_GROUP_LABELS, partGroupName, RECORD_WORDS } from '@shared/glossary';
 
-const GROUPS: Record<string, string> = { gas: 'Gas burner and controls', oil: 'Oil burner', steam: 'Steam', hot_water: 'Hot water', common: 'Common' };
 
 export function ComponentCatalogSection() {
   const types = useComponentTypes();
-  const groups = Object.keys(GROUPS).concat([...new Set((types.data ?? []).map((t) => t.group))].filter((g) => !(g in GROUPS)));
+  const groups = Object.keys(PART_GROUP_LABELS).concat([...new Set((types.data ?? []).map((t) => t.group))].filter((g) => !(g in PART_GROUP_LABELS)));
   return (
-    <Card title={<span id="component-catalog">Component catalog</span>}>
+    <Card title={<span id="part-types">{RECORD_WORDS.partTypes}</span>}>
       <p className="mb-3 text-sm text-iron-muted">
         The part types your technicians pick from. Rename one to your shop&rsquo;s word for it. A deactivated type is no longer
         offered for new parts; parts already recorded keep it and stay readable.
@@ -28,7 +28,7 @@ export function ComponentCatalogSection() {
         if (!entries.length) return null;
         return (
           <section key={g} className="mb-4">
-            <h3 className="mb-1 font-semibold">{GROUPS[g] ?? g}</h3>
+            <h3 className="mb-1 font-semibold">{partGroupName(g)}</h3>
             <ul className="divide-y divide-plate-line rounded-plate border border-plate-line">
               {entries.map((t) => (
                 <CatalogRow key={t.code} entry={t} />

@@ -17,6 +17,7 @@ import type { ServiceLifeDto } from '@shared/schemas/service-life';
 import { LearnedLife } from './learned-life';
 import { describeFailure, unclaimedErrors, zodFieldErrors } from '@/lib/form-errors';
 import { useFocusFirstError } from '@/lib/use-focus-first-error';
+import { RECORD_WORDS } from '@shared/glossary';
 
 const BASIS: Record<DueRuleBasis, { label: string; status: Status }> = {
   published: { label: 'Published source', status: 'ok' },
@@ -36,7 +37,7 @@ export function DueRulesSection() {
   const learned = useServiceLife();
   const byType = new Map((learned.data ?? []).map((e) => [e.componentType, e]));
   return (
-    <Card title={<span id="due-rules">Due rules</span>}>
+    <Card title={<span id="due-rules">{RECORD_WORDS.dueRules}</span>}>
       <p className="mb-3 text-sm text-iron-muted">
         How often each part is inspected and when it is replaced, and what that rule rests on. Saving a rule recomputes
         every due date in the company. Where the manufacturer&rsquo;s instructions say otherwise, they govern. Beside a rule,

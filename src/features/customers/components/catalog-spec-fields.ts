@@ -1,5 +1,6 @@
 import type { CatalogEntryDto } from '@shared/schemas/records';
 import { COMPONENT_TYPES, type SpecField } from '@shared/trade';
+import { PART_GROUP_LABELS, partGroupName } from '@shared/glossary';
 
 /** A spec field as the form shows it, whichever of the catalog's stored shapes it came from. */
 export type FormSpecField =
@@ -43,14 +44,7 @@ function tradeOptionLabels(code: string, key: string): Record<string, string> {
   return field?.kind === 'choice' ? field.options : {};
 }
 
-export const GROUP_LABELS: Record<string, string> = {
-  gas: 'Gas burner and controls',
-  oil: 'Oil burner',
-  steam: 'Steam',
-  hot_water: 'Hot water',
-  common: 'Common',
-};
-const GROUP_ORDER = Object.keys(GROUP_LABELS);
+const GROUP_ORDER = Object.keys(PART_GROUP_LABELS);
 
 /** Active catalog entries grouped for an <optgroup> list, in the trade's usual order. */
 export function groupedEntries(entries: CatalogEntryDto[]): { group: string; label: string; entries: CatalogEntryDto[] }[] {
@@ -61,5 +55,5 @@ export function groupedEntries(entries: CatalogEntryDto[]): { group: string; lab
   }
   return [...groups.entries()]
     .sort(([a], [b]) => (GROUP_ORDER.indexOf(a) + 1 || 99) - (GROUP_ORDER.indexOf(b) + 1 || 99))
-    .map(([group, list]) => ({ group, label: GROUP_LABELS[group] ?? group, entries: list.sort((x, y) => x.label.localeCompare(y.label)) }));
+    .map(([group, list]) => ({ group, label: partGroupName(group), entries: list.sort((x, y) => x.label.localeCompare(y.label)) }));
 }

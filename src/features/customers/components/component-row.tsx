@@ -6,6 +6,7 @@ import type { ComponentDraft } from './appliance-draft';
 import { formSpecFields, groupedEntries, unitText } from './catalog-spec-fields';
 import { CheckboxField } from './checkbox-field';
 import { unclaimedErrors } from '@/lib/form-errors';
+import { partName } from '@shared/glossary';
 
 const ROW_FIELDS = ['typeCode', 'installedOn', 'originalWithAppliance', 'note'];
 
@@ -57,7 +58,7 @@ export function ComponentRow({
           error={errors.typeCode}
         >
           <option value="">Choose the part…</option>
-          {row.typeCode && !entry && <option value={row.typeCode}>{row.typeCode} (not in the catalog)</option>}
+          {row.typeCode && !entry && <option value={row.typeCode}>{partName(row.typeCode)} (not among your part types)</option>}
           {groupedEntries(catalog).map((g) => (
             <optgroup key={g.group} label={g.label}>
               {g.entries.map((e) => (

@@ -4,10 +4,12 @@ import { Card } from '@/components/ui/card';
 import { useIsClient } from '@/lib/use-is-client';
 import type { HomeownerViewDto } from '@shared/schemas/homeowner';
 import { photoPath, type RecordSource } from '../api/record-source';
+import { LABELS } from '@shared/glossary';
+import { formatCalendarDate } from '@shared/format/dates';
 
 type Photo = HomeownerViewDto['photos'][number];
-const KIND_WORDS: Record<string, string> = { nameplate: 'Rating plate', before: 'Before the work', after: 'After the work', finding: 'What was found', other: 'Photo' };
-const describe = (p: Photo) => p.caption ?? `${KIND_WORDS[p.kind] ?? 'Photo'}, ${p.takenOn}`;
+const KIND_WORDS: Record<string, string> = LABELS.photoKindForHousehold;
+const describe = (p: Photo) => p.caption ?? `${KIND_WORDS[p.kind] ?? 'Photo'}, ${formatCalendarDate(p.takenOn, { long: true })}`;
 
 /** The photos the company marked for the homeowner: small thumbnails that load as they scroll in, a tap opens the large one. */
 export function HomeownerPhotos({ source, photos }: { source: RecordSource; photos: Photo[] }) {

@@ -8,6 +8,7 @@ import { lifeRecordPath, visitReportPath, type RecordSource } from '../api/recor
 import { HomeownerPhotos } from './homeowner-photos';
 import { SafetyNotes } from './safety-notes';
 import { ServiceRequestForm } from './service-request-form';
+import { explainSteps, OUTCOME_LABELS, RECORD_SECTIONS } from '@shared/glossary';
 
 const date = (iso: string) => formatCalendarDate(iso, { long: true });
 
@@ -29,7 +30,7 @@ export function HomeownerRecord({ view, source, after }: { view: HomeownerViewDt
           <p className="mt-1 font-semibold">Do not turn it back on or relight it yourself. Call {view.company.name} to have the fault repaired first.</p>
         </Notice>
       )}
-      <Card title="What it is">
+      <Card title={RECORD_SECTIONS.whatItIs}>
         <p>
           {a.title}
           {a.makeAndModel ? `, made by ${a.makeAndModel}` : ''}.
@@ -80,11 +81,11 @@ export function HomeownerRecord({ view, source, after }: { view: HomeownerViewDt
                 {date(v.visitedOn)} · {v.what}
               </p>
               {v.outcome === 'shut_down_unsafe' ? (
-                <StatusBadge status="unsafe">{v.outcomeWords ?? 'Shut down as unsafe'}</StatusBadge>
+                <StatusBadge status="unsafe">{v.outcomeWords ?? OUTCOME_LABELS.shut_down_unsafe}</StatusBadge>
               ) : (
                 v.outcomeWords && <StatusBadge status="ok">{v.outcomeWords}</StatusBadge>
               )}
-              {v.checked.length > 0 && <p className="mt-1 text-sm">Checked: {v.checked.join(', ')}.</p>}
+              {v.checked.length > 0 && <CheckedSteps sections={v.checked} />}
               {v.replaced.map((r) => (
                 <p key={r.part} className="text-sm">
                   Replaced the {r.part}
@@ -131,6 +132,23 @@ export function HomeownerRecord({ view, source, after }: { view: HomeownerViewDt
       <p className="text-center text-sm text-iron-muted">
         Kept by {view.company.name} · {view.company.phone}
       </p>
+    </div>
+  );
+}
+
+/** What was checked on a visit, each step with its plain "what we checked and why" line from the glossary. */
+function CheckedSteps({ sections }: { sections: string[] }) {
+  return (
+    <div className="mt-1 text-sm">
+      <p className="font-semibold">What we checked</p>
+      <ul className="ml-4 list-disc">
+        {explainSteps(sections).map(({ step, why }) => (
+          <li key={step} data-step={step}>
+            <span className="font-semibold">{step}</span>
+            {why ? `: ${why}` : ''}
+          </li>
+        ))}
+      </ul>
     </div>
   );
 }

@@ -1,3 +1,4 @@
+import { LABELS } from '@shared/glossary';
 import { useState } from 'react';
 import type { ImportMapping } from '@shared/imports/import-fields';
 import type { ImportFileDto } from '@shared/schemas/imports';
@@ -31,7 +32,7 @@ export function ImportsPage() {
                 <button type="button" className="min-h-tap text-left underline" onClick={() => setFileId(f.id)}>
                   {f.fileName}
                 </button>{' '}
-                · {f.rowCount} rows · {f.status === 'done' ? 'imported' : f.status === 'uploaded' ? 'not imported yet' : f.status}
+                · {f.rowCount} rows · {LABELS.importStatus[f.status]}
               </li>
             ))}
           </ul>

@@ -3,6 +3,7 @@ import { LogoMark } from '@/components/ui/logo-mark';
 import { Button } from '@/components/ui/button';
 import { Spinner } from '@/components/ui/page';
 import { useUnsubscribe, useUnsubscribeStatus } from '../api/unsubscribe';
+import { RECORD_WORDS } from '@shared/glossary';
 
 /** Opened from a reminder e-mail, without signing in: one button stops the reminder e-mails. */
 export function UnsubscribePage() {
@@ -36,7 +37,7 @@ export function UnsubscribePage() {
         ) : (
           <>
             <h1 className="text-xl font-bold">Stop reminder e-mails from {status.data.companyName}?</h1>
-            <p>You will no longer get e-mails saying your yearly service or a part is due. Your service record stays as it is.</p>
+            <p>You will no longer get e-mails saying your yearly service or a part is due. Your appliance&apos;s {RECORD_WORDS.lifeRecord} stays as it is.</p>
             <div>
               <Button disabled={stop.isPending} onClick={() => stop.mutate()}>
                 {stop.isPending ? 'Stopping…' : 'Stop reminder e-mails'}

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Page } from '@/components/ui/page';
 import { formatTagCode } from '@shared/tags/tag-code';
+import { RECORD_WORDS } from '@shared/glossary';
 
 const telHref = (phone: string) => `tel:${phone.replace(/[^\d+]/g, '')}`;
 
@@ -25,7 +26,7 @@ export function PublicTagInfo({
         </Notice>
       )}
       <p className="text-lg">
-        This appliance&apos;s service record is kept by <strong>{companyName}</strong>.
+        This appliance&apos;s {RECORD_WORDS.lifeRecord} is kept by <strong>{companyName}</strong>.
       </p>
       {companyPhone && (
         <a

@@ -14,6 +14,7 @@ import { READING_LABELS } from '@shared/visits/reading-labels';
 import { AmendForm } from './amend-form';
 import { Panel } from './inputs';
 import { ServerResults } from './server-results';
+import { OUTCOME_LABELS } from '@shared/glossary';
 
 const dayFormat = { format: (isoDate: string) => formatCalendarDate(isoDate) };
 const stampFormat = { format: (iso: string) => formatInstant(iso, Intl.DateTimeFormat().resolvedOptions().timeZone) };
@@ -63,11 +64,11 @@ export function CompletedVisit({ visit, justCompleted = false, changes }: { visi
         </a>
       </p>
       {visit.outcome === 'shut_down_unsafe' ? (
-        <Notice kind="danger" title="Shut down as unsafe">
+        <Notice kind="danger" title={OUTCOME_LABELS.shut_down_unsafe}>
           {visit.outcomeReason} {visit.outcomeToldWhom && `Told: ${visit.outcomeToldWhom}.`}
         </Notice>
       ) : visit.outcome === 'left_operating' ? (
-        <StatusBadge status="ok">Left operating</StatusBadge>
+        <StatusBadge status="ok">{OUTCOME_LABELS.left_operating}</StatusBadge>
       ) : null}
 
       <Panel title="As recorded on the day">
@@ -75,7 +76,7 @@ export function CompletedVisit({ visit, justCompleted = false, changes }: { visi
         <Field label="Recommendations" value={visit.recommendations} />
         {visit.customerAckName && <Field label="Acknowledged by the customer" value={visit.customerAckName} />}
         {visit.swaps.length > 0 && (
-          <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${s.swappedOn})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
+          <Field label="Parts swapped" value={visit.swaps.map((s) => `${s.typeLabel} (${dayFormat.format(s.swappedOn)})${s.reason ? `: ${s.reason}` : ''}`).join('; ')} />
         )}
         <ServerResults results={visit.results} title="Results" />
         {skipped.length > 0 && (
@@ -183,7 +184,7 @@ function ChangeList({ changes }: { changes: Record<string, unknown> }) {
 }
 
 function describe(key: string, v: unknown): string {
-  if (key === 'swaps' && Array.isArray(v)) return v.map((s: { swappedOn?: string; previousSwappedOn?: string }) => `${s.previousSwappedOn ?? '?'} → ${s.swappedOn ?? '?'}`).join('; ');
+  if (key === 'swaps' && Array.isArray(v)) return v.map((s: { swappedOn?: string; previousSwappedOn?: string }) => `${s.previousSwappedOn ? dayFormat.format(s.previousSwappedOn) : '?'} → ${s.swappedOn ? dayFormat.format(s.swappedOn) : '?'}`).join('; ');
   if (key === 'outcome' && v && typeof v === 'object') {
     const o = v as { outcome?: keyof typeof LABELS.visitOutcome; outcomeReason?: string };
     return [o.outcome ? LABELS.visitOutcome[o.outcome] : null, o.outcomeReason].filter(Boolean).join(': ');

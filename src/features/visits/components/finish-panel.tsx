@@ -34,7 +34,7 @@ export function FinishPanel({
       {showError && (
         <Notice kind="danger" title="Not completed">
           {completeError instanceof ApiError && completeError.offline
-            ? 'No signal: completing needs the server. Everything is saved on this phone; try again when signal returns.'
+            ? 'No signal: a visit can only be completed with signal. Everything is saved on this phone; try again when signal returns.'
             : completeError.message}
         </Notice>
       )}

@@ -2,6 +2,7 @@ import { Notice } from '@/components/ui/notice';
 import type { VisitOutcome } from '@shared/schemas/enums';
 import { ChoiceButtons, Panel, TextArea, TextInput } from './inputs';
 import { useDraft } from './draft-context';
+import { OUTCOME_LABELS } from '@shared/glossary';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 /** An ISO instant as the value of a datetime-local input, in the phone's own time. */
@@ -32,8 +33,8 @@ export function OutcomeSection({ alerts, serverErrors }: { alerts: string[]; ser
         <ChoiceButtons<VisitOutcome>
           label="Outcome"
           choices={[
-            { value: 'left_operating', label: 'Left operating', icon: '✓', tone: 'ok' },
-            { value: 'shut_down_unsafe', label: 'Shut down as unsafe', icon: '✖', tone: 'due' },
+            { value: 'left_operating', label: OUTCOME_LABELS.left_operating, icon: '✓', tone: 'ok' },
+            { value: 'shut_down_unsafe', label: OUTCOME_LABELS.shut_down_unsafe, icon: '✖', tone: 'due' },
           ]}
           value={fields.outcome}
           onChange={(outcome) => set({ outcome, outcomeToldAt: outcome === 'shut_down_unsafe' || warned ? (fields.outcomeToldAt ?? now()) : fields.outcomeToldAt })}

@@ -1,5 +1,6 @@
 import { formatBtuh } from '@shared/format/quantities';
 import { describeGaugeGlassLevel, type CombustionAnalysis, type GaugeGlassAssessment, type ThermocoupleAssessment, type TradeFlag } from '@shared/trade/index';
+import { RESULT_WORDS, STORED_RESULTS_NOTE, type ResultWords } from '@shared/glossary';
 import { FlagList } from './readings/flag-list';
 
 type StoredResults = {
@@ -11,32 +12,63 @@ type StoredResults = {
   flags?: TradeFlag[];
 };
 
-/** The results the server computed and stored at the last save: these, not the phone's live numbers, are the record. */
+/** How a combustion result was worked out (formula and source), from the analysis itself; older stored results may lack it. */
+export function combustionWorking(c: Partial<Pick<CombustionAnalysis, 'sources' | 'efficiencyBasis'>>): string[] {
+  const s = c.sources;
+  if (!s) return [];
+  return [
+    `Carbon dioxide: ${s.co2}`,
+    `Air-free CO: ${s.coAirFree}`,
+    `Excess air and efficiency: ${s.excessAirAndEfficiency}${c.efficiencyBasis ? ` (${c.efficiencyBasis})` : ''}`,
+  ];
+}
+
+/** How it was worked out, folded away until asked for. */
+export function Working({ lines }: { lines: string[] }) {
+  if (!lines.length) return null;
+  return (
+    <details className="text-xs text-iron-muted">
+      <summary className="min-h-tap cursor-pointer content-center font-semibold">How these are worked out</summary>
+      <ul className="flex flex-col gap-1">
+        {lines.map((l) => (
+          <li key={l}>{l}</li>
+        ))}
+      </ul>
+    </details>
+  );
+}
+
+/** The results stored with the visit at the last save, worked out from the readings: these, not the phone's live numbers, are the record. */
 export function ServerResults({ results, title = 'Kept with the visit' }: { results: Record<string, unknown>; title?: string }) {
   const r = results as StoredResults;
-  const rows: [string, string][] = [];
+  const rows: [ResultWords, string][] = [];
   if (r.combustion) {
-    rows.push(['CO2', `${r.combustion.co2Pct.toFixed(1)} %`]);
-    rows.push(['Excess air', `${r.combustion.excessAirPct.toFixed(0)} %`]);
-    rows.push(['CO air-free', `${r.combustion.coAirFreePpm.toFixed(0)} ppm`]);
-    rows.push(['Efficiency (HHV)', r.combustion.efficiencyPct == null ? 'not applicable' : `${r.combustion.efficiencyPct.toFixed(1)} %`]);
+    rows.push([RESULT_WORDS.co2, `${r.combustion.co2Pct.toFixed(1)} %`]);
+    rows.push([RESULT_WORDS.excessAir, `${r.combustion.excessAirPct.toFixed(0)} %`]);
+    rows.push([RESULT_WORDS.coAirFree, `${r.combustion.coAirFreePpm.toFixed(0)} ppm`]);
+    rows.push([RESULT_WORDS.efficiency, r.combustion.efficiencyPct == null ? 'not applicable' : `${r.combustion.efficiencyPct.toFixed(1)} %`]);
   }
-  if (r.gasInput) rows.push(['Gas input', formatBtuh(r.gasInput.inputBtuPerHour)]);
-  if (r.thermocouple) rows.push(['Thermocouple', r.thermocouple.reason]);
-  if (r.gaugeGlass) rows.push(['Gauge glass', describeGaugeGlassLevel(r.gaugeGlass)]);
-  if (r.lowWaterCutoff) rows.push(['Low-water cutoff', cutoffText(r.lowWaterCutoff)]);
+  if (r.gasInput) rows.push([RESULT_WORDS.gasInput, formatBtuh(r.gasInput.inputBtuPerHour)]);
+  if (r.thermocouple) rows.push([RESULT_WORDS.thermocouple, r.thermocouple.reason]);
+  if (r.gaugeGlass) rows.push([RESULT_WORDS.gaugeGlass, describeGaugeGlassLevel(r.gaugeGlass)]);
+  if (r.lowWaterCutoff) rows.push([RESULT_WORDS.lowWaterCutoff, cutoffText(r.lowWaterCutoff)]);
   if (rows.length === 0) return null;
   return (
     <div className="flex flex-col gap-2 rounded-plate border-2 border-plate-line bg-plate p-3" role="region" aria-label={title}>
-      <p className="text-sm font-bold">{title} (computed by the server)</p>
+      <p className="text-sm font-bold">{title}</p>
+      <p className="text-xs text-iron-muted">{STORED_RESULTS_NOTE}</p>
       <dl className="tabular grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
-        {rows.map(([k, v]) => (
-          <div key={k} className="contents">
-            <dt className="font-semibold">{k}</dt>
-            <dd data-result={k}>{v}</dd>
+        {rows.map(([w, v]) => (
+          <div key={w.label} className="contents">
+            <dt className="font-semibold">{w.label}</dt>
+            <dd>
+              <span data-result={w.label}>{v}</span>
+              <span className="block text-xs text-iron-muted">{w.meaning}</span>
+            </dd>
           </div>
         ))}
       </dl>
+      {r.combustion && <Working lines={combustionWorking(r.combustion)} />}
       <FlagList flags={(r.flags ?? []).filter((f) => f.severity !== 'info')} />
     </div>
   );

@@ -4,13 +4,13 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import type { ComponentDto } from '@shared/schemas/records';
 import type { VisitDto } from '@shared/schemas/visits';
+import { quickReasonsFor } from '@shared/glossary';
 import { SWAP_CAUSE_LABELS, SWAP_CAUSES, type SwapCause } from '@shared/stats/swap-causes';
 import { useSwapPart } from '../api/swap-part';
 import { queuedOf } from '../api/visit-outbox';
 import { useOutbox } from '@/lib/offline/offline-session';
 import { Panel, TextInput } from './inputs';
 
-const REASONS = ['tip swollen', 'would not hold the pilot', 'glass etched', 'leaking', 'worn', 'failed test'];
 
 export function SwapParts({ visit, components, onSwapped }: { visit: VisitDto; components: ComponentDto[] | undefined; onSwapped: (v: VisitDto) => void }) {
   const [picked, setPicked] = useState<ComponentDto | null>(null);
@@ -137,7 +137,7 @@ function SwapSheet({ visitId, component, onClose, onDone }: { visitId: string; c
         <div className="flex flex-col gap-1">
           <span className="text-sm font-semibold">What was wrong (optional)</span>
           <div className="flex flex-wrap gap-1" role="group" aria-label="Quick reasons">
-            {REASONS.map((r) => (
+            {quickReasonsFor(component.typeCode).map((r) => (
               <button
                 key={r}
                 type="button"

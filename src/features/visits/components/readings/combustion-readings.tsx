@@ -1,5 +1,7 @@
 import { useState } from 'react';
 import { Notice } from '@/components/ui/notice';
+import { LIVE_RESULTS_NOTE, RESULT_WORDS, type ResultWords } from '@shared/glossary';
+import { combustionWorking, Working } from '../server-results';
 import { FlagList } from './flag-list';
 import { WarmUpTimer } from './warm-up-timer';
 import { NumberField } from '../inputs';
@@ -67,16 +69,18 @@ function CombustionLive() {
   return (
     <div className="flex flex-col gap-2 rounded-plate border-2 border-iron bg-plate p-3" aria-label="Live combustion results" role="region">
       <p className="text-xs font-semibold uppercase tracking-wide text-iron-muted">Live on this phone</p>
+      <p className="text-xs text-iron-muted">{LIVE_RESULTS_NOTE}</p>
       <dl className="tabular grid grid-cols-2 gap-2">
-        <Result label="CO2" value={`${fmt(a.co2Pct)} %`} />
-        <Result label="Excess air" value={`${fmt(a.excessAirPct, 0)} %`} />
-        <Result label="CO air-free" value={`${fmt(a.coAirFreePpm, 0)} ppm`} note="Method 19 form: CO × 20.9/(20.9 − O2)" />
+        <Result words={RESULT_WORDS.co2} value={`${fmt(a.co2Pct)} %`} />
+        <Result words={RESULT_WORDS.excessAir} value={`${fmt(a.excessAirPct, 0)} %`} />
+        <Result words={RESULT_WORDS.coAirFree} value={`${fmt(a.coAirFreePpm, 0)} ppm`} />
         <Result
-          label="Efficiency (HHV)"
+          words={RESULT_WORDS.efficiency}
           value={a.efficiencyPct == null ? 'not applicable' : `${fmt(a.efficiencyPct)} %`}
-          note={a.efficiencyPct == null && appliance?.construction === 'condensing' ? 'condensing appliance' : undefined}
+          note={a.efficiencyPct == null && appliance?.construction === 'condensing' ? 'Not worked out for a condensing appliance.' : undefined}
         />
       </dl>
+      <Working lines={combustionWorking(a)} />
       <FlagList flags={a.flags} />
       <SiegertLoss lossPct={a.siegertLossPct} basis={a.siegertBasis} />
     </div>
@@ -103,14 +107,14 @@ function SiegertLoss({ lossPct, basis }: { lossPct: number; basis: string }) {
   );
 }
 
-function Result({ label, value, note }: { label: string; value: string; note?: string }) {
+function Result({ words, value, note }: { words: ResultWords; value: string; note?: string }) {
   return (
     <div className="flex flex-col">
-      <dt className="text-sm">{label}</dt>
-      <dd className="text-xl font-bold" data-live={label}>
+      <dt className="text-sm">{words.label}</dt>
+      <dd className="text-xl font-bold" data-live={words.label}>
         {value}
       </dd>
-      {note && <dd className="text-xs text-iron-muted">{note}</dd>}
+      <dd className="text-xs text-iron-muted">{note ?? words.meaning}</dd>
     </div>
   );
 }
