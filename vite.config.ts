@@ -61,7 +61,7 @@ export default defineConfig({
           groups: [
             { name: 'vendor', test: VENDOR },
             // The small shared primitives in one chunk rather than a request each (they hold no zod and no feature code).
-            { name: 'ui', test: /[\\/]src[\\/](components[\\/]ui|lib[\\/](api-client|auth|query-client))[\\/.]/ },
+            { name: 'ui', test: /[\\/]src[\\/](components[\\/]ui|lib[\\/](api-client|auth|query-client|network-state))[\\/.]/ },
           ],
         },
       },

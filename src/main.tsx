@@ -8,6 +8,7 @@ import { App } from './app/app';
 import { createAppRouter } from './app/router';
 import { keepSavedQueriesInMemory } from './lib/offline/cache-persistence';
 import { openLastSession } from './lib/offline/offline-session';
+import { readNetworkAtStart } from './lib/network-state';
 import { seedPreloadedQueries } from './lib/preload';
 import { createQueryClient } from './lib/query-client';
 
@@ -15,6 +16,7 @@ const container = document.getElementById('root')!;
 const router = createAppRouter();
 const queryClient = createQueryClient();
 keepSavedQueriesInMemory(queryClient);
+readNetworkAtStart();
 
 const mount = () =>
   createRoot(container).render(

@@ -8,6 +8,13 @@ import { NotAllowedPage } from './pages/not-allowed';
 export function RequireSignIn({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
+  if (me.isPending && me.fetchStatus === 'paused') {
+    return (
+      <p role="status" className="mx-auto max-w-md p-6 font-semibold">
+        No signal. This phone has nothing saved for you yet: sign-in and the first look at your round need signal once.
+      </p>
+    );
+  }
   if (me.isPending) return <Spinner />;
   if (!me.data) return <Navigate to={`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   return children;

@@ -1,4 +1,5 @@
 import type { ErrorBody, FieldErrors, FileRejection } from '@shared/schemas/errors';
+import { noteNoSignal, noteServerReached } from './network-state';
 
 export type { FieldErrors } from '@shared/schemas/errors';
 
@@ -36,8 +37,10 @@ export async function api<T>(path: string, { body, query, headers, ...init }: Op
       body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
     });
   } catch {
+    noteNoSignal();
     throw new ApiError(0, 'offline', 'No connection. Your work is kept on this device.');
   }
+  noteServerReached();
   if (res.status === 204) return undefined as T;
   const data = await res.json().catch(() => null);
   if (!res.ok) {

@@ -23,7 +23,11 @@ registerRoute(
       try {
         return await network.handle(options);
       } catch {
-        return (await matchPrecache('/index.html')) ?? Response.error();
+        const shell = await matchPrecache('/index.html');
+        if (!shell) return Response.error();
+        // Marked so the page knows at once that there is no signal (navigator.onLine may still say there is).
+        const html = (await shell.text()).replace('<div id="root">', '<div id="root" data-served-offline>');
+        return new Response(html, { headers: shell.headers });
       }
     },
     { denylist: [/^\/api\//, /^\/s\//, /^\/unsubscribe\//, /^\/booking-reply\//] },

@@ -60,9 +60,10 @@ export async function launchBrowser(extraArgs: string[] = []): Promise<Browser> 
   ensureChromium();
   const browser = await chromium.launch({ executablePath: CHROMIUM, args: [...CHROMIUM_FLAGS, ...extraArgs] });
   const newContext = browser.newContext.bind(browser);
-  // browser.newPage() makes its context through newContext too.
+  // browser.newPage() makes its context through newContext too. The app's service worker routes every request of the
+  // pages it controls, which page.route() cannot see: blocked unless a test is about working offline ('allow').
   browser.newContext = async (options?: BrowserContextOptions) => {
-    const context = await newContext(options);
+    const context = await newContext({ serviceWorkers: 'block', ...options });
     watchConsole(context);
     return context;
   };

@@ -43,6 +43,17 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
     window.scrollTo(0, 0);
   }, [id]);
 
+  // Paused: no signal, and this phone has not saved the record (the round saves its records when opened with signal).
+  if (record.isPending && record.fetchStatus === 'paused') {
+    return (
+      <Page title="Life record">
+        <Notice kind="caution" title="No signal">
+          This life record is not saved on this phone. It opens by itself when signal returns; records on your round are saved
+          when you open the round with signal.
+        </Notice>
+      </Page>
+    );
+  }
   if (record.isPending) return <Spinner label="Loading the life record…" />;
   if (record.isError) {
     return (

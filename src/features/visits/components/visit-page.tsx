@@ -29,6 +29,15 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   useEffect(() => {
     window.scrollTo(0, 0);
   }, [id, completedHere]);
+  if (visit.isPending && visit.fetchStatus === 'paused') {
+    return (
+      <Page title="Visit">
+        <Notice kind="caution" title="No signal">
+          This visit has not been opened on this phone before. It opens by itself when signal returns.
+        </Notice>
+      </Page>
+    );
+  }
   if (visit.isPending) return <Spinner label="Loading the visit…" />;
   if (visit.isError) {
     return (
