@@ -6,7 +6,9 @@ import { CLIENT_ROUTES, OFFICE_SCREENS } from '../../server/spa/route-chunks';
 import { chunkClosure, ENTRY_KEY, readManifest, type ViteManifest } from '../../server/spa/manifest';
 
 /** Gzip budgets (KB) for what a route loads: the entry, the vendor chunk and its lazy chunks with their static imports. */
-export const BUNDLE_BUDGETS_KB: Record<string, number> = { tag: 130, share: 130, 'my-appliance': 130, record: 200 };
+// A signed-in page carries the offline store and the outbox with its shell (about 6 KB gzip), so the homeowner's
+// signed-in page has 10 KB more than the anonymous tag and share pages.
+export const BUNDLE_BUDGETS_KB: Record<string, number> = { tag: 130, share: 130, 'my-appliance': 140, record: 200 };
 
 export type RouteBundle = {
   route: string;

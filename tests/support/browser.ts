@@ -38,11 +38,13 @@ const consoleProblems: string[] = [];
 // Chromium logs each refused request (a 401 before sign-in, a 404 the page expects) or one cut off (offline) as a
 // failed resource; the app's own handling of those is asserted by the tests. A 5xx still counts as a problem.
 const expectedFailedResource = /^Failed to load resource: (the server responded with a status of 4\d\d|net::)/;
+// Contexts block the app's service worker unless a test opts in (see launchBrowser); Chromium says so in the console.
+const blockedServiceWorker = /^Service Worker registration blocked by Playwright/;
 
 function watchConsole(context: BrowserContext) {
   context.on('console', (m) => {
     const type = m.type();
-    if ((type === 'error' || type === 'warning') && !expectedFailedResource.test(m.text())) {
+    if ((type === 'error' || type === 'warning') && !expectedFailedResource.test(m.text()) && !blockedServiceWorker.test(m.text())) {
       consoleProblems.push(`console.${type}: ${m.text()} (${m.location().url})`);
     }
   });
