@@ -27,6 +27,9 @@ export function keepSavedQueriesInMemory(queryClient: QueryClient) {
 export async function restoreSavedQueries(queryClient: QueryClient, userId: string) {
   try {
     await persistQueryClientRestore({ queryClient, persister: idbPersister(userId), maxAge: SAVED_MAX_AGE_MS, buster: BUSTER });
+    // Saved answers are shown at once but asked for again as each screen opens with signal, whatever their staleTime
+    // (a visit's is Infinity): the server may have moved on since they were saved.
+    await queryClient.invalidateQueries({ refetchType: 'none' });
   } catch {
     // persistQueryClientRestore has already removed an unreadable save; the app simply loads from the server.
   }

@@ -26,6 +26,8 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
   const [queuedFinish] = queuedOf(box.entries, id, 'visit-complete');
   /** The visit this screen has just signed off, so the completed view can say so and what happens next. */
   const [completedHere, setCompletedHere] = useState<string | null>(null);
+  /** The visit whose draft engine is running: it started from one server copy, and later copies only feed it. */
+  const [editing, setEditing] = useState<string | null>(null);
   useEffect(() => {
     window.scrollTo(0, 0);
   }, [id, completedHere]);
@@ -51,6 +53,8 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
     );
   }
   if (visit.data.status === 'completed') return <CompletedVisit visit={visit.data} justCompleted={completedHere === visit.data.id} changes={slots.changes?.(visit.data.applianceId, visit.data.id)} />;
+  // A copy saved on this phone is being checked with the server: the draft engine starts from the server's answer.
+  if (editing !== id && visit.fetchStatus === 'fetching') return <Spinner label="Loading the visit…" />;
   if (queuedFinish?.state === 'waiting' && outbox) return <FinishedOnPhone visit={visit.data} entry={queuedFinish} onSendNow={outbox.retryNow} />;
   return (
     <>
@@ -59,13 +63,24 @@ export function VisitPage({ slots = {} }: { slots?: VisitSlots }) {
           <RefusedFinish entry={queuedFinish} onCorrect={() => void outbox.discard(queuedFinish.seq)} />
         </div>
       )}
-      <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} onCompleting={setCompletedHere} />
+      <DraftVisit key={id} visit={visit.data} photos={slots.photos?.(visit.data.applianceId, visit.data.id)} onCompleting={setCompletedHere} onShown={setEditing} />
     </>
   );
 }
 
 /** Holds on to the first server copy: the draft engine starts from it once, later copies only feed the display. */
-function DraftVisit({ visit, photos, onCompleting }: { visit: VisitDto; photos?: ReactNode; onCompleting: (visitId: string | null) => void }) {
+function DraftVisit({
+  visit,
+  photos,
+  onCompleting,
+  onShown,
+}: {
+  visit: VisitDto;
+  photos?: ReactNode;
+  onCompleting: (visitId: string | null) => void;
+  onShown: (visitId: string) => void;
+}) {
   const [initial] = useState(visit);
+  useEffect(() => onShown(initial.id), [initial.id, onShown]);
   return <VisitEditor initial={initial} visit={visit} photos={photos} onCompleting={onCompleting} />;
 }
