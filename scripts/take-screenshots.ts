@@ -107,7 +107,7 @@ async function main() {
 
       await page.goto(`${BASE}/appliances/${applianceId}`);
       const share = page.getByRole('region', { name: RECORD_SECTIONS.share });
-      await share.waitFor();
+      await share.locator('summary').click();
       await share.getByLabel('Label (optional)').fill('Screenshots');
       await share.getByRole('button', { name: 'Make a share link' }).click();
       return (await share.getByTestId('new-share-link').innerText()).trim();
