@@ -85,14 +85,16 @@ async function launchChromium() {
   }
   return {
     port,
-    close() {
+    async close() {
+      const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill();
-      fs.rmSync(userDataDir, { recursive: true, force: true });
+      await exited;
+      fs.rmSync(userDataDir, { recursive: true, force: true, maxRetries: 5 });
     },
   };
 }
 
-export type LighthouseFigure = { page: string; accessibility: number; performance: number; failedAccessibility: string[] };
+export type LighthouseFigure = { page: string; accessibility: number; performance: number; metrics: Record<string, string>; failedAccessibility: string[] };
 
 export async function runLighthouse(pages: { page: string; url: string; cookie?: string }[]): Promise<LighthouseFigure[]> {
   const chrome = await launchChromium();
@@ -117,15 +119,19 @@ export async function runLighthouse(pages: { page: string; url: string; cookie?:
           const items = (a.details as { items?: { node?: { snippet?: string; explanation?: string } }[] } | undefined)?.items ?? [];
           return `${a.id}: ${a.title}${items.map((i) => `\n      ${i.node?.snippet ?? ''} ${i.node?.explanation?.split('\n').slice(0, 2).join(' ') ?? ''}`).join('')}`;
         });
+      const metrics = Object.fromEntries(
+        ['first-contentful-paint', 'largest-contentful-paint', 'total-blocking-time', 'cumulative-layout-shift', 'speed-index'].map((id) => [id, lhr.audits[id]?.displayValue ?? '']),
+      );
       figures.push({
         page: p.page,
+        metrics,
         accessibility: Math.round((lhr.categories.accessibility.score ?? 0) * 100),
         performance: Math.round((lhr.categories.performance.score ?? 0) * 100),
         failedAccessibility,
       });
     }
   } finally {
-    chrome.close();
+    await chrome.close();
   }
   return figures;
 }
@@ -147,6 +153,7 @@ async function main() {
     else {
       for (const f of figures) {
         console.log(`${f.page}: accessibility ${f.accessibility}, performance ${f.performance}`);
+        console.log(`  ${Object.entries(f.metrics).map(([k, v]) => `${k} ${v}`).join(', ')}`);
         for (const line of f.failedAccessibility) console.log(`  failed ${line}`);
       }
     }

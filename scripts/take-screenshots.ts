@@ -56,8 +56,21 @@ async function shoot(page: Page, file: string, what: string, shots: Shot[]) {
   await settle(page);
   const pageHeight = await page.evaluate(() => document.documentElement.scrollHeight);
   const target = path.join(OUT, file);
+  // Pages many screens long (the visit form, the share page's history) are shown by their first screen.
+  if (pageHeight > 5000) {
+    const first = await page.screenshot();
+    fs.writeFileSync(target, first);
+    shots.push({ file, what, bytes: first.length, fullPage: false, pageHeight });
+    return;
+  }
   let fullPage = true;
-  let png = await page.screenshot({ fullPage: true });
+  // A full-page shot keeps fixed bars where the first screen has them (the phone's bottom bar would sit mid-page):
+  // a viewport as tall as the page puts it at the bottom, where the reader sees it.
+  const viewport = page.viewportSize()!;
+  await page.setViewportSize({ width: viewport.width, height: pageHeight });
+  await settle(page);
+  let png = await page.screenshot();
+  await page.setViewportSize(viewport);
   if (png.length > MAX_BYTES) {
     fullPage = false;
     png = await page.screenshot({ fullPage: false });

@@ -55,7 +55,7 @@ export function PhotosPanel({ title, applianceId, visitId, folded = false }: { t
     return (
       <section aria-label={title} className={box}>
         <details>
-          <summary className="flex min-h-tap cursor-pointer flex-wrap items-baseline gap-x-2">
+          <summary className="flex min-h-tap cursor-pointer flex-wrap content-center items-baseline gap-x-2">
             <h2 className="text-lg font-bold">{title}</h2>
             {count && <span className="text-sm text-iron-muted">{count}</span>}
           </summary>
