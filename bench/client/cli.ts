@@ -9,6 +9,7 @@ import http from 'node:http';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { parseConfig } from '../../server/config';
 import { buildContext, closeContext } from '../../server/build-context';
 import { createApp } from '../../server/app';
@@ -128,7 +129,10 @@ async function main() {
   }
 }
 
-main().catch((err: unknown) => {
-  console.error(err);
-  process.exitCode = 1;
-});
+// Run as a command only; bench/lighthouse.ts imports startDemoApp from here.
+if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+  main().catch((err: unknown) => {
+    console.error(err);
+    process.exitCode = 1;
+  });
+}

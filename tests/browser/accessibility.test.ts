@@ -96,6 +96,7 @@ describe('accessibility of the main screens of each role', () => {
       { path: '/team', heading: /Team/ },
     ]);
     await office.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
+    await office.getByRole('region', { name: 'Share with the homeowner' }).locator('summary').click();
     await office.getByRole('button', { name: 'Make a share link' }).click();
     const shareUrl = (await office.getByTestId('new-share-link').textContent())!.trim();
 

@@ -56,6 +56,9 @@ describe('photos on the life record, on a phone', () => {
 
     await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
     const section = page.getByRole('region', { name: 'Photos' });
+    // Folded on the record, below its first screen; the summary says there are none.
+    await section.getByText('none yet').waitFor();
+    await section.locator('summary').click();
     await section.getByText('No photos yet.').waitFor();
     await section.getByText('Location data is removed from photos before they are stored.').waitFor();
     // No nameplate photo yet, so that is what the next one is taken to be.

@@ -25,6 +25,7 @@ describe('share link for the homeowner', () => {
     const page = await office.newPage();
     await signInAsMember(page, fx.server.baseUrl, fx.t.manager.user.email);
     await page.goto(`${fx.server.baseUrl}/appliances/${boiler.id}`);
+    await page.getByRole('region', { name: 'Share with the homeowner' }).locator('summary').click();
     await page.getByLabel('Label (optional)').fill('sent to the owner');
     await page.getByRole('button', { name: 'Make a share link' }).click();
     const url = (await page.getByTestId('new-share-link').textContent())!.trim();

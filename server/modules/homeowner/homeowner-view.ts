@@ -9,9 +9,17 @@ import { readingsInWords } from './readings-in-words';
 import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
 
-const MEANING = {
-  replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
-  inspection: (part: string) => `The ${part} is due to be checked at the next service.`,
+/** "is" or "are" for a part's name: "ignition electrodes", "burners" are plural; "gas valve", "cad cell" are not. */
+export function isOrAre(part: string): 'is' | 'are' {
+  // The name before any explanation in brackets or a spec after a comma: "burners (main)", "electrodes, pair".
+  const head = part.replace(/\s*\(.*\)/, '').split(',')[0].trim();
+  return /[^su]s$/.test(head) ? 'are' : 'is';
+}
+
+export const MEANING = {
+  replacement: (part: string) =>
+    `The ${part} ${isOrAre(part)} due to be replaced. ${isOrAre(part) === 'are' ? 'They wear' : 'It wears'} with age or ${isOrAre(part) === 'are' ? 'have' : 'has'} shown wear; your technician will replace ${isOrAre(part) === 'are' ? 'them' : 'it'}.`,
+  inspection: (part: string) => `The ${part} ${isOrAre(part)} due to be checked at the next service.`,
 };
 
 /**

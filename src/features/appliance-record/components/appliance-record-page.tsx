@@ -122,7 +122,7 @@ export function ApplianceRecordPage({ slots = {} }: { slots?: RecordSlots }) {
       {slots.changes?.(a.id)}
       {can(me.data?.principal, 'share:create') && (
         <Suspense fallback={null}>
-          <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} />
+          <ShareLinksSection applianceId={a.id} canRevoke={can(me.data?.principal, 'share:revoke')} timeZone={me.data?.company?.timeZone ?? 'UTC'} />
         </Suspense>
       )}
       {can(me.data?.principal, 'records:transfer') && (

@@ -9,7 +9,7 @@ export function Section({ title, action, children, folded = false, summary }: Se
     return (
       <section className={box} aria-label={title}>
         <details>
-          <summary className="flex min-h-tap cursor-pointer flex-wrap items-baseline gap-x-2">
+          <summary className="flex min-h-tap cursor-pointer flex-wrap content-center items-baseline gap-x-2">
             <h2 className="text-lg font-bold">{title}</h2>
             {summary && <span className="text-sm text-iron-muted">{summary}</span>}
           </summary>

@@ -6,21 +6,24 @@ import { ApiError } from '@/lib/api-client';
 import { useCreateShareLink, useRevokeShareLink, useShareLinks } from '../api/share-links';
 import { Section } from './section';
 import { RECORD_SECTIONS } from '@shared/glossary';
+import { todayInTimeZone } from '@shared/dates';
+import { formatCalendarDate } from '@shared/format/dates';
 
 const STATUS = { active: ['ok', 'Active'], expired: ['info', 'Expired'], revoked: ['info', 'Revoked'] } as const;
 
 /** Links that let the homeowner read this record without an account; the full link is shown once, when made. */
-export function ShareLinksSection({ applianceId, canRevoke }: { applianceId: string; canRevoke: boolean }) {
+export function ShareLinksSection({ applianceId, canRevoke, timeZone }: { applianceId: string; canRevoke: boolean; timeZone: string }) {
   const links = useShareLinks(applianceId);
   const create = useCreateShareLink(applianceId);
   const revoke = useRevokeShareLink(applianceId);
   const [label, setLabel] = useState('');
   const [days, setDays] = useState('365');
   const [copied, setCopied] = useState(false);
+  const activeCount = links.data?.filter((l) => l.status === 'active').length;
   const details = create.error instanceof ApiError ? create.error.details : undefined;
 
   return (
-    <Section title={RECORD_SECTIONS.share}>
+    <Section title={RECORD_SECTIONS.share} folded summary={activeCount === undefined ? undefined : activeCount ? `${activeCount} active ${activeCount === 1 ? 'link' : 'links'}` : 'no active link'}>
       <p className="mb-2 text-sm">
         A share link lets the owner read this record in plain words, without an account. It shows no office notes. Anyone holding the link can open
         it, so send it only to the owner.
@@ -62,7 +65,7 @@ export function ShareLinksSection({ applianceId, canRevoke }: { applianceId: str
             <li key={l.id} className="flex flex-wrap items-center gap-2 border-b border-plate-line pb-2 text-sm">
               <StatusBadge status={STATUS[l.status][0]}>{STATUS[l.status][1]}</StatusBadge>
               <span>{l.label ?? 'Share link'}</span>
-              <span className="text-iron-muted">until {l.expiresAt.slice(0, 10)}</span>
+              <span className="text-iron-muted">until {formatCalendarDate(todayInTimeZone(timeZone, new Date(l.expiresAt)))}</span>
               {canRevoke && l.status === 'active' && (
                 <Button variant="ghost" className="ml-auto" onClick={() => revoke.mutate(l.id)}>
                   Revoke

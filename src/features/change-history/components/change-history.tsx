@@ -57,7 +57,7 @@ function Folded({ intro, open, onToggle, changes, timeZone, showVisit = false }:
   return (
     <section aria-label={TITLE} className="no-print rounded-plate border-2 border-plate-line bg-plate-deep p-3 text-iron">
       <details open={open} onToggle={(e) => onToggle(e.currentTarget.open)}>
-        <summary className="flex min-h-tap cursor-pointer flex-wrap items-baseline gap-x-2">
+        <summary className="flex min-h-tap cursor-pointer flex-wrap content-center items-baseline gap-x-2">
           <h2 className="text-lg font-bold">{TITLE}</h2>
           <span className="text-sm text-iron-muted">office only</span>
         </summary>

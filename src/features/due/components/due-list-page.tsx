@@ -108,7 +108,7 @@ export function DueListPage() {
       actions={
         <div className="no-print flex gap-2">
           <a
-            className="inline-flex min-h-tap items-center rounded-plate border border-plate-line bg-plate-deep px-4 font-semibold"
+            className="inline-flex min-h-tap items-center rounded-plate border border-plate-line bg-plate-deep px-4 text-base font-semibold text-iron hover:bg-brass-light"
             href={`/api/due/export.csv?${new URLSearchParams(Object.entries({ ...query, after: undefined, limit: undefined }).filter((e): e is [string, string | number] => e[1] !== undefined && e[1] !== '').map(([k, v]) => [k, String(v)])).toString()}`}
             download
           >

@@ -10,7 +10,7 @@ import { PhotoUpload } from './photo-upload';
 import { PhotoViewer } from './photo-viewer';
 
 /** Upload, filter chips, thumbnails and the viewer, for a whole appliance or (with visitId) one visit on it. */
-export function PhotosPanel({ title, applianceId, visitId }: { title: string; applianceId: string; visitId?: string }) {
+export function PhotosPanel({ title, applianceId, visitId, folded = false }: { title: string; applianceId: string; visitId?: string; folded?: boolean }) {
   const me = useMe();
   const photos = usePhotos(applianceId);
   const [filter, setFilter] = useState<PhotoFilter>('all');
@@ -20,9 +20,8 @@ export function PhotosPanel({ title, applianceId, visitId }: { title: string; ap
   const shown = filter === 'all' ? scoped : scoped.filter((p) => p.kind === filter);
   const open = scoped.find((p) => p.id === openId);
 
-  return (
-    <section aria-label={title} className="flex flex-col gap-3 rounded-plate border-2 border-plate-line bg-plate-deep p-3 text-iron">
-      <h2 className="text-lg font-bold">{title}</h2>
+  const body = (
+    <>
       {can(principal, 'visits:record') && <PhotoUpload applianceId={applianceId} visitId={visitId} suggestedKind={defaultKind(photos.data)} />}
       {photos.isPending ? (
         <Spinner label="Loading photos…" />
@@ -47,6 +46,28 @@ export function PhotosPanel({ title, applianceId, visitId }: { title: string; ap
           onClose={() => setOpenId(null)}
         />
       )}
+    </>
+  );
+  const box = 'flex flex-col gap-3 rounded-plate border-2 border-plate-line bg-plate-deep p-3 text-iron';
+  if (folded) {
+    // On the life record, below the first screen: the count says whether opening it is worth it.
+    const count = photos.data ? (scoped.length ? `${scoped.length} ${scoped.length === 1 ? 'photo' : 'photos'}` : 'none yet') : undefined;
+    return (
+      <section aria-label={title} className={box}>
+        <details>
+          <summary className="flex min-h-tap cursor-pointer flex-wrap content-center items-baseline gap-x-2">
+            <h2 className="text-lg font-bold">{title}</h2>
+            {count && <span className="text-sm text-iron-muted">{count}</span>}
+          </summary>
+          <div className="mt-2 flex flex-col gap-3">{body}</div>
+        </details>
+      </section>
+    );
+  }
+  return (
+    <section aria-label={title} className={box}>
+      <h2 className="text-lg font-bold">{title}</h2>
+      {body}
     </section>
   );
 }
