@@ -6,7 +6,12 @@ import { createApp, type AppOptions } from './app';
 import { buildContext, closeContext } from './build-context';
 import { startJobs } from './jobs/start-jobs';
 
-export async function startServer(config: AppConfig, options: AppOptions = {}) {
+/**
+ * The HTTP server on `config.PORT`, and (unless `jobs: false`) the pg-boss scheduled jobs in the same process.
+ * Under WEB_CONCURRENCY > 1 each cluster worker runs this with `jobs: false`; the primary runs the jobs
+ * (scripts/app-process.ts).
+ */
+export async function startServer(config: AppConfig, options: AppOptions & { jobs?: boolean } = {}) {
   const ctx = buildContext(config);
   const app = createApp(ctx, options);
   const server =
@@ -22,9 +27,9 @@ export async function startServer(config: AppConfig, options: AppOptions = {}) {
     server.listen(config.PORT, config.HOST, () => resolve());
   });
   // Scheduled work (daily reminders, the orphaned photo sweep) runs in this process through pg-boss.
-  let jobs: Awaited<ReturnType<typeof startJobs>>;
+  let jobs: Awaited<ReturnType<typeof startJobs>> | null = null;
   try {
-    jobs = await startJobs(ctx);
+    if (options.jobs ?? true) jobs = await startJobs(ctx);
   } catch (err) {
     await closeHttp();
     await closeContext(ctx);
@@ -34,7 +39,7 @@ export async function startServer(config: AppConfig, options: AppOptions = {}) {
     ctx,
     jobs,
     async close() {
-      await jobs.stop().catch((err: unknown) => ctx.logger.warn({ err }, 'stopping the job queue failed'));
+      await jobs?.stop().catch((err: unknown) => ctx.logger.warn({ err }, 'stopping the job queue failed'));
       await closeHttp();
       await closeContext(ctx);
     },

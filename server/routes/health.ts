@@ -1,3 +1,4 @@
+import cluster from 'node:cluster';
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { defineRoute } from '../lib/route';
@@ -8,7 +9,8 @@ export function healthRoutes(ctx: AppContext) {
   defineRoute(router, 'get', '/health', { access: 'public' }, async (_input, _req, res) => {
     try {
       await ctx.pool.query('select 1');
-      return { status: 'ok', db: 'ok' };
+      // Under WEB_CONCURRENCY > 1, which worker answered (scripts/app-process.ts); a single process says nothing more.
+      return cluster.isWorker ? { status: 'ok', db: 'ok', worker: { id: cluster.worker!.id, pid: process.pid } } : { status: 'ok', db: 'ok' };
     } catch {
       res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
       res.status(503).json({ status: 'degraded', db: 'unreachable' });
