@@ -2,8 +2,8 @@ import type { DbOrTx } from '../../db/client';
 import { notFound } from '../../lib/http-error';
 import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/records';
 import { nextBookingOf } from '../bookings/next-booking';
-import { companyDueClock } from '../due/company-today';
-import { customersRepository } from '../customers/customers.repository';
+import { companyDueClock } from '../../core/company-today';
+import { findCustomer } from '../../core/tenant-finders';
 import { toCustomerDto } from '../customers/customers.service';
 import { sitesRepository } from '../sites/sites.repository';
 import { ageStartDate, endOfLifeFor, wholeYearsBetween } from './appliance-age';
@@ -55,7 +55,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
     nextBookingOf(db, companyId, applianceId),
     transferProvenance(db, appliance.importedFromTransferId),
   ]);
-  const customer = site && (await customersRepository.find(db, companyId, site.customerId));
+  const customer = site && (await findCustomer(db, companyId, site.customerId));
   if (!site || !customer) throw notFound('Appliance');
 
   const componentDtos = componentRows.map((r) => toComponentDto(r.component, r.catalogLabel, today, dueSoonDays));

@@ -15,8 +15,8 @@ import {
   type RoundDto,
 } from '../../../shared/schemas/bookings';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { bookingDtos, loadList } from './booking-dto';
 import { bookingsRepository as repo, type BookingRow } from './bookings.repository';
 import { isExclusionViolation } from './pg-error';

@@ -3,11 +3,12 @@ import type { AppContext } from '../../context';
 import { notFound } from '../../lib/http-error';
 import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerDto, CustomerListItem, Page } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { appliancesRepository } from '../appliances/appliances.repository';
 import { sitesRepository } from '../sites/sites.repository';
 import { decodeCustomerCursor, encodeCustomerCursor } from './customer-cursor';
 import { customersRepository, sortKeyCount, type CustomerRow } from './customers.repository';
+import { findCustomer } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
@@ -34,7 +35,7 @@ export function customersService(ctx: AppContext) {
       };
     },
     async get(companyId: string, id: string): Promise<CustomerDetailDto> {
-      const customer = await customersRepository.find(ctx.db, companyId, id);
+      const customer = await findCustomer(ctx.db, companyId, id);
       if (!customer) throw notFound('Customer');
       const sites = await sitesRepository.listForCustomers(ctx.db, companyId, [id]);
       const appliances = await appliancesRepository.summariesForSites(ctx.db, companyId, sites.map((s) => s.id));

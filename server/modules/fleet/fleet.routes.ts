@@ -7,7 +7,7 @@ import { findReplacementProspects } from './replacement-prospects.repository';
 import { wholeYearsBetween } from '../appliances/appliance-age';
 import type { ApplianceKind, Fuel } from '../../../shared/schemas/enums';
 import { addMonths } from '../../../shared/trade/iso-date';
-import { companyToday } from '../due/company-today';
+import { companyToday } from '../../core/company-today';
 import { findAnnualServiceDue } from './annual-service.repository';
 
 export function fleetRoutes(ctx: AppContext) {

@@ -3,11 +3,12 @@ import { LABELS } from '../../../shared/schemas/enums';
 import type { HomeownerViewDto } from '../../../shared/schemas/homeowner';
 import { addMonths } from '../../../shared/trade/iso-date';
 import { loadApplianceRecord } from '../appliances/appliance-record';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
 import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 const MEANING = {
   replacement: (part: string) => `The ${part} is due to be replaced. It wears with age or has shown wear; your technician will replace it.`,
@@ -21,7 +22,7 @@ const MEANING = {
 export async function buildHomeownerView(db: DbOrTx, companyId: string, applianceId: string): Promise<HomeownerViewDto> {
   const record = await loadApplianceRecord(db, companyId, applianceId);
   const [company, visitRows, photoRows, nextBooking] = await Promise.all([
-    repo.company(db, companyId),
+    findCompanyContact(db, companyId),
     repo.completedVisits(db, companyId, applianceId),
     repo.visiblePhotos(db, companyId, applianceId),
     nextHomeownerBookingOf(db, companyId, applianceId),

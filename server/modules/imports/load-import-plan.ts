@@ -4,7 +4,7 @@ import { gone } from '../../lib/http-error';
 import type { ImportMapping } from '../../../shared/imports/import-fields';
 import { COMPONENT_TYPES, type ComponentType } from '../../../shared/trade/component-types';
 import { catalogRepository } from '../catalog/catalog.repository';
-import { companyToday } from '../due/company-today';
+import { companyToday } from '../../core/company-today';
 import { dropKnownHistory, planImport } from './import-plan';
 import { importsRepository, type ImportFileRow } from './imports.repository';
 import { nameKey } from './match-keys';

@@ -2,7 +2,7 @@ import { and, eq, inArray, lt, or, sql } from 'drizzle-orm';
 import type { AppContext } from '../../context';
 import { importFiles } from '../../db/schema/index';
 import { unavailableService } from '../../lib/unavailable';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { recomputeDueForCompany } from '../due/due.repository';
 import { loadImportPlan } from './load-import-plan';
 import { importsRepository } from './imports.repository';

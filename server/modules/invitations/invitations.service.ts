@@ -9,10 +9,11 @@ import {
   type InvitationDto,
   type MemberInvitationInput,
 } from '../../../shared/schemas/invitations';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { outgoingMailRepository } from '../mail/outgoing-mail.repository';
 import { invitationsRepository as repo, type InvitationRow } from './invitations.repository';
 import { invitationStatus, toInvitationDto } from './invitation-dto';
+import { findCustomer } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
@@ -125,7 +126,7 @@ export function invitationsService(ctx: AppContext) {
     },
 
     async inviteHomeowner(actor: Member, customerId: string, input: HomeownerInvitationInput): Promise<InvitationDto> {
-      const customer = await repo.findCustomer(ctx.db, actor.companyId, customerId);
+      const customer = await findCustomer(ctx.db, actor.companyId, customerId);
       if (!customer) throw notFound('Customer');
       const email = input.email ?? customer.email?.trim().toLowerCase();
       if (!email) {

@@ -6,10 +6,10 @@ import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { readingMeanings, type StoredResults } from '../../../shared/visits/reading-meanings';
 import { loadApplianceRecord } from '../appliances/appliance-record';
 import { wholeYearsBetween } from '../appliances/appliance-age';
-import { companyToday } from '../due/company-today';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
-import { typeLabelFor } from '../due/type-label';
+import { companyToday } from '../../core/company-today';
+import { typeLabelFor } from '../../core/type-label';
 import { visitsRepository } from '../visits/visits.repository';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 /** Who the export is for: the office sees every photo and the serial; a homeowner their visible photos; a share link no serial. */
 export type ExportAudience = 'office' | 'homeowner' | 'share';
@@ -23,7 +23,7 @@ export type ExportPhoto = { id: string; thumbKey: string; kind: string; caption:
 export async function buildLifeRecordExport(db: DbOrTx, companyId: string, applianceId: string, audience: ExportAudience, now = new Date()) {
   const record = await loadApplianceRecord(db, companyId, applianceId);
   const [company, today, visitRows, photoRows] = await Promise.all([
-    homeownerRepository.company(db, companyId),
+    findCompanyContact(db, companyId),
     companyToday(db, companyId),
     db
       .select()

@@ -4,11 +4,12 @@ import { forbidden, HttpError, notFound, validationFailed } from '../../lib/http
 import { can } from '../../../shared/policy';
 import type { Principal } from '../../../shared/schemas/roles';
 import { PHOTO_KIND_LABELS, type PhotoDto, type PhotoUploadDto, type PhotoUploadFields } from '../../../shared/schemas/photos';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { photoDto } from './photo-dto';
 import { processImage, type ProcessedImage } from './process-image';
 import { photosRepository as repo, type PhotoRowWithAuthor } from './photos.repository';
+import { findAppliance } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 export type UploadedFile = { originalname: string; buffer: Buffer };
@@ -17,7 +18,7 @@ export type PhotoVariant = 'display' | 'thumb';
 export function photosService(ctx: AppContext) {
   /** The visit and part, when given, must be this company's and on this appliance. */
   async function checkSlot(actor: Member, fields: PhotoUploadFields) {
-    if (!(await repo.findAppliance(ctx.db, actor.companyId, fields.applianceId))) throw notFound('Appliance');
+    if (!(await findAppliance(ctx.db, actor.companyId, fields.applianceId))) throw notFound('Appliance');
     if (fields.visitId) {
       const visit = await repo.findVisit(ctx.db, actor.companyId, fields.visitId);
       if (!visit) throw notFound('Visit');
@@ -125,7 +126,7 @@ export function photosService(ctx: AppContext) {
     },
 
     async list(actor: Member, applianceId: string): Promise<PhotoDto[]> {
-      if (!(await repo.findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
+      if (!(await findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
       return (await repo.list(ctx.db, actor.companyId, applianceId)).map(photoDto);
     },
 

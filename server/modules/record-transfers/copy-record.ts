@@ -4,7 +4,7 @@ import { appliances, auditLog, components, customers, partSwaps, photos, sites, 
 import type { ObjectStorage } from '../../lib/object-storage';
 import { LABELS } from '../../../shared/schemas/enums';
 import { formatCalendarDate } from '../../../shared/format/dates';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import { recomputeDueForAppliance } from '../due/due.repository';
 import type { TransferableRecord } from './read-transferable-record';
 

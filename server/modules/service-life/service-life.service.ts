@@ -3,11 +3,11 @@ import { badRequest, notFound } from '../../lib/http-error';
 import { kaplanMeierFromCounts, medianConfidence95, medianSurvival, type SurvivalStep, type TimeCount } from '../../../shared/stats/kaplan-meier';
 import { MIN_EVENTS_TO_ADOPT, type ServiceLifeDto, type ServiceLifePoint } from '../../../shared/schemas/service-life';
 import type { DueRuleDto } from '../../../shared/schemas/due';
-import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
+import { recordAudit } from '../../core/audit-log';
+import { companyToday } from '../../core/company-today';
 import { dueRepository, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from '../due/due.repository';
 import { dueService } from '../due/due.service';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import { catalogRepository } from '../catalog/catalog.repository';
 import { serviceLifeCounts, type AgeCountRow } from './service-life.repository';
 

@@ -6,11 +6,11 @@ import { addMonths } from '../../../shared/trade/iso-date';
 import { readingMeanings, type ReadingMeaning, type StoredResults } from '../../../shared/visits/reading-meanings';
 import { loadApplianceRecord } from '../appliances/appliance-record';
 import { wholeYearsBetween } from '../appliances/appliance-age';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import { visitsRepository } from '../visits/visits.repository';
 import { visitAsCorrected } from './visit-as-corrected';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 export type VisitReport = {
   company: { name: string; phone: string };
@@ -60,7 +60,7 @@ export async function loadVisitReport(db: DbOrTx, companyId: string, visitId: st
   const visit = visitAsCorrected(stored, await visitsRepository.amendmentsOfVisit(db, companyId, visitId));
   const [record, company, swaps, names] = await Promise.all([
     loadApplianceRecord(db, companyId, visit.applianceId),
-    homeownerRepository.company(db, companyId),
+    findCompanyContact(db, companyId),
     visitsRepository.swapsOfVisit(db, companyId, visit.id),
     visitsRepository.userNames(db, visit.technicianIds),
   ]);

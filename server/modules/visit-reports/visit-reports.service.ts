@@ -4,7 +4,7 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { conflict, notFound } from '../../lib/http-error';
 import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import { mailDelivery, type MailDelivery } from '../../../shared/schemas/mail';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { unsubscribeUrls } from '../reminders/deliver-reminders';
 import { hashShareToken, resolveShareToken } from '../share-links/resolve-share-token';
 import { shareLinksRepository } from '../share-links/share-links.repository';

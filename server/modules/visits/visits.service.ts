@@ -4,8 +4,8 @@ import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import { conflict, notFound, validationFailed } from '../../lib/http-error';
 import type { VisitDto, visitStartInput } from '../../../shared/schemas/visits';
-import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
+import { recordAudit } from '../../core/audit-log';
+import { companyToday } from '../../core/company-today';
 import { recomputeDueForAppliance } from '../due/due.repository';
 import { appendCompletionEvents, applyFindingsToComponents } from './visit-completion';
 import { mergeDraft, type DraftFields } from './visit-draft';
@@ -45,7 +45,7 @@ export function visitsService(ctx: AppContext) {
     /** Idempotent per appliance and technician: a retried tap gets the draft the first tap made. */
     async start(actor: Member, input: StartFields): Promise<VisitDto> {
       const visit = await ctx.db.transaction(async (tx) => {
-        const appliance = await visitsRepository.findAppliance(tx, actor.companyId, input.applianceId);
+        const appliance = await visitsRepository.applianceReadingFacts(tx, actor.companyId, input.applianceId);
         if (!appliance) throw notFound('Appliance');
         await visitsRepository.lockStart(tx, appliance.id, actor.userId);
         if (input.id) {
