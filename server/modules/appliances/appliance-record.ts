@@ -1,15 +1,15 @@
 import type { DbOrTx } from '../../db/client';
 import { notFound } from '../../lib/http-error';
 import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/records';
-import { nextBookingOf } from '../bookings/next-booking';
+import { nextBookingOf } from '../bookings';
 import { companyDueClock } from '../../core/company-today';
 import { findCustomer } from '../../core/tenant-finders';
-import { toCustomerDto } from '../customers/customers.service';
-import { sitesRepository } from '../sites/sites.repository';
+import { toCustomerDto } from '../customers';
+import { findSiteDto } from '../sites';
 import { ageStartDate, endOfLifeFor, wholeYearsBetween } from './appliance-age';
 import { applianceLabel } from './appliance-label';
 import { appliancesRepository, type ApplianceRow } from './appliances.repository';
-import { transferProvenance } from '../record-transfers/transfer-provenance';
+import { transferProvenance } from '../record-transfers';
 import { toComponentDto } from './component-dto';
 
 const STATUS_ORDER = { replace_now: 0, overdue: 1, due_soon: 2, ok: 3 } as const;
@@ -46,7 +46,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
   const appliance = await appliancesRepository.find(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
   const [site, { today, dueSoonDays }, replaced, componentRows, lastVisit, draft, nextBooking, transferredFrom] = await Promise.all([
-    sitesRepository.find(db, companyId, appliance.siteId),
+    findSiteDto(db, companyId, appliance.siteId),
     companyDueClock(db, companyId),
     appliancesRepository.findReplaced(db, companyId, applianceId),
     appliancesRepository.components(db, companyId, applianceId),

@@ -6,7 +6,7 @@ import { LABELS } from '../../../shared/schemas/enums';
 import type { Principal } from '../../../shared/schemas/roles';
 import { recordAudit } from '../../core/audit-log';
 import { companyDueClock, companyToday } from '../../core/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recomputeDueForAppliance } from '../due';
 import { findSite } from '../../core/tenant-finders';
 import { appendTimelineEvent, listTimeline } from '../../core/timeline';
 import { applianceLabel } from './appliance-label';

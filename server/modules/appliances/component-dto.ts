@@ -1,5 +1,5 @@
 import type { ComponentDto } from '../../../shared/schemas/records';
-import { describeStoredDue } from '../due/due-status';
+import { describeStoredDue } from '../due';
 import { typeLabelFor } from '../../core/type-label';
 import type { ComponentRow } from './appliances.repository';
 

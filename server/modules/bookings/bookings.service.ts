@@ -20,7 +20,7 @@ import { appendTimelineEvent } from '../../core/timeline';
 import { bookingDtos, loadList } from './booking-dto';
 import { bookingsRepository as repo, type BookingRow } from './bookings.repository';
 import { isExclusionViolation } from './pg-error';
-import { queueBookingNotice, type QueuedNotice } from '../booking-notices/queue-booking-notice';
+import { queueBookingNotice, type QueuedNotice } from '../booking-notices';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 const DAY_MS = 86_400_000;

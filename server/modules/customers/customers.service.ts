@@ -4,8 +4,8 @@ import { notFound } from '../../lib/http-error';
 import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerDto, CustomerListItem, Page } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
 import { recordAudit } from '../../core/audit-log';
-import { appliancesRepository } from '../appliances/appliances.repository';
-import { sitesRepository } from '../sites/sites.repository';
+import { applianceSummariesForSites } from '../appliances';
+import { sitesOfCustomers } from '../sites';
 import { decodeCustomerCursor, encodeCustomerCursor } from './customer-cursor';
 import { customersRepository, sortKeyCount, type CustomerRow } from './customers.repository';
 import { findCustomer } from '../../core/tenant-finders';
@@ -37,8 +37,8 @@ export function customersService(ctx: AppContext) {
     async get(companyId: string, id: string): Promise<CustomerDetailDto> {
       const customer = await findCustomer(ctx.db, companyId, id);
       if (!customer) throw notFound('Customer');
-      const sites = await sitesRepository.listForCustomers(ctx.db, companyId, [id]);
-      const appliances = await appliancesRepository.summariesForSites(ctx.db, companyId, sites.map((s) => s.id));
+      const sites = await sitesOfCustomers(ctx.db, companyId, [id]);
+      const appliances = await applianceSummariesForSites(ctx.db, companyId, sites.map((s) => s.id));
       return { ...toCustomerDto(customer), sites: sites.map((s) => ({ ...s, appliances: appliances.filter((a) => a.siteId === s.id) })) };
     },
     async create(actor: Member, input: z.output<typeof customerInput>) {

@@ -2,11 +2,11 @@ import type { DbOrTx } from '../../db/client';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { HomeownerViewDto } from '../../../shared/schemas/homeowner';
 import { addMonths } from '../../../shared/trade/iso-date';
-import { loadApplianceRecord } from '../appliances/appliance-record';
+import { loadApplianceRecord } from '../appliances';
 import { typeLabelFor } from '../../core/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
-import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
+import { nextHomeownerBookingOf } from '../booking-notices';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
 import { findCompanyContact } from '../../core/tenant-finders';
 

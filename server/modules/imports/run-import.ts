@@ -3,7 +3,7 @@ import type { AppContext } from '../../context';
 import { importFiles } from '../../db/schema/index';
 import { unavailableService } from '../../lib/unavailable';
 import { recordAudit } from '../../core/audit-log';
-import { recomputeDueForCompany } from '../due/due.repository';
+import { recomputeDueForCompany } from '../due';
 import { loadImportPlan } from './load-import-plan';
 import { importsRepository } from './imports.repository';
 import { writeImportBatch } from './write-import-batch';

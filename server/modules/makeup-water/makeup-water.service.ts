@@ -6,7 +6,7 @@ import type { MakeupWaterDto, MakeupWaterEntryDto, MakeupWaterEntryInput } from 
 import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
 import { companyToday } from '../../core/company-today';
-import { occurredAtForDate } from '../appliances/occurred-at';
+import { occurredAtForDate } from '../appliances';
 import { makeupWaterRepository as repo } from './makeup-water.repository';
 import { findAppliance } from '../../core/tenant-finders';
 

@@ -3,7 +3,7 @@ import type { AppContext } from '../../context';
 import { findCompany } from '../../core/tenant-finders';
 import type { MeDto } from '../../../shared/schemas/me';
 import { can } from '../../../shared/policy';
-import { devOutboxEnabled } from '../reminders/outbox.routes';
+import { devOutboxEnabled } from '../reminders';
 
 /** Who the request's session is, as GET /api/me answers it (also embedded in the HTML of the record). */
 export async function describeMe(ctx: AppContext, res: Response): Promise<MeDto | { user: null }> {

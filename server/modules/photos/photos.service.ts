@@ -15,7 +15,21 @@ type Member = Extract<Principal, { kind: 'member' }>;
 export type UploadedFile = { originalname: string; buffer: Buffer };
 export type PhotoVariant = 'display' | 'thumb';
 
+/** One variant of a stored photo: its ETag and a loader for its bytes (404 when the object is gone). */
+export type PhotoImage = { etag: string; load: () => ReturnType<AppContext['storage']['get']> };
+
 export function photosService(ctx: AppContext) {
+  function imageOf(photo: { sha256: string; displayKey: string; thumbKey: string }, variant: PhotoVariant): PhotoImage {
+    const key = variant === 'display' ? photo.displayKey : photo.thumbKey;
+    return {
+      etag: `"${photo.sha256}-${variant}"`,
+      load: () =>
+        ctx.storage.get(key).catch((err: unknown) => {
+          if ((err as { name?: string }).name === 'NoSuchKey') throw notFound('Photo');
+          throw err;
+        }),
+    };
+  }
   /** The visit and part, when given, must be this company's and on this appliance. */
   async function checkSlot(actor: Member, fields: PhotoUploadFields) {
     if (!(await findAppliance(ctx.db, actor.companyId, fields.applianceId))) throw notFound('Appliance');
@@ -137,15 +151,14 @@ export function photosService(ctx: AppContext) {
       const photo = await repo.find(ctx.db, principal.companyId, id);
       if (!photo) throw notFound('Photo');
       if (principal.kind === 'homeowner' && !(photo.homeownerVisible && principal.customerIds.includes(photo.customerId))) throw notFound('Photo');
-      const key = variant === 'display' ? photo.displayKey : photo.thumbKey;
-      return {
-        etag: `"${photo.sha256}-${variant}"`,
-        load: () =>
-          ctx.storage.get(key).catch((err: unknown) => {
-            if ((err as { name?: string }).name === 'NoSuchKey') throw notFound('Photo');
-            throw err;
-          }),
-      };
+      return imageOf(photo, variant);
+    },
+
+    /** A photo of this appliance marked for the homeowner (share link or homeowner account); anything else is 404. */
+    async homeownerImage(at: { companyId: string; applianceId: string }, id: string, variant: PhotoVariant) {
+      const photo = await repo.find(ctx.db, at.companyId, id);
+      if (!photo || photo.applianceId !== at.applianceId || !photo.homeownerVisible) throw notFound('Photo');
+      return imageOf(photo, variant);
     },
 
     async update(actor: Member, id: string, patch: { caption?: string | null; homeownerVisible?: boolean }): Promise<PhotoDto> {

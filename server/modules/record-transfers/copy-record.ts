@@ -5,7 +5,7 @@ import type { ObjectStorage } from '../../lib/object-storage';
 import { LABELS } from '../../../shared/schemas/enums';
 import { formatCalendarDate } from '../../../shared/format/dates';
 import { typeLabelFor } from '../../core/type-label';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recomputeDueForAppliance } from '../due';
 import type { TransferableRecord } from './read-transferable-record';
 
 export type CopyTarget = { companyId: string; actorId: string; transferId: string; senderName: string; receivedAt: Date; today: string; site: { id: string; customerId: string } | null };

@@ -13,9 +13,9 @@ import {
 import { groupTransferCode, transferCodeFromBytes } from '../../../shared/transfers/transfer-code';
 import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
-import { applianceLabel } from '../appliances/appliance-label';
+import { applianceLabel } from '../appliances';
 import { companyToday } from '../../core/company-today';
-import { requireOwnAppliance } from '../homeowner/own-appliance';
+import { requireOwnAppliance } from '../homeowner';
 import { findSite } from '../../core/tenant-finders';
 import { copyRecord } from './copy-record';
 import { countsOf, readTransferableRecord } from './read-transferable-record';

@@ -4,7 +4,7 @@ import { notFound } from '../../lib/http-error';
 import type { CreatedShareLinkDto, ShareLinkDto } from '../../../shared/schemas/homeowner';
 import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
-import { buildHomeownerView } from '../homeowner/homeowner-view';
+import { buildHomeownerView } from '../homeowner';
 import { shareLinksRepository as repo } from './share-links.repository';
 import { hashShareToken as hash, resolveShareToken } from './resolve-share-token';
 

@@ -7,7 +7,7 @@ import type { amendmentInput } from '../../../shared/schemas/visits';
 import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
 import { companyToday } from '../../core/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recomputeDueForAppliance } from '../due';
 import { alertsOf, outcomeRequirements, requirementDetails } from '../../../shared/visits/completion-requirements';
 import { mergeChecklist, mergeReadings } from './visit-draft';
 import { resultsToStore, type VisitResults } from './visit-results';

@@ -7,7 +7,7 @@ import { TradeInputError } from '../../../shared/trade/trade-input-error';
 import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
 import { companyToday } from '../../core/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recomputeDueForAppliance } from '../due';
 import { typeLabelFor } from '../../core/type-label';
 import { lockDraft, type Member } from './visit-lock';
 import { visitsRepository } from './visits.repository';

@@ -1,4 +1,4 @@
-import { assertBookingCovers, markBookingDoneIfVisited } from '../bookings/booking-visits';
+import { assertBookingCovers, markBookingDoneIfVisited } from '../bookings';
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
@@ -6,7 +6,7 @@ import { conflict, notFound, validationFailed } from '../../lib/http-error';
 import type { VisitDto, visitStartInput } from '../../../shared/schemas/visits';
 import { recordAudit } from '../../core/audit-log';
 import { companyToday } from '../../core/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recomputeDueForAppliance } from '../due';
 import { appendCompletionEvents, applyFindingsToComponents } from './visit-completion';
 import { mergeDraft, type DraftFields } from './visit-draft';
 import { loadVisitDto } from './visit-dto';
@@ -15,9 +15,9 @@ import { amendVisit, type AmendmentFields } from './visit-amendments';
 import { swapPart, type SwapFields } from './visit-swaps';
 import { visitsRepository, type VisitRow } from './visits.repository';
 import { lockDraft, type Member } from './visit-lock';
-import { findTemplateFor } from '../checklists/checklists.repository';
+import { findTemplateFor } from '../checklists';
 import { requiredReadingsFor } from '../../../shared/visits/required-readings';
-import { queueVisitReportMail } from '../visit-reports/visit-reports.service';
+import { queueVisitReportMail } from '../visit-reports';
 
 type StartFields = z.output<typeof visitStartInput>;
 
