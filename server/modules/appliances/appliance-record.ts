@@ -4,7 +4,7 @@ import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/r
 import { nextBookingOf } from '../bookings';
 import { companyDueClock } from '../../core/company-today';
 import { findCustomer } from '../../core/tenant-finders';
-import { toCustomerDto } from '../customers';
+import { toCustomerDto } from '../../core/customer-dto';
 import { findSiteDto } from '../sites';
 import { ageStartDate, endOfLifeFor, wholeYearsBetween } from './appliance-age';
 import { applianceLabel } from './appliance-label';

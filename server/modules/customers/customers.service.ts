@@ -1,26 +1,18 @@
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
 import { notFound } from '../../lib/http-error';
-import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerDto, CustomerListItem, Page } from '../../../shared/schemas/records';
+import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerListItem, Page } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
 import { recordAudit } from '../../core/audit-log';
 import { applianceSummariesForSites } from '../appliances';
 import { sitesOfCustomers } from '../sites';
 import { decodeCustomerCursor, encodeCustomerCursor } from './customer-cursor';
-import { customersRepository, sortKeyCount, type CustomerRow } from './customers.repository';
+import { customersRepository, sortKeyCount } from './customers.repository';
 import { findCustomer } from '../../core/tenant-finders';
+import { toCustomerDto } from '../../core/customer-dto';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
-export const toCustomerDto = (c: CustomerRow): CustomerDto => ({
-  id: c.id,
-  name: c.name,
-  kind: c.kind,
-  phone: c.phone,
-  email: c.email,
-  remindersOptOut: c.remindersOptOut,
-  notes: c.notes,
-});
 
 export function customersService(ctx: AppContext) {
   return {
