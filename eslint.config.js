@@ -30,6 +30,49 @@ export default tseslint.config(
     },
   },
   {
+    // Module boundaries (DEVELOPERS.md): a module's repository is private to it, and another module is reached only
+    // through its index.ts. Shared code lives in server/core, server/lib, server/db and shared/.
+    files: ['server/modules/**/*.ts'],
+    ignores: ['server/modules/*/*.routes.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { regex: '^\\.\\./(?!\\.\\.)[^/]+/.+', message: "Import another module through its index ('../<module>'), never its files." },
+            { regex: '/modules/[^/]+/[^/]+\\.repository$', message: "A module's repository is private to it; use what the module's index.ts exports." },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // Routes are thin: they call services, never a repository (their own module's included).
+    files: ['server/modules/*/*.routes.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { regex: '^\\.\\./(?!\\.\\.)[^/]+/.+', message: "Import another module through its index ('../<module>'), never its files." },
+            { regex: '\\.repository$', message: 'Routes call services, not repositories.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // Outside the modules (app, auth, jobs, db seed and factories, spa, core): never a module's repository.
+    files: ['server/**/*.ts'],
+    ignores: ['server/modules/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ regex: '/modules/[^/]+/[^/]+\\.repository$', message: "A module's repository is private to it; use what the module's index.ts exports." }] },
+      ],
+    },
+  },
+  {
     // Features never import each other (bulletproof-react); shared code lives in components/, lib/ and shared/.
     files: ['src/features/**/*.{ts,tsx}'],
     rules: {

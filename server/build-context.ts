@@ -5,7 +5,7 @@ import { createDb } from './db/client';
 import { createLogger } from './logger';
 import { createObjectStorage } from './lib/object-storage';
 import { createMailer } from './lib/mailer';
-import { createMailQueue } from './modules/mail/mail-queue';
+import { createMailQueue } from './modules/mail';
 
 export function buildContext(config: AppConfig, overrides: Partial<AppContext> = {}): AppContext {
   const logger = overrides.logger ?? createLogger(config.LOG_LEVEL, config.LOG_FORMAT);

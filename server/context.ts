@@ -5,7 +5,7 @@ import type { AppConfig } from './config';
 import type { Db } from './db/client';
 import type { ObjectStorage } from './lib/object-storage';
 import type { Mailer } from './lib/mailer';
-import type { MailQueue } from './modules/mail/mail-queue';
+import type { MailQueue } from './modules/mail';
 
 /** Everything a request handler may need, built once at boot and passed down explicitly (no module singletons). */
 export type AppContext = {

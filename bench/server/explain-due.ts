@@ -1,7 +1,7 @@
 import type pg from 'pg';
 import { addDays } from '../../shared/trade/iso-date';
 import type { Db } from '../../server/db/client';
-import { companyToday } from '../../server/modules/due/company-today';
+import { companyToday } from '../../server/core/company-today';
 import { dueRepository } from '../../server/modules/due/due.repository';
 
 type PlanNode = { 'Node Type': string; 'Relation Name'?: string; 'Index Name'?: string; 'Actual Rows'?: number; 'Sort Key'?: string[]; Plans?: PlanNode[] };

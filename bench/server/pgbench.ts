@@ -4,7 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { findPgBin } from '../../scripts/lib/postgres';
 import { appliancesRepository } from '../../server/modules/appliances/appliances.repository';
-import { listTimeline } from '../../server/modules/timeline/timeline.repository';
+import { listTimeline } from '../../server/core/timeline';
 import { capturingDb, inlineParams } from './capture-sql';
 
 /**

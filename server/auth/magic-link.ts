@@ -2,9 +2,9 @@ import { z } from 'zod';
 import { magicLink } from 'better-auth/plugins';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
-import type { MailQueue } from '../modules/mail/mail-queue';
-import { invitationsRepository as repo } from '../modules/invitations/invitations.repository';
-import { invitationMail, signInMail } from '../modules/invitations/invitation-mail';
+import type { MailQueue } from '../modules/mail';
+import { findOpenInvitationForMail, hasOpenInvitation, isKnownPerson } from '../modules/invitations';
+import { invitationMail, signInMail } from '../modules/invitations';
 import { SIGN_IN_LINK_HOURS } from '../../shared/schemas/invitations';
 
 export type MagicLinkDeps = { mail: Pick<MailQueue, 'send'>; logger: Pick<Logger, 'debug' | 'info' | 'warn' | 'error'> };
@@ -19,11 +19,11 @@ const requestBody = z.object({ email: z.email() });
  * which addresses exist. A link may create an account only while its address still has an open invitation.
  */
 export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
-  const mayReceiveLink = async (email: string) => (await repo.hasOpenInvitation(db, email)) || repo.isKnownPerson(db, email);
+  const mayReceiveLink = async (email: string) => (await hasOpenInvitation(db, email)) || isKnownPerson(db, email);
 
   /** Queued as the invitation's mail (replacing a link of it still waiting) or as a plain sign-in link. */
   async function queueMail(email: string, url: string, invitationId: unknown) {
-    const invited = typeof invitationId === 'string' && z.uuid().safeParse(invitationId).success ? await repo.findOpenForMail(db, invitationId, email) : null;
+    const invited = typeof invitationId === 'string' && z.uuid().safeParse(invitationId).success ? await findOpenInvitationForMail(db, invitationId, email) : null;
     if (!invited) return deps.mail.send(signInMail(email, url), { kind: 'sign_in', companyId: null });
     const { invitation, companyName, invitedByName } = invited;
     const mail = invitationMail(email, url, { companyId: invitation.companyId, kind: invitation.kind, role: invitation.role, companyName, invitedByName, expiresAt: invitation.expiresAt });
@@ -58,7 +58,7 @@ export function magicLinkAuth(db: Db, deps: MagicLinkDeps) {
     user: {
       create: {
         async before(user: { email: string }, ctx?: { path?: string } | null) {
-          if (ctx?.path === VERIFY_PATH && !(await repo.hasOpenInvitation(db, user.email))) return false;
+          if (ctx?.path === VERIFY_PATH && !(await hasOpenInvitation(db, user.email))) return false;
         },
       },
     },

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { companies } from '../db/schema/index';
-import { runDayBeforeReminders } from '../modules/booking-notices/day-before-reminders';
+import { runDayBeforeReminders } from '../modules/booking-notices';
 
 export const BOOKING_REMINDERS_QUEUE = 'booking-reminders-daily';
 /** 22:00 UTC: the afternoon before across North America, in time to clear the boiler room and plan the day. */

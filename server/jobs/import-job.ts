@@ -1,6 +1,6 @@
 import type { AppContext } from '../context';
-import { importsToResume, runImport } from '../modules/imports/run-import';
-import { sweepImportFiles } from '../modules/imports/sweep-import-files';
+import { importsToResume, runImport } from '../modules/imports';
+import { sweepImportFiles } from '../modules/imports';
 
 export const IMPORT_QUEUE = 'imports';
 /** Every minute: imports whose run stopped (a restart mid-file) are picked up again, and old kept files deleted. */

@@ -1,5 +1,5 @@
 import type { AppContext } from '../context';
-import { sweepOrphanObjects } from '../modules/photos/sweep-orphan-objects';
+import { sweepOrphanObjects } from '../modules/photos';
 
 export const PHOTO_SWEEP_QUEUE = 'photo-orphan-sweep';
 /** Every six hours. Objects whose database row never got written (a crash between the two) go a day later. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { AppContext } from '../context';
 import { companies } from '../db/schema/index';
-import { runRemindersForCompanies } from '../modules/reminders/reminders.service';
+import { runRemindersForCompanies } from '../modules/reminders';
 
 export const REMINDERS_QUEUE = 'reminders-daily';
 /** Once a day at 14:00 UTC (morning across North America); each company's "today" is its own date. */

@@ -1,8 +1,8 @@
 import type { DbOrTx } from '../client';
 import { companies } from '../schema/index';
-import { seedCompanyCatalog } from '../../modules/catalog/seed-catalog';
-import { seedCompanyChecklists } from '../../modules/checklists/seed-checklists';
-import { seedCompanyDueRules } from '../../modules/due/due-rules.seed';
+import { seedCompanyCatalog } from '../../modules/catalog';
+import { seedCompanyChecklists } from '../../modules/checklists';
+import { seedCompanyDueRules } from '../../modules/due';
 import { fakerFor } from './faker';
 import { pickInvented, INVENTED_COMPANY_NAMES } from './invented-names';
 

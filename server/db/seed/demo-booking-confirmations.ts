@@ -1,8 +1,8 @@
 import { eq } from 'drizzle-orm';
 import type { Db } from '../client';
 import { companies } from '../schema/index';
-import { bookingNoticesRepository } from '../../modules/booking-notices/booking-notices.repository';
-import { queueBookingNotice, type NoticeDeps } from '../../modules/booking-notices/queue-booking-notice';
+import { unannouncedBookings } from '../../modules/booking-notices';
+import { queueBookingNotice, type NoticeDeps } from '../../modules/booking-notices';
 import { DEMO_COMPANY } from './demo-accounts';
 
 /**
@@ -15,7 +15,7 @@ export async function queueDemoBookingConfirmations(db: Db, deps: NoticeDeps, { 
   const [demo] = await db.select({ id: companies.id }).from(companies).where(eq(companies.name, DEMO_COMPANY.name)).limit(1);
   if (!demo) return [];
   const mailIds: string[] = [];
-  for (const b of await bookingNoticesRepository.unannounced(db, demo.id, now)) {
+  for (const b of await unannouncedBookings(db, demo.id, now)) {
     const notice = await db.transaction((tx) => queueBookingNotice(deps, tx, b.id, 'booked'));
     if (notice?.mailId) mailIds.push(notice.mailId);
   }

@@ -5,8 +5,8 @@ import { LABELS, type VisitOutcome, type VisitType } from '../../../shared/schem
 import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { addDays, addYears, daysBetween } from '../../../shared/trade/iso-date';
 import { COMPONENT_TYPES, formatSpec } from '../../../shared/trade/component-types';
-import { resultsToStore, keyReadings } from '../../modules/visits/visit-results';
-import { findDefaultChecklist } from '../../modules/checklists/default-checklists';
+import { resultsToStore, keyReadings } from '../../modules/visits';
+import { findDefaultChecklist } from '../../modules/checklists';
 import { requiredReadingsFor } from '../../../shared/visits/required-readings';
 import { ATTENTION_NOTES, demoFindings, demoReadings } from './demo-readings';
 import { partSlotsFor, type DemoApplianceShape, type PartSlot } from './demo-parts';

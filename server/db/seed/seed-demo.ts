@@ -7,7 +7,7 @@ import { insertCustomer } from '../factories/records';
 import { DEMO_COMPANY, DEMO_HOMEOWNER, DEMO_MEMBERS, DEMO_PASSWORD, OTHER_COMPANY } from './demo-accounts';
 import { seedDemoRecords } from './demo-records';
 import { applyDemoCompanyPolicies } from './demo-company-policies';
-import { recomputeDueForCompany } from '../../modules/due/due.repository';
+import { recomputeDueForCompany } from '../../modules/due';
 import { seedDemoMakeupWater } from './demo-makeup-water';
 import { demoClock } from './demo-clock';
 import { seedDemoBookings } from './demo-bookings';

@@ -1,15 +1,15 @@
 import type { DbOrTx } from '../../db/client';
 import { notFound } from '../../lib/http-error';
 import type { ApplianceDto, ApplianceRecordDto } from '../../../shared/schemas/records';
-import { nextBookingOf } from '../bookings/next-booking';
-import { companyDueClock } from '../due/company-today';
-import { customersRepository } from '../customers/customers.repository';
-import { toCustomerDto } from '../customers/customers.service';
-import { sitesRepository } from '../sites/sites.repository';
+import { nextBookingOf } from '../bookings';
+import { companyDueClock } from '../../core/company-today';
+import { findCustomer } from '../../core/tenant-finders';
+import { toCustomerDto } from '../../core/customer-dto';
+import { findSiteDto } from '../sites';
 import { ageStartDate, endOfLifeFor, wholeYearsBetween } from './appliance-age';
 import { applianceLabel } from './appliance-label';
 import { appliancesRepository, type ApplianceRow } from './appliances.repository';
-import { transferProvenance } from '../record-transfers/transfer-provenance';
+import { transferProvenance } from '../record-transfers';
 import { toComponentDto } from './component-dto';
 
 const STATUS_ORDER = { replace_now: 0, overdue: 1, due_soon: 2, ok: 3 } as const;
@@ -46,7 +46,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
   const appliance = await appliancesRepository.find(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
   const [site, { today, dueSoonDays }, replaced, componentRows, lastVisit, draft, nextBooking, transferredFrom] = await Promise.all([
-    sitesRepository.find(db, companyId, appliance.siteId),
+    findSiteDto(db, companyId, appliance.siteId),
     companyDueClock(db, companyId),
     appliancesRepository.findReplaced(db, companyId, applianceId),
     appliancesRepository.components(db, companyId, applianceId),
@@ -55,7 +55,7 @@ export async function loadApplianceRecord(db: DbOrTx, companyId: string, applian
     nextBookingOf(db, companyId, applianceId),
     transferProvenance(db, appliance.importedFromTransferId),
   ]);
-  const customer = site && (await customersRepository.find(db, companyId, site.customerId));
+  const customer = site && (await findCustomer(db, companyId, site.customerId));
   if (!site || !customer) throw notFound('Appliance');
 
   const componentDtos = componentRows.map((r) => toComponentDto(r.component, r.catalogLabel, today, dueSoonDays));

@@ -4,11 +4,11 @@ import { conflict, notFound } from '../../lib/http-error';
 import type { appliancePatch, applianceInput, componentInput, replaceApplianceInput, timelineQuery } from '../../../shared/schemas/records';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
-import { companyDueClock, companyToday } from '../due/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
-import { sitesRepository } from '../sites/sites.repository';
-import { appendTimelineEvent, listTimeline } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { companyDueClock, companyToday } from '../../core/company-today';
+import { recomputeDueForAppliance } from '../due';
+import { findSite } from '../../core/tenant-finders';
+import { appendTimelineEvent, listTimeline } from '../../core/timeline';
 import { applianceLabel } from './appliance-label';
 import { loadApplianceRecord } from './appliance-record';
 import { appliancesRepository } from './appliances.repository';
@@ -33,7 +33,7 @@ export function appliancesService(ctx: AppContext) {
       const id = await ctx.db.transaction(async (tx) => {
         const today = await companyToday(tx, companyId);
         const errors: Record<string, string[]> = {};
-        if (!(await sitesRepository.find(tx, companyId, input.siteId))) errors.siteId = ['Pick a site of your company.'];
+        if (!(await findSite(tx, companyId, input.siteId))) errors.siteId = ['Pick a site of your company.'];
         if (input.installedOn && input.installedOn > today) errors.installedOn = ['The install date cannot be in the future.'];
         const parts = await componentRows(tx, { companyId, actorId: userId, today }, input.components, (i) => `components.${i}.`);
         throwIfErrors({ ...errors, ...parts.errors });

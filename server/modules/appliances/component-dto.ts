@@ -1,6 +1,6 @@
 import type { ComponentDto } from '../../../shared/schemas/records';
-import { describeStoredDue } from '../due/due-status';
-import { typeLabelFor } from '../due/type-label';
+import { describeStoredDue } from '../due';
+import { typeLabelFor } from '../../core/type-label';
 import type { ComponentRow } from './appliances.repository';
 
 /** `dueSoonDays` is the company's "due soon" window (companies.due_soon_days). */

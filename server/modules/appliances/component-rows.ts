@@ -3,7 +3,7 @@ import type { DbOrTx } from '../../db/client';
 import { validationFailed } from '../../lib/http-error';
 import type { componentInput } from '../../../shared/schemas/records';
 import { formatSpec, TradeInputError, type ComponentType } from '../../../shared/trade/index';
-import { catalogRepository } from '../catalog/catalog.repository';
+import { catalogLabels } from '../catalog';
 import type { NewComponent } from './appliances.repository';
 import { RECORD_WORDS } from '../../../shared/glossary/words';
 
@@ -19,7 +19,7 @@ export async function componentRows(
   inputs: ComponentInput[],
   fieldPrefix: (index: number) => string,
 ): Promise<{ rows: Omit<NewComponent, 'applianceId'>[]; errors: Record<string, string[]> }> {
-  const catalog = await catalogRepository.labels(db, scope.companyId);
+  const catalog = await catalogLabels(db, scope.companyId);
   const errors: Record<string, string[]> = {};
   const rows: Omit<NewComponent, 'applianceId'>[] = [];
   inputs.forEach((c, i) => {

@@ -4,7 +4,7 @@ import { bookingAppliances } from '../../db/schema/index';
 import { notFound } from '../../lib/http-error';
 import { formatVisitWindow } from '../../../shared/format/dates';
 import type { BookingReplyCreatedDto, BookingReplyInput, BookingReplyPageDto } from '../../../shared/schemas/booking-notices';
-import { serviceRequestsService } from '../service-requests/service-requests.service';
+import { serviceRequestsService } from '../service-requests';
 import { verifyBookingReplyToken } from './booking-reply-token';
 import { bookingNoticesRepository } from './booking-notices.repository';
 import { homeownerBooking } from './next-booking';

@@ -1,5 +1,5 @@
 import type { DbOrTx } from '../../db/client';
-import { nextBookingOf } from '../bookings/next-booking';
+import { nextBookingOf } from '../bookings';
 import { localDateTimeOf } from '../../../shared/dates';
 import type { HomeownerBookingDto } from '../../../shared/schemas/booking-notices';
 

@@ -2,7 +2,7 @@ import type { BookingDto, LoadListDto, LoadListLineDto } from '../../../shared/s
 import { LABELS, type ApplianceKind, type Fuel, type VisitOutcome } from '../../../shared/schemas/enums';
 import { localDateTimeOf } from '../../../shared/dates';
 import { formatCalendarDate } from '../../../shared/format/dates';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import type { BookingRow, bookingsRepository } from './bookings.repository';
 
 type Details = Awaited<ReturnType<typeof bookingsRepository.details>>;

@@ -2,8 +2,8 @@ import { and, eq, sql } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { bookingAppliances, bookings } from '../../db/schema/index';
 import { validationFailed } from '../../lib/http-error';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { bookingsRepository } from './bookings.repository';
 
 /** A visit may be started from a live booking of this company that covers the appliance; anything else is a 400 on bookingId. */

@@ -15,12 +15,12 @@ import {
   type RoundDto,
 } from '../../../shared/schemas/bookings';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { bookingDtos, loadList } from './booking-dto';
 import { bookingsRepository as repo, type BookingRow } from './bookings.repository';
 import { isExclusionViolation } from './pg-error';
-import { queueBookingNotice, type QueuedNotice } from '../booking-notices/queue-booking-notice';
+import { queueBookingNotice, type QueuedNotice } from '../booking-notices';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 const DAY_MS = 86_400_000;

@@ -2,7 +2,7 @@ import type { AppContext } from '../../context';
 import { notFound } from '../../lib/http-error';
 import type { CatalogEntryDto } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { catalogRepository, type CatalogRow } from './catalog.repository';
 
 type Member = Extract<Principal, { kind: 'member' }>;

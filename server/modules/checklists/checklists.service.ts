@@ -5,7 +5,7 @@ import type { checklistTemplateInput, ChecklistTemplateDto } from '../../../shar
 import type { Principal } from '../../../shared/schemas/roles';
 import { readingsInput } from '../../../shared/schemas/visits';
 import { READING_LABELS } from '../../../shared/visits/reading-labels';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { checklistsRepository, type ChecklistTemplateRow } from './checklists.repository';
 
 type Member = Extract<Principal, { kind: 'member' }>;

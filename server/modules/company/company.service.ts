@@ -4,7 +4,7 @@ import { companyRepository } from './company.repository';
 import { todayInTimeZone } from '../../../shared/dates';
 import type { CompanyDto, CompanySettingsInput } from '../../../shared/schemas/company';
 import { DEFAULT_BOOKING_MINUTES, type BookingMinutesSetting } from '../../../shared/schemas/bookings';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 
 type CompanyRow = { id: string; name: string; phone: string; timeZone: string; underFiringTolerancePct: number | null; dueSoonDays: number; bookingMinutes: Partial<BookingMinutesSetting> };
 

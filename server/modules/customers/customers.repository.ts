@@ -44,14 +44,6 @@ export const customersRepository = {
       .returning();
     return row ?? null;
   },
-  async find(db: DbOrTx, companyId: string, id: string) {
-    const [row] = await db
-      .select()
-      .from(customers)
-      .where(and(eq(customers.companyId, companyId), eq(customers.id, id)))
-      .limit(1);
-    return row ?? null;
-  },
   async list(db: DbOrTx, q: { companyId: string; sort: CustomerSort; after: string[] | null; limit: number; text?: string }) {
     const def = SORTS[q.sort];
     const tuple = sql.join(def.keys.map((k) => k.expr), sql`, `);

@@ -1,25 +1,18 @@
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
 import { notFound } from '../../lib/http-error';
-import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerDto, CustomerListItem, Page } from '../../../shared/schemas/records';
+import type { customerInput, customerListQuery, customerPatch, CustomerDetailDto, CustomerListItem, Page } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
-import { appliancesRepository } from '../appliances/appliances.repository';
-import { sitesRepository } from '../sites/sites.repository';
+import { recordAudit } from '../../core/audit-log';
+import { applianceSummariesForSites } from '../appliances';
+import { sitesOfCustomers } from '../sites';
 import { decodeCustomerCursor, encodeCustomerCursor } from './customer-cursor';
-import { customersRepository, sortKeyCount, type CustomerRow } from './customers.repository';
+import { customersRepository, sortKeyCount } from './customers.repository';
+import { findCustomer } from '../../core/tenant-finders';
+import { toCustomerDto } from '../../core/customer-dto';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
-export const toCustomerDto = (c: CustomerRow): CustomerDto => ({
-  id: c.id,
-  name: c.name,
-  kind: c.kind,
-  phone: c.phone,
-  email: c.email,
-  remindersOptOut: c.remindersOptOut,
-  notes: c.notes,
-});
 
 export function customersService(ctx: AppContext) {
   return {
@@ -34,10 +27,10 @@ export function customersService(ctx: AppContext) {
       };
     },
     async get(companyId: string, id: string): Promise<CustomerDetailDto> {
-      const customer = await customersRepository.find(ctx.db, companyId, id);
+      const customer = await findCustomer(ctx.db, companyId, id);
       if (!customer) throw notFound('Customer');
-      const sites = await sitesRepository.listForCustomers(ctx.db, companyId, [id]);
-      const appliances = await appliancesRepository.summariesForSites(ctx.db, companyId, sites.map((s) => s.id));
+      const sites = await sitesOfCustomers(ctx.db, companyId, [id]);
+      const appliances = await applianceSummariesForSites(ctx.db, companyId, sites.map((s) => s.id));
       return { ...toCustomerDto(customer), sites: sites.map((s) => ({ ...s, appliances: appliances.filter((a) => a.siteId === s.id) })) };
     },
     async create(actor: Member, input: z.output<typeof customerInput>) {

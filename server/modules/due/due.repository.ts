@@ -3,7 +3,7 @@ import type { DbOrTx } from '../../db/client';
 import { appliances, componentCatalog, components, customers, dueRules, sites, users } from '../../db/schema/index';
 import type { ApplianceKind } from '../../../shared/schemas/enums';
 import { recomputeDueStatement } from './due-recompute.sql';
-import { companyToday } from './company-today';
+import { companyToday } from '../../core/company-today';
 
 // `today` defaults to the company's date by the app's clock (not the database server's), as every other date rule.
 

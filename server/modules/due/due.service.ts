@@ -5,11 +5,11 @@ import { PLANNING_MEDIAN_SOURCE, PLANNING_MEDIAN_YEARS } from '../../../shared/t
 import type { DueItemDto, DueRuleDto, DueStockDto, DueStockRow } from '../../../shared/schemas/due';
 import type { Page } from '../../../shared/schemas/records';
 import type { ApplianceKind } from '../../../shared/schemas/enums';
-import { recordAudit } from '../audit/audit.repository';
-import { companyDueClock, companyToday } from './company-today';
+import { recordAudit } from '../../core/audit-log';
+import { companyDueClock, companyToday } from '../../core/company-today';
 import { describeStoredDue } from './due-status';
 import { dueRepository, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from './due.repository';
-import { typeLabelFor } from './type-label';
+import { typeLabelFor } from '../../core/type-label';
 
 type Actor = { userId: string; companyId: string };
 

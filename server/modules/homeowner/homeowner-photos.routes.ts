@@ -4,8 +4,8 @@ import { defineRoute } from '../../lib/route';
 import { notFound } from '../../lib/http-error';
 import { currentHomeowner } from '../../middleware/authenticate';
 import { HOMEOWNER_PHOTO_VARIANTS, homeownerPhotoParams, sharePhotoParams, type HomeownerPhotoVariant } from '../../../shared/schemas/homeowner';
-import { photosRepository } from '../photos/photos.repository';
-import { resolveShareToken } from '../share-links/resolve-share-token';
+import { photosService, sendPhoto } from '../photos';
+import { resolveShareToken } from '../share-links';
 import { requireOwnAppliance } from './own-appliance';
 
 const isVariant = (v: string): v is HomeownerPhotoVariant => (HOMEOWNER_PHOTO_VARIANTS as readonly string[]).includes(v);
@@ -14,23 +14,14 @@ const isVariant = (v: string): v is HomeownerPhotoVariant => (HOMEOWNER_PHOTO_VA
 export function homeownerPhotoRoutes(ctx: AppContext) {
   const router = Router();
 
+  const photos = photosService(ctx);
+
   async function send(req: Request, res: Response, at: { companyId: string; applianceId: string }, photoId: string, variant: string) {
     if (!isVariant(variant)) throw notFound('Photo');
-    const photo = await photosRepository.find(ctx.db, at.companyId, photoId);
-    if (!photo || photo.applianceId !== at.applianceId || !photo.homeownerVisible) throw notFound('Photo');
-    const etag = `"${photo.sha256}-${variant}"`;
+    const image = await photos.homeownerImage(at, photoId, variant);
     // Private, and revalidated each time, so a photo hidden later or a link revoked stops showing at once (a 304 is cheap).
-    res.setHeader('Cache-Control', 'private, no-cache');
     res.setHeader('Referrer-Policy', 'no-referrer');
-    res.setHeader('ETag', etag);
-    if (req.headers['if-none-match']?.split(',').some((t) => t.trim().replace(/^W\//, '') === etag)) return void res.status(304).end();
-    const object = await ctx.storage.get(variant === 'display' ? photo.displayKey : photo.thumbKey).catch((err: unknown) => {
-      if ((err as { name?: string }).name === 'NoSuchKey') throw notFound('Photo');
-      throw err;
-    });
-    res.setHeader('Content-Type', object.contentType ?? 'image/jpeg');
-    res.setHeader('Content-Length', String(object.body.length));
-    res.end(object.body);
+    await sendPhoto(req, res, image, 'private, no-cache');
   }
 
   defineRoute(router, 'get', '/share/:token/photos/:photoId/:variant', { access: 'public', schemas: { params: sharePhotoParams } }, async ({ params }, req, res) => {

@@ -2,12 +2,13 @@ import type { DbOrTx } from '../../db/client';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { HomeownerViewDto } from '../../../shared/schemas/homeowner';
 import { addMonths } from '../../../shared/trade/iso-date';
-import { loadApplianceRecord } from '../appliances/appliance-record';
-import { typeLabelFor } from '../due/type-label';
+import { loadApplianceRecord } from '../appliances';
+import { typeLabelFor } from '../../core/type-label';
 import { homeownerRepository as repo } from './homeowner.repository';
 import { readingsInWords } from './readings-in-words';
-import { nextHomeownerBookingOf } from '../booking-notices/next-booking';
+import { nextHomeownerBookingOf } from '../booking-notices';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 /** "is" or "are" for a part's name: "ignition electrodes", "burners" are plural; "gas valve", "cad cell" are not. */
 export function isOrAre(part: string): 'is' | 'are' {
@@ -29,7 +30,7 @@ export const MEANING = {
 export async function buildHomeownerView(db: DbOrTx, companyId: string, applianceId: string): Promise<HomeownerViewDto> {
   const record = await loadApplianceRecord(db, companyId, applianceId);
   const [company, visitRows, photoRows, nextBooking] = await Promise.all([
-    repo.company(db, companyId),
+    findCompanyContact(db, companyId),
     repo.completedVisits(db, companyId, applianceId),
     repo.visiblePhotos(db, companyId, applianceId),
     nextHomeownerBookingOf(db, companyId, applianceId),

@@ -1,12 +1,8 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { appliances, companies, componentCatalog, components, partSwaps, photos, sites, visits } from '../../db/schema/index';
+import { appliances, componentCatalog, components, partSwaps, photos, sites, visits } from '../../db/schema/index';
 
 export const homeownerRepository = {
-  async company(db: DbOrTx, companyId: string) {
-    const [row] = await db.select({ name: companies.name, phone: companies.phone }).from(companies).where(eq(companies.id, companyId));
-    return row;
-  },
   /** Completed visits only: a draft is the technician's work in progress. Internal notes are never selected. */
   completedVisits(db: DbOrTx, companyId: string, applianceId: string) {
     return db

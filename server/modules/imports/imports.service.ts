@@ -7,7 +7,7 @@ import { guessMapping, mappingMemory } from '../../../shared/imports/guess-mappi
 import { IMPORT_FIELDS, REQUIRED_IMPORT_FIELDS, type ImportField, type ImportMapping } from '../../../shared/imports/import-fields';
 import type { ImportFileDto, ImportPreviewDto, importMappingInput } from '../../../shared/schemas/imports';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { previewRows } from './import-plan';
 import { importsRepository, type ImportFileRow } from './imports.repository';
 import { loadImportFile, loadImportPlan } from './load-import-plan';

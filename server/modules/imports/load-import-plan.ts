@@ -3,8 +3,8 @@ import type { DbOrTx } from '../../db/client';
 import { gone } from '../../lib/http-error';
 import type { ImportMapping } from '../../../shared/imports/import-fields';
 import { COMPONENT_TYPES, type ComponentType } from '../../../shared/trade/component-types';
-import { catalogRepository } from '../catalog/catalog.repository';
-import { companyToday } from '../due/company-today';
+import { catalogLabels } from '../catalog';
+import { companyToday } from '../../core/company-today';
 import { dropKnownHistory, planImport } from './import-plan';
 import { importsRepository, type ImportFileRow } from './imports.repository';
 import { nameKey } from './match-keys';
@@ -12,7 +12,7 @@ import { readImportFile, type ParsedImportFile } from './read-import-file';
 
 /** The company's active part types by code and by label, as a spreadsheet names them. */
 async function partTypesOf(db: DbOrTx, companyId: string) {
-  const catalog = await catalogRepository.labels(db, companyId);
+  const catalog = await catalogLabels(db, companyId);
   const out = new Map<string, ComponentType>();
   for (const [code, entry] of catalog) {
     if (!entry.active || !(code in COMPONENT_TYPES)) continue;

@@ -1,7 +1,7 @@
 import type { AppContext } from '../../context';
 import { conflict, forbidden, gone, notFound, validationFailed } from '../../lib/http-error';
 import type { AcceptInvitationInput, InviteeInvitationDto } from '../../../shared/schemas/invitations';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { invitationsRepository as repo } from './invitations.repository';
 import { invitationStatus } from './invitation-dto';
 

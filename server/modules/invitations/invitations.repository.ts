@@ -118,14 +118,6 @@ export const invitationsRepository = {
     if (member) return true;
     return (await this.homeownerCompanies(db, user.id)).length > 0;
   },
-  async findCustomer(db: DbOrTx, companyId: string, customerId: string) {
-    const [row] = await db
-      .select({ id: customers.id, email: customers.email, name: customers.name })
-      .from(customers)
-      .where(and(eq(customers.companyId, companyId), eq(customers.id, customerId)))
-      .limit(1);
-    return row ?? null;
-  },
   async insertMembership(db: DbOrTx, values: typeof memberships.$inferInsert) {
     await db.insert(memberships).values(values);
   },

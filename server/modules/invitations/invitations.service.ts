@@ -9,10 +9,11 @@ import {
   type InvitationDto,
   type MemberInvitationInput,
 } from '../../../shared/schemas/invitations';
-import { recordAudit } from '../audit/audit.repository';
-import { outgoingMailRepository } from '../mail/outgoing-mail.repository';
+import { recordAudit } from '../../core/audit-log';
+import { latestMailStatuses } from '../mail';
 import { invitationsRepository as repo, type InvitationRow } from './invitations.repository';
 import { invitationStatus, toInvitationDto } from './invitation-dto';
+import { findCustomer } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
@@ -34,7 +35,7 @@ export function invitationsService(ctx: AppContext) {
       ctx.logger.error({ err, invitationId: row.id }, 'invitation mail could not be queued');
       throw new HttpError(502, 'mail_failed', 'The invitation is saved, but its e-mail could not be queued. Try "Send again" in a minute.');
     }
-    return (await outgoingMailRepository.latestStatuses(ctx.db, 'invitation', [row.id])).get(row.id) ?? null;
+    return (await latestMailStatuses(ctx.db, 'invitation', [row.id])).get(row.id) ?? null;
   }
 
   /**
@@ -94,7 +95,7 @@ export function invitationsService(ctx: AppContext) {
 
     async listPending(actor: Member): Promise<InvitationDto[]> {
       const rows = await repo.listPendingMembers(ctx.db, actor.companyId);
-      const mail = await outgoingMailRepository.latestStatuses(ctx.db, 'invitation', rows.map((r) => r.invitation.id));
+      const mail = await latestMailStatuses(ctx.db, 'invitation', rows.map((r) => r.invitation.id));
       return rows.map((r) => toInvitationDto(r.invitation, r.invitedByName, mail.get(r.invitation.id)));
     },
 
@@ -125,7 +126,7 @@ export function invitationsService(ctx: AppContext) {
     },
 
     async inviteHomeowner(actor: Member, customerId: string, input: HomeownerInvitationInput): Promise<InvitationDto> {
-      const customer = await repo.findCustomer(ctx.db, actor.companyId, customerId);
+      const customer = await findCustomer(ctx.db, actor.companyId, customerId);
       if (!customer) throw notFound('Customer');
       const email = input.email ?? customer.email?.trim().toLowerCase();
       if (!email) {

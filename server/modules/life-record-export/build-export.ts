@@ -4,12 +4,12 @@ import { photos, users, visitAmendments, visits } from '../../db/schema/index';
 import { LIFE_RECORD_EXPORT_FORMAT, LIFE_RECORD_EXPORT_VERSION, type LifeRecordExport } from '../../../shared/schemas/life-record-export';
 import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { readingMeanings, type StoredResults } from '../../../shared/visits/reading-meanings';
-import { loadApplianceRecord } from '../appliances/appliance-record';
-import { wholeYearsBetween } from '../appliances/appliance-age';
-import { companyToday } from '../due/company-today';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
-import { typeLabelFor } from '../due/type-label';
-import { visitsRepository } from '../visits/visits.repository';
+import { loadApplianceRecord } from '../appliances';
+import { wholeYearsBetween } from '../appliances';
+import { companyToday } from '../../core/company-today';
+import { typeLabelFor } from '../../core/type-label';
+import { swapsOfVisit } from '../visits';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 /** Who the export is for: the office sees every photo and the serial; a homeowner their visible photos; a share link no serial. */
 export type ExportAudience = 'office' | 'homeowner' | 'share';
@@ -23,7 +23,7 @@ export type ExportPhoto = { id: string; thumbKey: string; kind: string; caption:
 export async function buildLifeRecordExport(db: DbOrTx, companyId: string, applianceId: string, audience: ExportAudience, now = new Date()) {
   const record = await loadApplianceRecord(db, companyId, applianceId);
   const [company, today, visitRows, photoRows] = await Promise.all([
-    homeownerRepository.company(db, companyId),
+    findCompanyContact(db, companyId),
     companyToday(db, companyId),
     db
       .select()
@@ -45,7 +45,7 @@ export async function buildLifeRecordExport(db: DbOrTx, companyId: string, appli
         .where(and(eq(visitAmendments.companyId, companyId), inArray(visitAmendments.visitId, visitIds)))
         .orderBy(asc(visitAmendments.createdAt))
     : [];
-  const swapsByVisit = new Map(await Promise.all(visitRows.map(async (v) => [v.id, await visitsRepository.swapsOfVisit(db, companyId, v.id)] as const)));
+  const swapsByVisit = new Map(await Promise.all(visitRows.map(async (v) => [v.id, await swapsOfVisit(db, companyId, v.id)] as const)));
   const a = record.appliance;
 
   const document: LifeRecordExport = {

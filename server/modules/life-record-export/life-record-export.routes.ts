@@ -4,9 +4,9 @@ import { defineRoute } from '../../lib/route';
 import { currentHomeowner, currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
 import { shareTokenParam } from '../../../shared/schemas/homeowner';
-import { requireOwnAppliance } from '../homeowner/own-appliance';
-import { resolveShareToken } from '../share-links/resolve-share-token';
-import { sendPdf } from '../visit-reports/visit-reports.routes';
+import { requireOwnAppliance } from '../homeowner';
+import { resolveShareToken } from '../share-links';
+import { sendPdf } from '../visit-reports';
 import { buildLifeRecordExport, type ExportAudience } from './build-export';
 import { renderLifeRecordPdf, thumbnailForPdf } from './life-record-pdf';
 

@@ -2,7 +2,7 @@ import sharp from 'sharp';
 import { LABELS } from '../../../shared/schemas/enums';
 import type { LifeRecordExport } from '../../../shared/schemas/life-record-export';
 import { createPdfWriter } from '../../lib/pdf-writer';
-import { SAFETY_NOTES } from '../visit-reports/visit-report-content';
+import { SAFETY_NOTES } from '../visit-reports';
 import { outcomeInSentence } from '../../../shared/glossary/outcomes';
 
 const longDate = (iso: string) =>

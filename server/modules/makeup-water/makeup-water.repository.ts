@@ -1,16 +1,8 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { appliances, makeupWaterEntries } from '../../db/schema/index';
+import { makeupWaterEntries } from '../../db/schema/index';
 
 export const makeupWaterRepository = {
-  async findAppliance(db: DbOrTx, companyId: string, applianceId: string) {
-    const [row] = await db
-      .select({ id: appliances.id, kind: appliances.kind })
-      .from(appliances)
-      .where(and(eq(appliances.companyId, companyId), eq(appliances.id, applianceId)))
-      .limit(1);
-    return row ?? null;
-  },
   list(db: DbOrTx, companyId: string, applianceId: string) {
     return db
       .select({ id: makeupWaterEntries.id, recordedOn: makeupWaterEntries.recordedOn, kind: makeupWaterEntries.kind, gallons: makeupWaterEntries.gallons, note: makeupWaterEntries.note })

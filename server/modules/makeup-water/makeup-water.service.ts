@@ -3,11 +3,12 @@ import { notFound, validationFailed } from '../../lib/http-error';
 import { analyzeMakeupWater, type MakeupWaterEntry } from '../../../shared/trade/makeup-water';
 import { TradeInputError } from '../../../shared/trade/trade-input-error';
 import type { MakeupWaterDto, MakeupWaterEntryDto, MakeupWaterEntryInput } from '../../../shared/schemas/makeup-water';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { companyToday } from '../due/company-today';
-import { occurredAtForDate } from '../appliances/occurred-at';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
+import { companyToday } from '../../core/company-today';
+import { occurredAtForDate } from '../appliances';
 import { makeupWaterRepository as repo } from './makeup-water.repository';
+import { findAppliance } from '../../core/tenant-finders';
 
 const toTradeEntry = (e: MakeupWaterEntryDto): MakeupWaterEntry =>
   e.kind === 'meter_reading' ? { date: e.recordedOn, kind: 'meter_reading', gallons: e.gallons ?? 0 } : { date: e.recordedOn, kind: 'added_by_hand', ...(e.gallons === null ? {} : { gallons: e.gallons }) };
@@ -19,14 +20,14 @@ function analyze(entries: MakeupWaterEntryDto[]) {
 export function makeupWaterService(ctx: AppContext) {
   return {
     async get(companyId: string, applianceId: string): Promise<MakeupWaterDto> {
-      if (!(await repo.findAppliance(ctx.db, companyId, applianceId))) throw notFound('Appliance');
+      if (!(await findAppliance(ctx.db, companyId, applianceId))) throw notFound('Appliance');
       const entries = await repo.list(ctx.db, companyId, applianceId);
       return { entries, analysis: analyze(entries) };
     },
 
     async add(actor: { companyId: string; userId: string }, applianceId: string, input: MakeupWaterEntryInput): Promise<MakeupWaterDto> {
       return ctx.db.transaction(async (tx) => {
-        if (!(await repo.findAppliance(tx, actor.companyId, applianceId))) throw notFound('Appliance');
+        if (!(await findAppliance(tx, actor.companyId, applianceId))) throw notFound('Appliance');
         const today = await companyToday(tx, actor.companyId);
         if (input.recordedOn > today) throw validationFailed({ recordedOn: ['A reading cannot be dated in the future.'] });
         const existing = await repo.list(tx, actor.companyId, applianceId);

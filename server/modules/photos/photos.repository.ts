@@ -10,14 +10,6 @@ const withAuthor = { photo: photos, createdByName: users.name };
 const flatten = (r: { photo: PhotoRow; createdByName: string | null }): PhotoRowWithAuthor => ({ ...r.photo, createdByName: r.createdByName });
 
 export const photosRepository = {
-  async findAppliance(db: DbOrTx, companyId: string, applianceId: string) {
-    const [row] = await db
-      .select({ id: appliances.id })
-      .from(appliances)
-      .where(and(eq(appliances.companyId, companyId), eq(appliances.id, applianceId)))
-      .limit(1);
-    return row ?? null;
-  },
   async findVisit(db: DbOrTx, companyId: string, visitId: string) {
     const [row] = await db
       .select({ id: visits.id, applianceId: visits.applianceId })

@@ -8,6 +8,7 @@ import { MULTIPART_BODY } from '../../middleware/body-type';
 import { uuidParam } from '../../../shared/schemas/common';
 import { MAX_PHOTO_BYTES, MAX_PHOTO_FILES, photoListQuery, photoPatch, photoUploadFields } from '../../../shared/schemas/photos';
 import { photosService, type PhotoVariant } from './photos.service';
+import { sendPhoto } from './send-photo';
 
 export function photosRoutes(ctx: AppContext) {
   const router = Router();
@@ -41,13 +42,7 @@ export function photosRoutes(ctx: AppContext) {
     defineRoute(router, 'get', `/photos/:id/${variant}`, { access: 'signed-in', schemas: { params: uuidParam } }, async ({ params }, req, res) => {
       const image = await service.image(res.locals.principal, params.id, variant);
       // Served from our own origin with a private cache: the bytes of one photo never change under its id.
-      res.setHeader('Cache-Control', 'private, max-age=86400');
-      res.setHeader('ETag', image.etag);
-      if (matchesEtag(req.headers['if-none-match'], image.etag)) return void res.status(304).end();
-      const object = await image.load();
-      res.setHeader('Content-Type', object.contentType ?? 'image/jpeg');
-      res.setHeader('Content-Length', String(object.body.length));
-      res.end(object.body);
+      await sendPhoto(req, res, image, 'private, max-age=86400');
     });
   }
   defineRoute(router, 'patch', '/photos/:id', { access: { permission: 'records:write' }, schemas: { params: uuidParam, body: photoPatch } }, ({ params, body }, _req, res) =>
@@ -58,5 +53,3 @@ export function photosRoutes(ctx: AppContext) {
 
 const malformedUpload = () => new HttpError(400, 'upload_rejected', 'The upload could not be read: send it again as a multipart form.');
 
-const matchesEtag = (header: string | undefined, etag: string) =>
-  Boolean(header) && header!.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag || tag.trim() === '*');

@@ -4,20 +4,35 @@ import { forbidden, HttpError, notFound, validationFailed } from '../../lib/http
 import { can } from '../../../shared/policy';
 import type { Principal } from '../../../shared/schemas/roles';
 import { PHOTO_KIND_LABELS, type PhotoDto, type PhotoUploadDto, type PhotoUploadFields } from '../../../shared/schemas/photos';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { photoDto } from './photo-dto';
 import { processImage, type ProcessedImage } from './process-image';
 import { photosRepository as repo, type PhotoRowWithAuthor } from './photos.repository';
+import { findAppliance } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 export type UploadedFile = { originalname: string; buffer: Buffer };
 export type PhotoVariant = 'display' | 'thumb';
 
+/** One variant of a stored photo: its ETag and a loader for its bytes (404 when the object is gone). */
+export type PhotoImage = { etag: string; load: () => ReturnType<AppContext['storage']['get']> };
+
 export function photosService(ctx: AppContext) {
+  function imageOf(photo: { sha256: string; displayKey: string; thumbKey: string }, variant: PhotoVariant): PhotoImage {
+    const key = variant === 'display' ? photo.displayKey : photo.thumbKey;
+    return {
+      etag: `"${photo.sha256}-${variant}"`,
+      load: () =>
+        ctx.storage.get(key).catch((err: unknown) => {
+          if ((err as { name?: string }).name === 'NoSuchKey') throw notFound('Photo');
+          throw err;
+        }),
+    };
+  }
   /** The visit and part, when given, must be this company's and on this appliance. */
   async function checkSlot(actor: Member, fields: PhotoUploadFields) {
-    if (!(await repo.findAppliance(ctx.db, actor.companyId, fields.applianceId))) throw notFound('Appliance');
+    if (!(await findAppliance(ctx.db, actor.companyId, fields.applianceId))) throw notFound('Appliance');
     if (fields.visitId) {
       const visit = await repo.findVisit(ctx.db, actor.companyId, fields.visitId);
       if (!visit) throw notFound('Visit');
@@ -125,7 +140,7 @@ export function photosService(ctx: AppContext) {
     },
 
     async list(actor: Member, applianceId: string): Promise<PhotoDto[]> {
-      if (!(await repo.findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
+      if (!(await findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
       return (await repo.list(ctx.db, actor.companyId, applianceId)).map(photoDto);
     },
 
@@ -136,15 +151,14 @@ export function photosService(ctx: AppContext) {
       const photo = await repo.find(ctx.db, principal.companyId, id);
       if (!photo) throw notFound('Photo');
       if (principal.kind === 'homeowner' && !(photo.homeownerVisible && principal.customerIds.includes(photo.customerId))) throw notFound('Photo');
-      const key = variant === 'display' ? photo.displayKey : photo.thumbKey;
-      return {
-        etag: `"${photo.sha256}-${variant}"`,
-        load: () =>
-          ctx.storage.get(key).catch((err: unknown) => {
-            if ((err as { name?: string }).name === 'NoSuchKey') throw notFound('Photo');
-            throw err;
-          }),
-      };
+      return imageOf(photo, variant);
+    },
+
+    /** A photo of this appliance marked for the homeowner (share link or homeowner account); anything else is 404. */
+    async homeownerImage(at: { companyId: string; applianceId: string }, id: string, variant: PhotoVariant) {
+      const photo = await repo.find(ctx.db, at.companyId, id);
+      if (!photo || photo.applianceId !== at.applianceId || !photo.homeownerVisible) throw notFound('Photo');
+      return imageOf(photo, variant);
     },
 
     async update(actor: Member, id: string, patch: { caption?: string | null; homeownerVisible?: boolean }): Promise<PhotoDto> {

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { appliances, radiationSurveyRadiators, radiationSurveyRooms, radiationSurveys, users } from '../../db/schema/index';
+import { radiationSurveyRadiators, radiationSurveyRooms, radiationSurveys, users } from '../../db/schema/index';
 
 const summaryColumns = {
   id: radiationSurveys.id,
@@ -18,14 +18,6 @@ export type RoomRow = typeof radiationSurveyRooms.$inferInsert;
 export type RadiatorRow = typeof radiationSurveyRadiators.$inferInsert;
 
 export const radiationSurveysRepository = {
-  async findAppliance(db: DbOrTx, companyId: string, applianceId: string) {
-    const [row] = await db
-      .select({ id: appliances.id, kind: appliances.kind, inputBtuh: appliances.inputBtuh, grossOutputBtuh: appliances.grossOutputBtuh })
-      .from(appliances)
-      .where(and(eq(appliances.companyId, companyId), eq(appliances.id, applianceId)))
-      .limit(1);
-    return row ?? null;
-  },
 
   list(db: DbOrTx, companyId: string, applianceId: string) {
     return db

@@ -13,9 +13,10 @@ import {
   type RadiatorDto,
   type RadiatorParsed,
 } from '../../../shared/schemas/radiation-surveys';
-import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
+import { recordAudit } from '../../core/audit-log';
+import { companyToday } from '../../core/company-today';
 import { radiationSurveysRepository as repo, type RadiatorRow } from './radiation-surveys.repository';
+import { findAppliance } from '../../core/tenant-finders';
 
 const SURVEYED_KINDS = new Set(['steam_boiler', 'hot_water_boiler']);
 const round2 = (n: number) => Math.round(n * 100) / 100;
@@ -59,7 +60,7 @@ function summaryDto(s: { id: string; surveyedOn: string; surveyedBy: string | nu
 }
 
 async function applianceOrThrow(db: DbOrTx, companyId: string, applianceId: string) {
-  const appliance = await repo.findAppliance(db, companyId, applianceId);
+  const appliance = await findAppliance(db, companyId, applianceId);
   if (!appliance) throw notFound('Appliance');
   return appliance;
 }

@@ -4,8 +4,8 @@ import { appliances, auditLog, components, customers, partSwaps, photos, sites, 
 import type { ObjectStorage } from '../../lib/object-storage';
 import { LABELS } from '../../../shared/schemas/enums';
 import { formatCalendarDate } from '../../../shared/format/dates';
-import { typeLabelFor } from '../due/type-label';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { typeLabelFor } from '../../core/type-label';
+import { recomputeDueForAppliance } from '../due';
 import type { TransferableRecord } from './read-transferable-record';
 
 export type CopyTarget = { companyId: string; actorId: string; transferId: string; senderName: string; receivedAt: Date; today: string; site: { id: string; customerId: string } | null };

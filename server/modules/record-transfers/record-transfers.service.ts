@@ -11,12 +11,12 @@ import {
   type TransferRedeemInput,
 } from '../../../shared/schemas/record-transfers';
 import { groupTransferCode, transferCodeFromBytes } from '../../../shared/transfers/transfer-code';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { applianceLabel } from '../appliances/appliance-label';
-import { companyToday } from '../due/company-today';
-import { requireOwnAppliance } from '../homeowner/own-appliance';
-import { sitesRepository } from '../sites/sites.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
+import { applianceLabel } from '../appliances';
+import { companyToday } from '../../core/company-today';
+import { requireOwnAppliance } from '../homeowner';
+import { findSite } from '../../core/tenant-finders';
 import { copyRecord } from './copy-record';
 import { countsOf, readTransferableRecord } from './read-transferable-record';
 import { recordTransfersRepository as repo, type TransferRow } from './record-transfers.repository';
@@ -132,7 +132,7 @@ export function recordTransfersService(ctx: AppContext) {
     },
 
     async redeem(actor: Member, input: Omit<TransferRedeemInput, 'code'> & { code: string }): Promise<ReceivedTransferDto> {
-      const site = input.siteId ? await sitesRepository.find(ctx.db, actor.companyId, input.siteId) : null;
+      const site = input.siteId ? await findSite(ctx.db, actor.companyId, input.siteId) : null;
       if (input.siteId && !site) throw notFound('Site');
       const today = await companyToday(ctx.db, actor.companyId);
       const written: string[] = [];

@@ -2,9 +2,9 @@ import type { AppContext } from '../../context';
 import { HttpError, badRequest, conflict, notFound } from '../../lib/http-error';
 import { addDays } from '../../../shared/trade/iso-date';
 import { type ReminderDto, type RemindersPageDto } from '../../../shared/schemas/reminders';
-import { companyRepository } from '../company/company.repository';
-import { companyDueClock, companyToday } from '../due/company-today';
-import { typeLabelFor } from '../due/type-label';
+import { findCompany } from '../../core/tenant-finders';
+import { companyDueClock, companyToday } from '../../core/company-today';
+import { typeLabelFor } from '../../core/type-label';
 import { remindersRepository as repo, type NewReminder, type ReminderRow } from './reminders.repository';
 import { deliverReminders } from './deliver-reminders';
 
@@ -126,7 +126,7 @@ export async function runRemindersForCompanies(ctx: AppContext, companyIds: stri
   const results: { companyId: string; ok: boolean }[] = [];
   for (const companyId of companyIds) {
     try {
-      const company = await companyRepository.findById(ctx.db, companyId);
+      const company = await findCompany(ctx.db, companyId);
       if (!company) continue;
       const outcome = await runReminders(ctx, { companyId });
       if (outcome.created || outcome.retried) ctx.logger.info({ companyId, ...outcome }, 'reminder run');

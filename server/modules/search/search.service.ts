@@ -1,6 +1,6 @@
 import type { AppContext } from '../../context';
 import type { SearchHit } from '../../../shared/schemas/records';
-import { applianceLabel } from '../appliances/appliance-label';
+import { applianceLabel } from '../appliances';
 import { searchAppliances } from './search.repository';
 
 export function searchService(ctx: AppContext) {

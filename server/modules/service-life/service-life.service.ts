@@ -3,12 +3,12 @@ import { badRequest, notFound } from '../../lib/http-error';
 import { kaplanMeierFromCounts, medianConfidence95, medianSurvival, type SurvivalStep, type TimeCount } from '../../../shared/stats/kaplan-meier';
 import { MIN_EVENTS_TO_ADOPT, type ServiceLifeDto, type ServiceLifePoint } from '../../../shared/schemas/service-life';
 import type { DueRuleDto } from '../../../shared/schemas/due';
-import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
-import { dueRepository, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from '../due/due.repository';
-import { dueService } from '../due/due.service';
-import { typeLabelFor } from '../due/type-label';
-import { catalogRepository } from '../catalog/catalog.repository';
+import { recordAudit } from '../../core/audit-log';
+import { companyToday } from '../../core/company-today';
+import { findDueRule, updateDueRule, recomputeDueForCompany, type DueRuleChange, type DueRuleRow } from '../due';
+import { dueService } from '../due';
+import { typeLabelFor } from '../../core/type-label';
+import { catalogLabels } from '../catalog';
 import { serviceLifeCounts, type AgeCountRow } from './service-life.repository';
 
 type Actor = { userId: string; companyId: string };
@@ -93,7 +93,7 @@ export function adoptedChange(rule: DueRuleRow, years: number, source: string): 
 export function serviceLifeService(ctx: AppContext) {
   async function estimates(companyId: string, type?: string): Promise<ServiceLifeDto[]> {
     const today = await companyToday(ctx.db, companyId);
-    const [rows, labels] = await Promise.all([serviceLifeCounts(ctx.db, companyId, today, type), catalogRepository.labels(ctx.db, companyId)]);
+    const [rows, labels] = await Promise.all([serviceLifeCounts(ctx.db, companyId, today, type), catalogLabels(ctx.db, companyId)]);
     const byType = new Map<string, AgeCountRow[]>();
     for (const r of rows) byType.set(r.type_code, [...(byType.get(r.type_code) ?? []), r]);
     return [...byType.entries()]
@@ -112,7 +112,7 @@ export function serviceLifeService(ctx: AppContext) {
      * age, with the learned median as that age.
      */
     async adopt(actor: Actor, ruleId: string): Promise<DueRuleDto> {
-      const found = await dueRepository.findRule(ctx.db, actor.companyId, ruleId);
+      const found = await findDueRule(ctx.db, actor.companyId, ruleId);
       if (!found) throw notFound('Due rule');
       const [estimate] = await estimates(actor.companyId, found.rule.componentType);
       if (!estimate || estimate.events < MIN_EVENTS_TO_ADOPT) {
@@ -124,9 +124,9 @@ export function serviceLifeService(ctx: AppContext) {
       const years = Math.max(1, Math.round(estimate.medianYears));
       const change = adoptedChange(found.rule, years, learnedSource(estimate));
       await ctx.db.transaction(async (tx) => {
-        const before = await dueRepository.findRule(tx, actor.companyId, ruleId);
+        const before = await findDueRule(tx, actor.companyId, ruleId);
         if (!before) throw notFound('Due rule');
-        await dueRepository.updateRule(tx, actor.companyId, ruleId, change, actor.userId);
+        await updateDueRule(tx, actor.companyId, ruleId, change, actor.userId);
         await recomputeDueForCompany(tx, actor.companyId);
         const { inspectionIntervalMonths, replacementAgeYears, planningAgeYears, replacementPolicy, basis, source } = before.rule;
         await recordAudit(tx, {

@@ -5,8 +5,8 @@ import { currentHomeowner, currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
 import { shareTokenParam } from '../../../shared/schemas/homeowner';
 import { serviceRequestInput, serviceRequestListQuery, serviceRequestPatch } from '../../../shared/schemas/service-requests';
-import { requireOwnAppliance } from '../homeowner/own-appliance';
-import { resolveShareToken } from '../share-links/resolve-share-token';
+import { requireOwnAppliance } from '../homeowner';
+import { resolveShareToken } from '../share-links';
 import { serviceRequestsService } from './service-requests.service';
 
 export function serviceRequestRoutes(ctx: AppContext) {

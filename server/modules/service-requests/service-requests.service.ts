@@ -9,12 +9,12 @@ import type {
   ServiceRequestStatus,
   ServiceRequestVia,
 } from '../../../shared/schemas/service-requests';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { serviceRequestMail } from './service-request-mail';
 import { decodeRequestCursor, encodeRequestCursor, serviceRequestDto } from './service-request-dto';
 import { serviceRequestsRepository as repo } from './service-requests.repository';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 type Source = { companyId: string; applianceId: string } & (
   | { via: Extract<ServiceRequestVia, 'share_link'>; shareLinkId: string }
@@ -61,7 +61,7 @@ export function serviceRequestsService(ctx: AppContext) {
 
   return {
     async create(source: Source, input: Input): Promise<ServiceRequestCreatedDto> {
-      const company = await homeownerRepository.company(ctx.db, source.companyId);
+      const company = await findCompanyContact(ctx.db, source.companyId);
       const { row, mailId } = await ctx.db.transaction(async (tx) => {
         const appliance = await repo.applianceContext(tx, source.companyId, source.applianceId);
         if (!appliance) throw notFound('Appliance');

@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import type { DbOrTx } from '../../db/client';
 import { HttpError, notFound } from '../../lib/http-error';
 import { SHARE_LINK_GONE_CODES, shareLinkGoneMessage } from '../../../shared/glossary/share-links';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
+import { findCompanyContact } from '../../core/tenant-finders';
 import { shareLinksRepository as repo } from './share-links.repository';
 
 export const hashShareToken = (token: string) => crypto.createHash('sha256').update(token).digest('hex');
@@ -17,7 +17,7 @@ export async function resolveShareToken(db: DbOrTx, token: string) {
   if (!row) throw notFound('Share link');
   const why = row.revokedAt ? 'revoked' : row.expiresAt <= new Date() ? 'expired' : null;
   if (why) {
-    const company = await homeownerRepository.company(db, row.companyId);
+    const company = await findCompanyContact(db, row.companyId);
     throw new HttpError(410, SHARE_LINK_GONE_CODES[why], shareLinkGoneMessage(why, company));
   }
   return row;

@@ -2,9 +2,9 @@ import crypto from 'node:crypto';
 import type { AppContext } from '../../context';
 import { notFound } from '../../lib/http-error';
 import type { CreatedShareLinkDto, ShareLinkDto } from '../../../shared/schemas/homeowner';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { buildHomeownerView } from '../homeowner/homeowner-view';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
+import { buildHomeownerView } from '../homeowner';
 import { shareLinksRepository as repo } from './share-links.repository';
 import { hashShareToken as hash, resolveShareToken } from './resolve-share-token';
 

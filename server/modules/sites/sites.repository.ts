@@ -1,6 +1,6 @@
-import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
-import { memberships, sites, users } from '../../db/schema/index';
+import { sites, users } from '../../db/schema/index';
 import type { SiteDto } from '../../../shared/schemas/records';
 
 type NewSite = Omit<typeof sites.$inferInsert, 'id'>;
@@ -49,12 +49,4 @@ export const sitesRepository = {
       .orderBy(asc(sites.street), asc(sites.id));
   },
   /** An active member of the company (anyone who can be sent out), or null. */
-  async findActiveMember(db: DbOrTx, companyId: string, userId: string) {
-    const [row] = await db
-      .select({ userId: memberships.userId })
-      .from(memberships)
-      .where(and(eq(memberships.companyId, companyId), eq(memberships.userId, userId), isNull(memberships.deactivatedAt)))
-      .limit(1);
-    return row ?? null;
-  },
 };

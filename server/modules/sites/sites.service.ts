@@ -4,15 +4,15 @@ import type { DbOrTx } from '../../db/client';
 import { notFound, validationFailed } from '../../lib/http-error';
 import type { siteInput, sitePatch } from '../../../shared/schemas/records';
 import type { Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
-import { customersRepository } from '../customers/customers.repository';
+import { recordAudit } from '../../core/audit-log';
+import { findActiveMember, findCustomer } from '../../core/tenant-finders';
 import { sitesRepository } from './sites.repository';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
 async function checkTechnician(db: DbOrTx, companyId: string, userId: string | null | undefined) {
   if (!userId) return;
-  if (!(await sitesRepository.findActiveMember(db, companyId, userId))) {
+  if (!(await findActiveMember(db, companyId, userId))) {
     throw validationFailed({ assignedTechnicianId: ['Pick a technician from your company.'] });
   }
 }
@@ -21,7 +21,7 @@ export function sitesService(ctx: AppContext) {
   return {
     async create(actor: Member, input: z.output<typeof siteInput>) {
       return ctx.db.transaction(async (tx) => {
-        if (!(await customersRepository.find(tx, actor.companyId, input.customerId))) {
+        if (!(await findCustomer(tx, actor.companyId, input.customerId))) {
           throw validationFailed({ customerId: ['Pick a customer of your company.'] });
         }
         await checkTechnician(tx, actor.companyId, input.assignedTechnicianId);

@@ -71,16 +71,6 @@ export const tagsRepository = {
     const [row] = await db.update(tags).set(values).where(eq(tags.id, id)).returning();
     return row;
   },
-  async findAppliance(db: DbOrTx, companyId: string, applianceId: string, options: { forUpdate?: boolean } = {}) {
-    const query = db
-      .select({ id: appliances.id, customerId: sites.customerId })
-      .from(appliances)
-      .innerJoin(sites, eq(sites.id, appliances.siteId))
-      .where(and(eq(appliances.companyId, companyId), eq(appliances.id, applianceId)))
-      .limit(1);
-    const [row] = options.forUpdate ? await query.for('update', { of: appliances }) : await query;
-    return row ?? null;
-  },
   async applianceOwnedBy(db: DbOrTx, companyId: string, applianceId: string, customerIds: string[]) {
     if (!customerIds.length) return false;
     const [row] = await db

@@ -5,7 +5,7 @@ import { defineRoute } from '../../lib/route';
 import { currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
 import { arriveByTagInput, tagAssignInput, tagBatchInput, tagCodeParam } from '../../../shared/schemas/tags';
-import { visitsService } from '../visits/visits.service';
+import { visitsService } from '../visits';
 import { tagsService } from './tags.service';
 
 export function tagsRoutes(ctx: AppContext) {

@@ -3,10 +3,11 @@ import { conflict, HttpError, notFound } from '../../lib/http-error';
 import { formatTagCode, generateTagCode } from '../../../shared/tags/tag-code';
 import type { Principal } from '../../../shared/schemas/roles';
 import type { PublicTagDto, TagBatchDto, TagDto, TagFormatId, TagResolutionDto } from '../../../shared/schemas/tags';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
 import { renderTagSheetPdf } from './tag-sheet-pdf';
 import { tagsRepository as repo, type TagRow } from './tags.repository';
+import { findAppliance } from '../../core/tenant-finders';
 
 type Member = Extract<Principal, { kind: 'member' }>;
 
@@ -60,7 +61,7 @@ export function tagsService(ctx: AppContext, generate: () => string = generateTa
       return ctx.db.transaction(async (tx) => {
         const tag = await repo.findByCode(tx, input.code, { forUpdate: true });
         if (!tag || tag.companyId !== actor.companyId) throw notFound('Tag');
-        const appliance = await repo.findAppliance(tx, actor.companyId, input.applianceId, { forUpdate: true });
+        const appliance = await findAppliance(tx, actor.companyId, input.applianceId, { forUpdate: true });
         if (!appliance) throw notFound('Appliance');
         if (tag.status === 'assigned') {
           const where = tag.applianceId === appliance.id ? 'this appliance' : 'another appliance';
@@ -103,7 +104,7 @@ export function tagsService(ctx: AppContext, generate: () => string = generateTa
     },
 
     async listForAppliance(actor: Member, applianceId: string): Promise<TagDto[]> {
-      if (!(await repo.findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
+      if (!(await findAppliance(ctx.db, actor.companyId, applianceId))) throw notFound('Appliance');
       return (await repo.tagsOf(ctx.db, actor.companyId, applianceId)).map(tagDto);
     },
 

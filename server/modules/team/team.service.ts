@@ -3,7 +3,7 @@ import { badRequest, forbidden, notFound } from '../../lib/http-error';
 import { canManageMemberRole } from '../../../shared/policy';
 import type { MemberDto } from '../../../shared/schemas/company';
 import type { MemberRole, Principal } from '../../../shared/schemas/roles';
-import { recordAudit } from '../audit/audit.repository';
+import { recordAudit } from '../../core/audit-log';
 import { teamRepository } from './team.repository';
 
 type Member = Extract<Principal, { kind: 'member' }>;

@@ -1,4 +1,4 @@
-import type { VisitRow } from '../visits/visits.repository';
+import type { VisitRow } from '../visits';
 
 type Amendment = { reason: string; changes: Record<string, unknown> };
 type Outcome = { outcome?: VisitRow['outcome']; outcomeReason?: string | null };

@@ -4,13 +4,13 @@ import { LABELS } from '../../../shared/schemas/enums';
 import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { addMonths } from '../../../shared/trade/iso-date';
 import { readingMeanings, type ReadingMeaning, type StoredResults } from '../../../shared/visits/reading-meanings';
-import { loadApplianceRecord } from '../appliances/appliance-record';
-import { wholeYearsBetween } from '../appliances/appliance-age';
-import { homeownerRepository } from '../homeowner/homeowner.repository';
-import { typeLabelFor } from '../due/type-label';
-import { visitsRepository } from '../visits/visits.repository';
+import { loadApplianceRecord } from '../appliances';
+import { wholeYearsBetween } from '../appliances';
+import { typeLabelFor } from '../../core/type-label';
+import { findVisit, visitUserNames, swapsOfVisit, amendmentsOfVisit } from '../visits';
 import { visitAsCorrected } from './visit-as-corrected';
 import { outcomeWords } from '../../../shared/glossary/outcomes';
+import { findCompanyContact } from '../../core/tenant-finders';
 
 export type VisitReport = {
   company: { name: string; phone: string };
@@ -55,14 +55,14 @@ const unsafeSteps = (company: { name: string; phone: string }) => [
  * fields (checklist notes included) can never slip through. Only completed visits have a report.
  */
 export async function loadVisitReport(db: DbOrTx, companyId: string, visitId: string): Promise<VisitReport> {
-  const stored = await visitsRepository.findVisit(db, companyId, visitId);
+  const stored = await findVisit(db, companyId, visitId);
   if (!stored || stored.status !== 'completed') throw notFound('Visit report');
-  const visit = visitAsCorrected(stored, await visitsRepository.amendmentsOfVisit(db, companyId, visitId));
+  const visit = visitAsCorrected(stored, await amendmentsOfVisit(db, companyId, visitId));
   const [record, company, swaps, names] = await Promise.all([
     loadApplianceRecord(db, companyId, visit.applianceId),
-    homeownerRepository.company(db, companyId),
-    visitsRepository.swapsOfVisit(db, companyId, visit.id),
-    visitsRepository.userNames(db, visit.technicianIds),
+    findCompanyContact(db, companyId),
+    swapsOfVisit(db, companyId, visit.id),
+    visitUserNames(db, visit.technicianIds),
   ]);
   const a = record.appliance;
   const byId = new Map(record.components.map((c) => [c.id, c]));

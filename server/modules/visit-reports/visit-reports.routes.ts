@@ -4,7 +4,7 @@ import { defineRoute } from '../../lib/route';
 import { currentHomeowner, currentMember } from '../../middleware/authenticate';
 import { uuidParam } from '../../../shared/schemas/common';
 import { homeownerVisitParams, shareVisitParams } from '../../../shared/schemas/homeowner';
-import { requireOwnAppliance } from '../homeowner/own-appliance';
+import { requireOwnAppliance } from '../homeowner';
 import { visitReportsService, type ReportPdf } from './visit-reports.service';
 
 export function sendPdf(res: Response, { pdf, filename }: ReportPdf) {

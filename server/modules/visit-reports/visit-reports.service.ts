@@ -4,10 +4,10 @@ import type { DbOrTx, Tx } from '../../db/client';
 import { conflict, notFound } from '../../lib/http-error';
 import { COMPANY_MAIL_HEADER } from '../../lib/mailer';
 import { mailDelivery, type MailDelivery } from '../../../shared/schemas/mail';
-import { recordAudit } from '../audit/audit.repository';
-import { unsubscribeUrls } from '../reminders/deliver-reminders';
-import { hashShareToken, resolveShareToken } from '../share-links/resolve-share-token';
-import { shareLinksRepository } from '../share-links/share-links.repository';
+import { recordAudit } from '../../core/audit-log';
+import { unsubscribeUrls } from '../reminders';
+import { hashShareToken, resolveShareToken } from '../share-links';
+import { insertShareLink } from '../share-links';
 import { loadVisitReport, type VisitReport } from './visit-report-content';
 import { visitReportHtml, visitReportSubject, visitReportText } from './visit-report-mail';
 import { renderVisitReportPdf, visitReportFilename } from './visit-report-pdf';
@@ -37,7 +37,7 @@ export async function queueVisitReportMail(ctx: AppContext, tx: Tx, actor: Membe
     return { skipped };
   }
   const token = crypto.randomBytes(32).toString('base64url');
-  const link = await shareLinksRepository.insert(tx, {
+  const link = await insertShareLink(tx, {
     companyId: actor.companyId,
     applianceId: recipient.applianceId,
     tokenHash: hashShareToken(token),

@@ -4,10 +4,10 @@ import { conflict, forbidden, notFound, validationFailed } from '../../lib/http-
 import { can } from '../../../shared/policy';
 import { FORM_ERROR_KEY } from '../../../shared/schemas/errors';
 import type { amendmentInput } from '../../../shared/schemas/visits';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { companyToday } from '../due/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
+import { companyToday } from '../../core/company-today';
+import { recomputeDueForAppliance } from '../due';
 import { alertsOf, outcomeRequirements, requirementDetails } from '../../../shared/visits/completion-requirements';
 import { mergeChecklist, mergeReadings } from './visit-draft';
 import { resultsToStore, type VisitResults } from './visit-results';
@@ -33,7 +33,7 @@ export async function amendVisit(tx: Tx, actor: Member, visitId: string, input: 
   if (!visit) throw notFound('Visit');
   if (visit.status !== 'completed') throw conflict('A draft visit is edited, not amended.');
   assertMayAmend(actor, visit);
-  const appliance = await visitsRepository.findAppliance(tx, actor.companyId, visit.applianceId);
+  const appliance = await visitsRepository.applianceReadingFacts(tx, actor.companyId, visit.applianceId);
   if (!appliance) throw notFound('Appliance');
 
   const { reason, swaps: swapCorrections, ...corrected } = input;

@@ -5,8 +5,8 @@ import type { ReadingsInput } from '../../../shared/schemas/visits';
 import { componentTypesForChecklistKey } from './checklist-components';
 import { keyReadings, type VisitResults } from './visit-results';
 import { visitsRepository, type VisitRow } from './visits.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { typeLabelFor } from '../due/type-label';
+import { appendTimelineEvent } from '../../core/timeline';
+import { typeLabelFor } from '../../core/type-label';
 import { outcomeInSentence } from '../../../shared/glossary/outcomes';
 
 type Finding = { inspected: boolean; failedNote: string | null };

@@ -1,8 +1,8 @@
 import type { DbOrTx } from '../../db/client';
 import type { ReadingKey, ReadingsInput, VisitDto } from '../../../shared/schemas/visits';
-import { typeLabelFor } from '../due/type-label';
+import { typeLabelFor } from '../../core/type-label';
 import { isOutcomeRequired, type VisitResults } from '../../../shared/visits/visit-results';
-import { transferProvenance } from '../record-transfers/transfer-provenance';
+import { transferProvenance } from '../record-transfers';
 import { visitsRepository, type VisitRow } from './visits.repository';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);

@@ -12,7 +12,7 @@ export async function lockDraft(tx: Tx, companyId: string, visitId: string) {
   const visit = await visitsRepository.findVisit(tx, companyId, visitId, { forUpdate: true });
   if (!visit) throw notFound('Visit');
   if (visit.status === 'completed') throw conflict(COMPLETED_IS_AMENDED);
-  const appliance = await visitsRepository.findAppliance(tx, companyId, visit.applianceId);
+  const appliance = await visitsRepository.applianceReadingFacts(tx, companyId, visit.applianceId);
   if (!appliance) throw notFound('Appliance');
   return { visit, appliance };
 }

@@ -4,11 +4,11 @@ import { badRequest, notFound, validationFailed } from '../../lib/http-error';
 import type { swapInput } from '../../../shared/schemas/visits';
 import { COMPONENT_TYPES, formatSpec, type ComponentType } from '../../../shared/trade/component-types';
 import { TradeInputError } from '../../../shared/trade/trade-input-error';
-import { recordAudit } from '../audit/audit.repository';
-import { appendTimelineEvent } from '../timeline/timeline.repository';
-import { companyToday } from '../due/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
-import { typeLabelFor } from '../due/type-label';
+import { recordAudit } from '../../core/audit-log';
+import { appendTimelineEvent } from '../../core/timeline';
+import { companyToday } from '../../core/company-today';
+import { recomputeDueForAppliance } from '../due';
+import { typeLabelFor } from '../../core/type-label';
 import { lockDraft, type Member } from './visit-lock';
 import { visitsRepository } from './visits.repository';
 

@@ -17,7 +17,7 @@ export type VisitRow = typeof visits.$inferSelect;
 export type ComponentRow = typeof components.$inferSelect;
 
 export const visitsRepository = {
-  async findAppliance(db: DbOrTx, companyId: string, id: string) {
+  async applianceReadingFacts(db: DbOrTx, companyId: string, id: string) {
     const [row] = await db
       .select({
         id: appliances.id,

@@ -1,12 +1,12 @@
-import { assertBookingCovers, markBookingDoneIfVisited } from '../bookings/booking-visits';
+import { assertBookingCovers, markBookingDoneIfVisited } from '../bookings';
 import type { z } from 'zod';
 import type { AppContext } from '../../context';
 import type { Tx } from '../../db/client';
 import { conflict, notFound, validationFailed } from '../../lib/http-error';
 import type { VisitDto, visitStartInput } from '../../../shared/schemas/visits';
-import { recordAudit } from '../audit/audit.repository';
-import { companyToday } from '../due/company-today';
-import { recomputeDueForAppliance } from '../due/due.repository';
+import { recordAudit } from '../../core/audit-log';
+import { companyToday } from '../../core/company-today';
+import { recomputeDueForAppliance } from '../due';
 import { appendCompletionEvents, applyFindingsToComponents } from './visit-completion';
 import { mergeDraft, type DraftFields } from './visit-draft';
 import { loadVisitDto } from './visit-dto';
@@ -15,9 +15,9 @@ import { amendVisit, type AmendmentFields } from './visit-amendments';
 import { swapPart, type SwapFields } from './visit-swaps';
 import { visitsRepository, type VisitRow } from './visits.repository';
 import { lockDraft, type Member } from './visit-lock';
-import { findTemplateFor } from '../checklists/checklists.repository';
+import { findTemplateFor } from '../checklists';
 import { requiredReadingsFor } from '../../../shared/visits/required-readings';
-import { queueVisitReportMail } from '../visit-reports/visit-reports.service';
+import { queueVisitReportMail } from '../visit-reports';
 
 type StartFields = z.output<typeof visitStartInput>;
 
@@ -45,7 +45,7 @@ export function visitsService(ctx: AppContext) {
     /** Idempotent per appliance and technician: a retried tap gets the draft the first tap made. */
     async start(actor: Member, input: StartFields): Promise<VisitDto> {
       const visit = await ctx.db.transaction(async (tx) => {
-        const appliance = await visitsRepository.findAppliance(tx, actor.companyId, input.applianceId);
+        const appliance = await visitsRepository.applianceReadingFacts(tx, actor.companyId, input.applianceId);
         if (!appliance) throw notFound('Appliance');
         await visitsRepository.lockStart(tx, appliance.id, actor.userId);
         if (input.id) {

@@ -1,5 +1,5 @@
-import type { DbOrTx } from '../../db/client';
-import { auditLog } from '../../db/schema/index';
+import type { DbOrTx } from '../db/client';
+import { auditLog } from '../db/schema/index';
 
 export async function recordAudit(
   db: DbOrTx,

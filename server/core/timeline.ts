@@ -1,8 +1,8 @@
 import { and, desc, eq, lt, or } from 'drizzle-orm';
-import type { DbOrTx } from '../../db/client';
-import { timelineEvents, users } from '../../db/schema/index';
-import type { TimelineKind } from '../../../shared/schemas/enums';
-import type { TimelineEventDto } from '../../../shared/schemas/records';
+import type { DbOrTx } from '../db/client';
+import { timelineEvents, users } from '../db/schema/index';
+import type { TimelineKind } from '../../shared/schemas/enums';
+import type { TimelineEventDto } from '../../shared/schemas/records';
 
 export type NewTimelineEvent = {
   companyId: string;
