@@ -131,4 +131,18 @@ describe('the outbox', () => {
     expect(always409).toHaveLength(2);
     expect(box.getSnapshot().entries[0].refusal).toMatchObject({ status: 409, message: 'Changed elsewhere.' });
   });
+
+  it('waits, keeping its key, while the server says the same key’s first request is still running', async () => {
+    const sent = server((_req, n) => (n === 0 ? json({ error: { code: 'idempotency_key_in_progress', message: 'Still working on it.' } }, 409) : json({})));
+    const onConflict = vi.fn(async () => null);
+    const box = outboxOn(freshStore(), { onConflict });
+    await box.add(entry('v1', 'swap'));
+    box.start();
+    await vi.waitFor(() => expect(sent).toHaveLength(1));
+    expect(box.getSnapshot().entries.map((e) => e.state)).toEqual(['waiting']);
+    box.retryNow();
+    await vi.waitFor(() => expect(box.getSnapshot().entries).toEqual([]));
+    expect(sent.map((s) => s.key)).toEqual([sent[0].key, sent[0].key]);
+    expect(onConflict).not.toHaveBeenCalled();
+  });
 });

@@ -50,7 +50,10 @@ export type OutboxHandlers = {
 
 const RETRY_MS = [2_000, 5_000, 10_000, 20_000, 30_000];
 
-const offlineOrServerTrouble = (e: unknown) => e instanceof ApiError && (e.offline || e.status >= 500 || e.status === 401 || e.status === 408 || e.status === 429);
+// Also the server's 409 "this key's first request is still running" (a retry that overtook the lost first try):
+// waiting is right, a new key would run the write twice.
+const offlineOrServerTrouble = (e: unknown) =>
+  e instanceof ApiError && (e.offline || e.status >= 500 || e.status === 401 || e.status === 408 || e.status === 429 || e.code === 'idempotency_key_in_progress');
 
 export class Outbox {
   private list: OutboxEntry[] = [];
