@@ -9,11 +9,13 @@ export function OfflineBanner() {
   const { pathname } = useLocation();
   const refused = snapshot.entries.filter((e) => e.state === 'refused').length;
   const waiting = snapshot.entries.length - refused;
-  if (online && snapshot.entries.length === 0) return null;
+  if ((online || pathname === '/round') && snapshot.entries.length === 0) return null;
   const onWaitingPage = pathname === '/waiting';
+  // The round says it itself, with the time its records were saved.
+  const sayNoSignal = !online && pathname !== '/round';
   return (
     <div role="status" className="no-print mx-auto mt-2 flex max-w-5xl flex-col gap-1 px-3 sm:px-6" data-offline-banner>
-      {!online && (
+      {sayNoSignal && (
         <p className="rounded-plate bg-iron px-3 py-2 font-semibold text-plate">
           No signal. This phone shows what it saved; what you record is kept here and sent when signal returns.
         </p>
