@@ -50,11 +50,19 @@ export function keepQueriesSaved(queryClient: QueryClient, userId: string): () =
       timer ??= setTimeout(save, SAVE_AFTER_MS);
     }
   });
+  // Leaving the page (a link out, a reload, the phone locking) must not lose the last second's answers.
+  const flush = () => {
+    if (!timer) return;
+    clearTimeout(timer);
+    save();
+  };
+  const onHidden = () => document.visibilityState === 'hidden' && flush();
+  window.addEventListener('pagehide', flush);
+  document.addEventListener('visibilitychange', onHidden);
   return () => {
     unsubscribe();
-    if (timer) {
-      clearTimeout(timer);
-      save();
-    }
+    window.removeEventListener('pagehide', flush);
+    document.removeEventListener('visibilitychange', onHidden);
+    flush();
   };
 }
