@@ -19,7 +19,7 @@ import { recordAudit } from '../../core/audit-log';
 import { appendTimelineEvent } from '../../core/timeline';
 import { bookingDtos, loadList } from './booking-dto';
 import { bookingsRepository as repo, type BookingRow } from './bookings.repository';
-import { isExclusionViolation } from './pg-error';
+import { isDeadlock, isExclusionViolation } from './pg-error';
 import { queueBookingNotice, type QueuedNotice } from '../booking-notices';
 
 type Member = Extract<Principal, { kind: 'member' }>;
@@ -86,10 +86,19 @@ export function bookingsService(ctx: AppContext) {
 
   /** Runs a write that may overlap another booking; the database's exclusion constraint is the judge. */
   async function guarded<T>(timeZone: string, technicianId: string, startsAt: Date, endsAt: Date, exceptId: string | undefined, write: (tx: Tx) => Promise<T>) {
+    const attempt = async (): Promise<T> => {
+      try {
+        return await ctx.db.transaction(write);
+      } catch (err) {
+        if (isExclusionViolation(err)) throw await clashError(ctx.db, timeZone, technicianId, startsAt, endsAt, exceptId);
+        throw err;
+      }
+    };
     try {
-      return await ctx.db.transaction(write);
+      return await attempt();
     } catch (err) {
-      if (isExclusionViolation(err)) throw await clashError(ctx.db, timeZone, technicianId, startsAt, endsAt, exceptId);
+      // Cancelled by PostgreSQL's deadlock detector while racing a clashing booking: once more decides which it is.
+      if (isDeadlock(err)) return attempt();
       throw err;
     }
   }
