@@ -5,7 +5,8 @@ import { PHONE, screenshotDir, signInAsMember, useBrowserFixture } from '../supp
 import { insertAppliance, insertSite } from '../../server/db/factories/records';
 import { insertBooking } from '../../server/db/factories/bookings';
 import { insertMember } from '../../server/db/factories/users';
-import { idempotencyKeys, partSwaps, visits } from '../../server/db/schema/index';
+import { idempotencyKeys, partSwaps, photos, visits } from '../../server/db/schema/index';
+import { phoneJpegWithGps } from '../support/images';
 import { todayInTimeZone } from '../../shared/dates';
 
 /*
@@ -129,6 +130,12 @@ describe('the technician’s phone with no signal', () => {
     const count = await fillTuneUp(page);
     await swapThermocouple(page);
     await page.getByText('Saved on this phone — will send when signal returns').waitFor();
+    // A photo with no signal: kept on the phone as a file, sent in its turn.
+    const photoSection = page.getByRole('region', { name: 'Photos' });
+    const fold = photoSection.locator('summary');
+    if (await fold.count()) await fold.first().click();
+    await photoSection.getByLabel('Choose files').setInputFiles([{ name: 'flue-collar.jpg', mimeType: 'image/jpeg', buffer: await phoneJpegWithGps() }]);
+    await photoSection.getByText('No signal: 1 photo kept on this phone, sent by itself when signal returns.').waitFor();
     await page.getByRole('button', { name: 'Complete visit' }).click();
     await page.getByRole('note').filter({ hasText: 'Finished on this phone' }).waitFor();
     await page.screenshot({ path: `${screenshotDir()}/offline-finished-360.png` });
@@ -136,11 +143,11 @@ describe('the technician’s phone with no signal', () => {
     // A reload with no signal (a closed tab, a phone restart) keeps all of it, in order.
     await page.reload();
     await page.getByRole('note').filter({ hasText: 'Finished on this phone' }).waitFor();
-    await page.getByText('3 changes waiting to send.').waitFor();
+    await page.getByText('4 changes waiting to send.').waitFor();
     await page.getByRole('link', { name: 'See what is waiting' }).click();
     const waiting = page.getByRole('list').filter({ hasText: 'Start the visit' });
     const labels = await waiting.locator('h2, h3').allTextContents();
-    expect(labels.map((l) => l.split(' · ')[0])).toEqual(['Start the visit', 'thermocouple replaced', 'Finish the visit']);
+    expect(labels.map((l) => l.split(' · ')[0])).toEqual(['Start the visit', 'thermocouple replaced', '1 photo', 'Finish the visit']);
     expect(await visitsOf(boiler.id)).toEqual([]);
 
     await context.setOffline(false);
@@ -154,7 +161,10 @@ describe('the technician’s phone with no signal', () => {
     expect(stored[0].bookingId).not.toBeNull();
     const swaps = await fx.server.ctx.db.select().from(partSwaps).where(eq(partSwaps.applianceId, boiler.id));
     expect(swaps.map((s) => [s.visitId, s.cause, s.reason])).toEqual([[visitId, 'wear_or_failure', 'pilot drops out']]);
-    // Each replayed write carried its own key, kept by the server with the answer it gave.
+    const storedPhotos = await fx.server.ctx.db.select().from(photos).where(eq(photos.visitId, visitId));
+    expect(storedPhotos).toHaveLength(1);
+    // Each replayed JSON write carried its own key, kept by the server with the answer it gave (a photo needs none: the
+    // server stores a file once per record, by its SHA-256).
     const keys = await fx.server.ctx.db.select().from(idempotencyKeys).where(eq(idempotencyKeys.userId, technicianId));
     expect(keys.filter((k) => k.path.includes(visitId) || k.path.endsWith('/visits')).length).toBeGreaterThanOrEqual(3);
 

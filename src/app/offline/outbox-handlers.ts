@@ -10,6 +10,11 @@ const isVisit = (v: unknown): v is VisitDto => Boolean(v && typeof v === 'object
 export function outboxHandlers(queryClient: QueryClient): OutboxHandlers {
   return {
     onSent: (entry, response) => {
+      if (entry.kind === 'photos') {
+        const applianceId = entry.request.form?.fields.applianceId;
+        if (applianceId) void queryClient.invalidateQueries({ queryKey: applianceKeys.record(applianceId) });
+        return;
+      }
       if (!isVisit(response)) return;
       queryClient.setQueryData(['visit', response.id], response);
       if (entry.kind === 'visit-complete') {

@@ -8,9 +8,19 @@ import { api, ApiError, type FieldErrors } from '@/lib/api-client';
  * was lost is answered again from the server's store rather than made twice.
  */
 
-export type OutboxKind = 'visit-start' | 'visit-complete' | 'part-swap';
+export type OutboxKind = 'visit-start' | 'visit-complete' | 'part-swap' | 'photos';
 
-export type OutboxRequest = { method: 'POST' | 'PUT'; path: string; body: unknown };
+/** A multipart request kept whole: its text fields and its files as Blobs (IndexedDB stores them as they are). */
+export type OutboxForm = { fields: Record<string, string>; files: { field: string; blob: Blob; name: string }[] };
+
+export type OutboxRequest = { method: 'POST' | 'PUT'; path: string; body: unknown; form?: OutboxForm };
+
+function formData({ fields, files }: OutboxForm) {
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) form.append(name, value);
+  for (const f of files) form.append(f.field, f.blob, f.name);
+  return form;
+}
 
 export type OutboxEntry = {
   /** Order of sending: the time it was queued, in microseconds, made unique. */
@@ -197,7 +207,7 @@ export class Outbox {
     try {
       const response = await api<unknown>(entry.request.path, {
         method: entry.request.method,
-        body: entry.request.body,
+        body: entry.request.form ? formData(entry.request.form) : entry.request.body,
         headers: { 'Idempotency-Key': entry.idempotencyKey },
       });
       await del(entry.seq, this.store);

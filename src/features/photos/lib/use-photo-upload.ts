@@ -1,5 +1,7 @@
 import { useRef, useState } from 'react';
+import { onlineManager } from '@tanstack/react-query';
 import { ApiError, type FieldErrors } from '@/lib/api-client';
+import { currentOutbox } from '@/lib/offline/offline-session';
 import { MAX_PHOTO_FILES, type PhotoKind } from '@shared/schemas/photos';
 import { useUploadPhotos, type UploadBatch } from '../api/upload-photos';
 import { namedUniquely, rejectionsFrom, savedSummary, splitOversized, type Rejection } from './upload-batch';
@@ -27,11 +29,39 @@ export function usePhotoUpload(applianceId: string, visitId?: string) {
   const [state, setState] = useState<UploadState>(IDLE);
   const sending = useRef<AbortController | null>(null);
 
+  /** No signal (or the visit itself still waits to send): the photos wait in the outbox, as files, in order. */
+  async function keepForLater(batch: UploadBatch, refusedHere: Rejection[]): Promise<boolean> {
+    const outbox = currentOutbox();
+    if (!outbox) return false;
+    const fields: Record<string, string> = { applianceId: batch.applianceId, kind: batch.kind };
+    if (batch.visitId) fields.visitId = batch.visitId;
+    if (batch.caption.trim()) fields.caption = batch.caption.trim();
+    await outbox.add({
+      kind: 'photos',
+      visitId: batch.visitId ?? null,
+      label: `${photos(batch.items.length)}${batch.caption.trim() ? ` · ${batch.caption.trim()}` : ''}`,
+      request: { method: 'POST', path: '/photos', body: undefined, form: { fields, files: batch.items.map((i) => ({ field: 'files', blob: i.file, name: i.name })) } },
+    });
+    setState({
+      ...IDLE,
+      phase: 'saved',
+      count: batch.items.length,
+      percent: 100,
+      summary: `No signal: ${photos(batch.items.length)} kept on this phone, sent by itself when signal returns.`,
+      rejected: refusedHere,
+    });
+    return true;
+  }
+
   async function send(batch: UploadBatch, refusedHere: Rejection[] = []): Promise<boolean> {
     if (!batch.items.length) {
       setState({ ...IDLE, phase: 'failed', error: 'Nothing was sent.', rejected: refusedHere });
       return false;
     }
+    const waitingVisit = batch.visitId ? currentOutbox()?.holds(batch.visitId) : false;
+    // Known to have no signal: straight to the outbox. A send cut off mid-way keeps the files here with "Try again".
+    const noSignal = navigator.onLine === false || !onlineManager.isOnline();
+    if ((noSignal || waitingVisit) && (await keepForLater(batch, refusedHere))) return true;
     setState({ ...IDLE, phase: 'sending', count: batch.items.length, rejected: refusedHere });
     const controller = new AbortController();
     sending.current = controller;
